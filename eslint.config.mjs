@@ -1,0 +1,45 @@
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import importX from 'eslint-plugin-import-x';
+
+/**
+ * House rules (../shared/STYLE.md): no `any`, no import cycles, dependencies point one way
+ * (client, server and seed use shared; shared uses none of them; client features do not import each other).
+ */
+export default tseslint.config(
+  { ignores: ['**/dist/**', '**/node_modules/**', 'data/**', 'server/drizzle/**', 'e2e/artefacts/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    plugins: { 'import-x': importX },
+    rules: {
+      '@typescript-eslint/no-explicit-any': 'error',
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      'import-x/no-cycle': 'error',
+    },
+  },
+  {
+    files: ['shared/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: ['@gramwatt/server*', '@gramwatt/client*', '@gramwatt/seed*', 'node:*', 'fs', 'path'] },
+      ],
+    },
+  },
+  {
+    files: ['client/src/features/*/**/*.{ts,tsx}'],
+    rules: {
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          zones: ['auth', 'locker', 'trips', 'plans', 'party', 'admin', 'outbox'].map((feature) => ({
+            target: `./client/src/features/${feature}`,
+            from: './client/src/features',
+            except: [`./${feature}`],
+          })),
+        },
+      ],
+    },
+  },
+);

@@ -1,0 +1,2 @@
+export * from './auth.js';
+export * from './api-error.js';

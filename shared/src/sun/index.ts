@@ -1,1 +1,1 @@
-export {};
+export * from './trip-solar-types.js';

@@ -1,0 +1,41 @@
+/** Every client route in one place: `path` for the router, `getHref()` for links and redirects. */
+export const paths = {
+  home: {
+    path: '/',
+    getHref: () => '/',
+  },
+  auth: {
+    signIn: {
+      path: '/sign-in',
+      /** `redirectTo` is where to go after signing in; only same-site paths are honoured. */
+      getHref: (redirectTo?: string | null) =>
+        `/sign-in${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
+    },
+    signUp: {
+      path: '/sign-up',
+      getHref: (redirectTo?: string | null) =>
+        `/sign-up${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
+    },
+  },
+  app: {
+    locker: {
+      path: '/locker',
+      getHref: () => '/locker',
+    },
+    trips: {
+      path: '/trips',
+      getHref: () => '/trips',
+    },
+    adminAccounts: {
+      path: '/admin/accounts',
+      getHref: () => '/admin/accounts',
+    },
+  },
+} as const;
+
+/**
+ * Keeps a post-sign-in redirect on this site: a path starting with one `/`, never `//host` or a full URL.
+ * @example safeRedirect('//evil.example') // '/locker'
+ */
+export const safeRedirect = (redirectTo: string | null | undefined): string =>
+  redirectTo && redirectTo.startsWith('/') && !redirectTo.startsWith('//') ? redirectTo : paths.app.locker.getHref();

@@ -1,0 +1,77 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { ZodSerializerInterceptor, ZodValidationPipe } from 'nestjs-zod';
+import { AdminModule } from './admin/admin.module';
+import { tooManyAttemptsMessage } from './auth/auth-messages';
+import { AuthModule } from './auth/auth.module';
+import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
+import { RolesGuard } from './auth/guards/roles.guard';
+import { ClientStaticModule } from './client-static/client-static.module';
+import { ApiExceptionFilter } from './common/api-exception.filter';
+import type { Clock } from './common/clock';
+import { ClockModule } from './common/clock.module';
+import { type AuthConfig, type Env, appConfig, authConfig, databaseConfig } from './config';
+import { DatabaseModule } from './database/database.module';
+import type { Database } from './database/database.types';
+import { HealthModule } from './health/health.module';
+import { UsersModule } from './users/users.module';
+
+export interface AppModuleOptions {
+  /** Environment to read configuration from (default `process.env`). */
+  env?: Env;
+  /** An open database to use instead of opening one from config; the caller closes it. */
+  database?: Database;
+  /** Clock for tokens and timestamps (default the wall clock). */
+  clock?: Clock;
+  /** Serve the built client (default true). */
+  serveClient?: boolean;
+}
+
+/**
+ * The whole server. Global pieces, in order: validation pipe (zod DTOs), response serializer (zod),
+ * the one error filter, then the JWT guard (every route unless `@Public()`) and the roles guard.
+ */
+@Module({})
+export class AppModule {
+  static forRoot(options: AppModuleOptions = {}): DynamicModule {
+    const env = options.env ?? process.env;
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot({
+          isGlobal: true,
+          cache: true,
+          ignoreEnvFile: true,
+          ignoreEnvVars: true,
+          load: [appConfig(env), authConfig(env), databaseConfig(env)],
+        }),
+        ClockModule.forRoot(options.clock),
+        DatabaseModule.forRoot({ database: options.database }),
+        ThrottlerModule.forRootAsync({
+          inject: [ConfigService],
+          useFactory: (config: ConfigService) => {
+            const auth = config.getOrThrow<AuthConfig>('auth');
+            return {
+              throttlers: [{ name: 'auth', ttl: auth.rateWindowS * 1000, limit: auth.rateLimit }],
+              errorMessage: tooManyAttemptsMessage,
+            };
+          },
+        }),
+        UsersModule,
+        AuthModule,
+        AdminModule,
+        HealthModule,
+        ...(options.serveClient === false ? [] : [ClientStaticModule]),
+      ],
+      providers: [
+        { provide: APP_PIPE, useClass: ZodValidationPipe },
+        { provide: APP_INTERCEPTOR, useClass: ZodSerializerInterceptor },
+        { provide: APP_FILTER, useClass: ApiExceptionFilter },
+        { provide: APP_GUARD, useClass: JwtAuthGuard },
+        { provide: APP_GUARD, useClass: RolesGuard },
+      ],
+    };
+  }
+}

@@ -1,1 +1,1 @@
-export {};
+export * from './device-demand.js';

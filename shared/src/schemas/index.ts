@@ -1,2 +1,6 @@
 export * from './auth.js';
 export * from './api-error.js';
+export * from './ports.js';
+export * from './items.js';
+export * from './devices.js';
+export * from './kit.js';

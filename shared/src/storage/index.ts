@@ -1,1 +1,1 @@
-export {};
+export * from './bank.js';

@@ -4,3 +4,4 @@ export * from './ports.js';
 export * from './items.js';
 export * from './devices.js';
 export * from './kit.js';
+export * from './trip-solar.js';

@@ -1,1 +1,2 @@
-export {};
+export * from './daily-air-temperature.js';
+export * from './cell-temperature.js';

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, redirect, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, redirect, type LoaderFunction, type RouteObject } from 'react-router-dom';
 import type { ComponentType } from 'react';
 import { RootRouteError, RouteError } from '@/components/errors/route-error';
 import { PageSpinner } from '@/components/ui/spinner';
@@ -42,7 +42,11 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
         // Errors inside a page keep the navigation around them.
         errorElement: <RouteError />,
         children: [
-          { index: true, loader: () => redirect(paths.app.locker.getHref()) },
+          {
+            index: true,
+            loader: () => redirect(paths.app.locker.getHref()),
+            element: <Navigate to={paths.app.locker.getHref()} replace />,
+          },
           { path: paths.app.locker.path, lazy: () => import('./routes/app/locker').then(convert(queryClient)) },
           { path: paths.app.trips.path, lazy: () => import('./routes/app/trips').then(convert(queryClient)) },
           {

@@ -73,7 +73,10 @@ const toApiError = async (response: Response): Promise<ApiError> => {
  * It does nothing else: no redirects, no notices — callers decide what an error means.
  * @example await apiRequest<{ account: Account }>('/auth/me')
  */
-export const apiRequest = async <T>(path: string, { method = 'GET', body, signal }: RequestOptions = {}): Promise<T> => {
+export const apiRequest = async <T>(
+  path: string,
+  { method = 'GET', body, signal }: RequestOptions = {},
+): Promise<T> => {
   // Absolute against the page's origin, so the same code runs in the browser and in tests.
   const url = new URL(`${env.apiUrl}${path}`, window.location.origin);
   let response: Response;

@@ -6,7 +6,8 @@ export const queryConfig = {
     refetchOnWindowFocus: false,
     staleTime: 60_000,
     // A 4xx will not change on retry; a network blip or a 5xx might.
-    retry: (failureCount, error) => !(isApiError(error) && error.statusCode >= 400 && error.statusCode < 500) && failureCount < 2,
+    retry: (failureCount, error) =>
+      !(isApiError(error) && error.statusCode >= 400 && error.statusCode < 500) && failureCount < 2,
   },
 } satisfies DefaultOptions;
 

@@ -10,10 +10,15 @@ interface Explained {
 
 const explain = (error: unknown): Explained => {
   if (isRouteErrorResponse(error)) {
-    if (error.status === 404) return { title: 'Not found', message: 'There is nothing at this address, or it is not yours to see.' };
-    if (error.status === 403) return { title: 'Not for your account', message: 'This page needs a role your account does not have.' };
+    if (error.status === 404)
+      return { title: 'Not found', message: 'There is nothing at this address, or it is not yours to see.' };
+    if (error.status === 403)
+      return { title: 'Not for your account', message: 'This page needs a role your account does not have.' };
     const data: unknown = error.data;
-    const detail = data && typeof data === 'object' && 'message' in data && typeof data.message === 'string' ? data.message : error.statusText;
+    const detail =
+      data && typeof data === 'object' && 'message' in data && typeof data.message === 'string'
+        ? data.message
+        : error.statusText;
     return { title: 'Something went wrong', message: detail || `The page answered ${error.status}.` };
   }
   return {

@@ -26,8 +26,8 @@ export function AuthLayout({ title, headingId, children, footer }: AuthLayoutPro
             Enough charge for every day out, and not a gram more.
           </p>
           <p className="mt-3 hidden text-scree-200 sm:block">
-            Gramwatt picks the panels, banks and leads from your own gear that keep your radio and phone going
-            through the cloudy days — and tells you what each extra margin weighs.
+            Gramwatt picks the panels, banks and leads from your own gear that keep your radio and phone going through
+            the cloudy days — and tells you what each extra margin weighs.
           </p>
           <DayStripMotif className="mt-8 hidden max-w-sm sm:flex" />
         </div>

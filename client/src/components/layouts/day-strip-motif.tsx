@@ -18,7 +18,9 @@ export function DayStripMotif({ className }: { className?: string }) {
             share === 0 ? 'border-larch-300 bg-dry-hatch text-larch-300/70' : 'border-moss-300/60 bg-scree-800',
           )}
         >
-          {share > 0 && <div className="absolute inset-x-0 bottom-0 bg-moss-400" style={{ height: `${share * 100}%` }} />}
+          {share > 0 && (
+            <div className="absolute inset-x-0 bottom-0 bg-moss-400" style={{ height: `${share * 100}%` }} />
+          )}
         </div>
       ))}
     </div>

@@ -16,7 +16,8 @@ export default function AppRoot() {
   const account = useAccount();
   const location = useLocation();
   if (account.isPending) return <PageSpinner />;
-  if (!account.data) return <Navigate to={paths.auth.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
+  if (!account.data)
+    return <Navigate to={paths.auth.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (
     <AppLayout account={account.data}>
       <Outlet />

@@ -31,7 +31,11 @@ export function SignInForm({ onSuccess }: SignInFormProps) {
 
   return (
     <form onSubmit={onSubmit} noValidate aria-labelledby="sign-in-heading" className="flex flex-col gap-5">
-      {formError && <Alert tone="error" title="Could not sign in">{formError}</Alert>}
+      {formError && (
+        <Alert tone="error" title="Could not sign in">
+          {formError}
+        </Alert>
+      )}
       <TextField
         label="E-mail"
         type="email"

@@ -44,7 +44,11 @@ export function SignUpForm({ onSuccess }: SignUpFormProps) {
 
   return (
     <form onSubmit={onSubmit} noValidate aria-labelledby="sign-up-heading" className="flex flex-col gap-5">
-      {formError && <Alert tone="error" title="Could not create the account">{formError}</Alert>}
+      {formError && (
+        <Alert tone="error" title="Could not create the account">
+          {formError}
+        </Alert>
+      )}
       <TextField
         label="Name"
         hint="How your hiking partners will see you."

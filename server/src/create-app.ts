@@ -4,6 +4,7 @@ import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import cookieParser from 'cookie-parser';
 import { AppModule, type AppModuleOptions } from './app.module';
+import { translateBodyParserErrors } from './common/body-parser-errors';
 import type { AuthConfig } from './config';
 import { setUpOpenApi } from './docs/openapi';
 
@@ -21,7 +22,7 @@ export interface CreateAppOptions extends AppModuleOptions {
  * Call `listen(port)` on the result to serve; `close()` to stop (closes a database it opened itself).
  *
  * @example
- * const { db, close } = await createDatabase({ dataDir: './data/pglite' });
+ * const { db, close } = await createDatabase({ dataDir: './data' });
  * await migrateDatabase(db);
  * const app = await createApp({ database: db });
  * await app.listen(3000);
@@ -33,6 +34,10 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     abortOnError: false,
   });
   app.disable('x-powered-by');
+  // Register the body parsers now (init() then skips its own) so the translator can follow them.
+  app.useBodyParser('json');
+  app.useBodyParser('urlencoded', { extended: true });
+  app.use(translateBodyParserErrors);
   app.use(cookieParser());
   app.setGlobalPrefix(apiPrefix);
   const auth = app.get(ConfigService).getOrThrow<AuthConfig>('auth');

@@ -11,22 +11,14 @@ import type { Response } from 'express';
 import { ZodSerializationException, ZodValidationException } from 'nestjs-zod';
 import { ZodError } from 'zod';
 
-/** What a body-parser error looks like (Express's JSON/urlencoded parsers set `status` and `type`). */
+/** An error from Express middleware that carries a client-error `status` (as http-errors does). */
 interface HttpLikeError {
   status: number;
-  type?: string;
   message: string;
 }
 
 const internalErrorMessage = 'Something went wrong on our side';
 
-/** Plain messages for errors raised before a route runs (body parsing), by body-parser `type`. */
-const bodyParserMessages: Readonly<Record<string, string>> = {
-  'entity.parse.failed': 'The request body is not valid JSON',
-  'entity.too.large': 'The request body is too large',
-  'encoding.unsupported': 'The request body uses an unsupported encoding',
-  'charset.unsupported': 'The request body uses an unsupported charset',
-};
 
 /**
  * Turns every error into the one API error shape `{ statusCode, message, errors: [{ path, message }] }`.
@@ -58,11 +50,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
       return fromHttpException(exception);
     }
     if (isHttpLikeError(exception)) {
-      return {
-        statusCode: exception.status,
-        message: bodyParserMessages[exception.type ?? ''] ?? exception.message,
-        errors: [],
-      };
+      return { statusCode: exception.status, message: exception.message, errors: [] };
     }
     this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
     return internalError();

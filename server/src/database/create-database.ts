@@ -1,13 +1,18 @@
 import { mkdirSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import { drizzle as drizzleNodePg } from 'drizzle-orm/node-postgres';
 import { Pool } from 'pg';
+import { pgliteDirName } from '../config/database.config';
 import type { Database } from './database.types';
 import * as schema from './schema';
 
 export interface CreateDatabaseOptions {
-  /** Folder for the on-disk PGlite database (created when missing). Ignored with `databaseUrl` or `inMemory`. */
+  /**
+   * The data folder (DATA_DIR); the on-disk PGlite database lives in its `pglite` subfolder (created when
+   * missing). Ignored with `databaseUrl` or `inMemory`.
+   */
   dataDir?: string;
   /** A `postgres://` URL: use PostgreSQL through node-postgres instead of PGlite. */
   databaseUrl?: string;
@@ -25,10 +30,10 @@ export interface DatabaseHandle {
 
 /**
  * Opens the database without Nest (used by the app, the seed and the start script): PostgreSQL when
- * `databaseUrl` is given, else PGlite in memory or in `dataDir`. Does not migrate: call `migrateDatabase`.
+ * `databaseUrl` is given, else PGlite in memory or in `<dataDir>/pglite`. Does not migrate: call `migrateDatabase`.
  *
  * @example
- * const { db, close } = await createDatabase({ dataDir: './data/pglite' });
+ * const { db, close } = await createDatabase({ dataDir: './data' });
  * await migrateDatabase(db);
  * await close();
  */
@@ -43,8 +48,9 @@ export async function createDatabase(options: CreateDatabaseOptions = {}): Promi
     client = new PGlite();
   } else {
     if (!options.dataDir) throw new Error('createDatabase needs dataDir, databaseUrl or inMemory');
-    mkdirSync(options.dataDir, { recursive: true });
-    client = new PGlite(options.dataDir);
+    const pgliteDir = join(resolve(options.dataDir), pgliteDirName);
+    mkdirSync(pgliteDir, { recursive: true });
+    client = new PGlite(pgliteDir);
   }
   await client.waitReady;
   const db = drizzlePglite({ client, schema });

@@ -1,6 +1,6 @@
 import { type DynamicModule, Global, Logger, Module, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import type { DatabaseConfig } from '../config';
+import type { AppConfig, DatabaseConfig } from '../config';
 import { createDatabase } from './create-database';
 import { DRIZZLE, type Database } from './database.types';
 import { migrateDatabase } from './migrate-database';
@@ -50,8 +50,9 @@ export class DatabaseModule {
           useFactory: async (config: ConfigService): Promise<Database> => {
             if (options.database) return options.database;
             const { url, pgliteDir } = config.getOrThrow<DatabaseConfig>('database');
+            const { dataDir } = config.getOrThrow<AppConfig>('app');
             new Logger('Database').log(url ? 'Using PostgreSQL from DATABASE_URL' : `Using embedded PGlite in ${pgliteDir}`);
-            const handle = await createDatabase(url ? { databaseUrl: url } : { dataDir: pgliteDir });
+            const handle = await createDatabase(url ? { databaseUrl: url } : { dataDir });
             pendingClose.set(handle.db, handle.close);
             return handle.db;
           },

@@ -1,0 +1,149 @@
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { accounts } from '../src/database/schema';
+import { type TestApp, insertAccount, signInToken, startTestApp, testPassword } from './support/test-app';
+
+describe('admin accounts', () => {
+  let t: TestApp;
+
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+
+  afterAll(async () => {
+    await t.close();
+  });
+
+  // Each test builds its own set of admins and members from an empty table.
+  beforeEach(async () => {
+    await t.db.delete(accounts);
+  });
+
+  const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+
+  it('answers 401 without a session and 403 to a member', async () => {
+    const member = await insertAccount(t.db);
+    await t.http().get('/api/admin/accounts').expect(401);
+    const token = await signInToken(t, member.email);
+    const response = await t.http().get('/api/admin/accounts').set(bearer(token)).expect(403);
+    expect(response.body).toEqual({
+      statusCode: 403,
+      message: 'Your account does not have the role this needs',
+      errors: [],
+    });
+    await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({ role: 'admin' }).expect(403);
+    const [row] = await t.db.select().from(accounts).where(eq(accounts.id, member.id));
+    expect(row?.role).toBe('member');
+  });
+
+  it('lists every account, oldest first, without password hashes', async () => {
+    const admin = await insertAccount(t.db, { role: 'admin' });
+    t.clock.advanceS(1);
+    const member = await insertAccount(t.db);
+    const token = await signInToken(t, admin.email);
+    const response = await t.http().get('/api/admin/accounts').set(bearer(token)).expect(200);
+    expect(response.body.accounts.map((a: { id: string }) => a.id)).toEqual([admin.id, member.id]);
+    expect(Object.keys(response.body.accounts[0]).sort()).toEqual(
+      ['createdAt', 'disabled', 'displayName', 'email', 'id', 'role'].sort(),
+    );
+  });
+
+  it('disables a member, whose next request is refused, and enables them again', async () => {
+    const admin = await insertAccount(t.db, { role: 'admin' });
+    const member = await insertAccount(t.db);
+    const adminToken = await signInToken(t, admin.email);
+    const memberAgent = t.agent();
+    await memberAgent.post('/api/auth/sign-in').send({ email: member.email, password: testPassword }).expect(200);
+
+    const disabled = await t
+      .http()
+      .patch(`/api/admin/accounts/${member.id}`)
+      .set(bearer(adminToken))
+      .send({ disabled: true })
+      .expect(200);
+    expect(disabled.body.account).toMatchObject({ id: member.id, disabled: true, role: 'member' });
+    await memberAgent.get('/api/auth/me').expect(401);
+
+    await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(adminToken)).send({ disabled: false }).expect(200);
+    await memberAgent.get('/api/auth/me').expect(200);
+  });
+
+  it('a role change takes effect on the next request', async () => {
+    const first = await insertAccount(t.db, { role: 'admin' });
+    const second = await insertAccount(t.db, { role: 'admin' });
+    const firstToken = await signInToken(t, first.email);
+    const secondToken = await signInToken(t, second.email);
+
+    await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(firstToken)).send({ role: 'member' }).expect(200);
+    await t.http().get('/api/admin/accounts').set(bearer(secondToken)).expect(403);
+    await t.http().get('/api/auth/me').set(bearer(secondToken)).expect(200);
+  });
+
+  describe('the last active admin', () => {
+    it('cannot be demoted or disabled (409), and stays an admin', async () => {
+      const admin = await insertAccount(t.db, { role: 'admin' });
+      await insertAccount(t.db);
+      const token = await signInToken(t, admin.email);
+
+      const demote = await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+      expect(demote.body).toEqual({
+        statusCode: 409,
+        message: 'The last active admin cannot be demoted or disabled',
+        errors: [],
+      });
+      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ disabled: true }).expect(409);
+
+      const [row] = await t.db.select().from(accounts).where(eq(accounts.id, admin.id));
+      expect(row).toMatchObject({ role: 'admin', disabled: false });
+      await t.http().get('/api/admin/accounts').set(bearer(token)).expect(200);
+    });
+
+    it('a disabled admin does not count as the other admin', async () => {
+      const admin = await insertAccount(t.db, { role: 'admin' });
+      await insertAccount(t.db, { role: 'admin', disabled: true });
+      const token = await signInToken(t, admin.email);
+      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+    });
+
+    it('with two admins one may step down, then the other may not', async () => {
+      const first = await insertAccount(t.db, { role: 'admin' });
+      const second = await insertAccount(t.db, { role: 'admin' });
+      const token = await signInToken(t, first.email);
+
+      await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(token)).send({ disabled: true }).expect(200);
+      await t.http().patch(`/api/admin/accounts/${first.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+      // Re-enabling the second makes stepping down possible again.
+      await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(token)).send({ disabled: false }).expect(200);
+      await t.http().patch(`/api/admin/accounts/${first.id}`).set(bearer(token)).send({ role: 'member' }).expect(200);
+    });
+
+    it('an admin may re-confirm their own role (no change is not a demotion)', async () => {
+      const admin = await insertAccount(t.db, { role: 'admin' });
+      const token = await signInToken(t, admin.email);
+      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'admin', disabled: false }).expect(200);
+    });
+  });
+
+  it('validates the change and the id', async () => {
+    const admin = await insertAccount(t.db, { role: 'admin' });
+    const member = await insertAccount(t.db);
+    const token = await signInToken(t, admin.email);
+
+    const empty = await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({}).expect(400);
+    expect(empty.body.errors).toEqual([{ path: 'role', message: 'Give a role or a disabled flag' }]);
+
+    const badRole = await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({ role: 'owner' }).expect(400);
+    expect(badRole.body.errors[0].path).toBe('role');
+
+    const badId = await t.http().patch('/api/admin/accounts/not-a-uuid').set(bearer(token)).send({ role: 'admin' }).expect(400);
+    expect(badId.body.errors).toEqual([{ path: 'id', message: 'Not an account id' }]);
+
+    const missing = await t
+      .http()
+      .patch('/api/admin/accounts/1b4e28ba-2fa1-41d2-883f-0016d3cca427')
+      .set(bearer(token))
+      .send({ role: 'admin' })
+      .expect(404);
+    expect(missing.body).toEqual({ statusCode: 404, message: 'No such account', errors: [] });
+  });
+});

@@ -1,0 +1,57 @@
+import { demoAccounts, demoPassword } from '@gramwatt/seed';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { appUrl, browserMissing, launchBrowser, newContext, saveScreenshot, signIn } from './browser';
+
+describe.skipIf(browserMissing)('signing in to the built app', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  const member = demoAccounts.find((a) => a.role === 'member')!;
+  const admin = demoAccounts.find((a) => a.role === 'admin')!;
+
+  it('sends a visitor who is not signed in to the sign-in page', async () => {
+    const context = await newContext(browser);
+    const page = await context.newPage();
+    await page.goto(appUrl('/locker'));
+    await expect.poll(() => new URL(page.url()).pathname).toBe('/sign-in');
+    await saveScreenshot(page, 'sign-in');
+    await context.close();
+  });
+
+  it('a demo member signs in and sees Locker and Trips, but not Admin', async () => {
+    const context = await newContext(browser);
+    const page = await context.newPage();
+    await signIn(page, member.email, demoPassword);
+    const nav = page.getByRole('navigation', { name: /main/i });
+    await expect.poll(() => nav.getByRole('link', { name: 'Locker' }).isVisible()).toBe(true);
+    expect(await nav.getByRole('link', { name: 'Trips' }).isVisible()).toBe(true);
+    expect(await nav.getByRole('link', { name: 'Admin' }).count()).toBe(0);
+    await saveScreenshot(page, 'layout-member');
+    await context.close();
+  });
+
+  it('a wrong password is refused with a plain message', async () => {
+    const context = await newContext(browser);
+    const page = await context.newPage();
+    await signIn(page, member.email, 'not-the-password-at-all');
+    await expect.poll(() => page.getByText(/e-mail or password is wrong/i).isVisible()).toBe(true);
+    await context.close();
+  });
+
+  it('an admin sees the Admin screen with the accounts, also at phone width', async () => {
+    const context = await newContext(browser, 'phone');
+    const page = await context.newPage();
+    await signIn(page, admin.email, demoPassword);
+    await expect.poll(() => new URL(page.url()).pathname).not.toBe('/sign-in');
+    await page.goto(appUrl('/admin'));
+    await expect.poll(() => page.getByText(member.email).first().isVisible()).toBe(true);
+    await saveScreenshot(page, 'admin-phone');
+    await context.close();
+  });
+});

@@ -34,7 +34,7 @@ describe('extraterrestrial normal irradiance (Spencer 1971)', () => {
   it("matches pvlib-python's test value for day 300 with its 1366.1 W/m² constant", () => {
     // pvlib-python pvlib/tests/test_irradiance.py `test_get_extra_radiation`: 2016-10-26 (day 300),
     // method 'spencer' → 1383.636203 W/m².
-    expect(extraterrestrialNormalIrradianceWm2(300, { solarConstantWm2: 1366.1 })).toBeCloseTo(1383.636203, 0);
+    expect(extraterrestrialNormalIrradianceWm2(300, { solarConstantWm2: 1366.1 })).toBeCloseTo(1383.636203, 5);
   });
 
   it('peaks near perihelion (early January, ≈ +3.3 %) and bottoms near aphelion (early July, ≈ −3.3 %)', () => {

@@ -1,7 +1,8 @@
 /**
  * Irradiance on a tilted, oriented plane: angle of incidence, the isotropic-sky model of Liu & Jordan
  * (1963) and ground reflection. Duffie & Beckman, Solar Engineering of Thermal Processes, 3rd ed.,
- * eq. 1.6.3 (incidence) and eq. 2.15.1 (isotropic sky: I_T = I_b R_b + I_d (1 + cos β)/2 + I ρ_g (1 − cos β)/2).
+ * eq. 1.6.3 (incidence) and eq. 2.15.1 (isotropic sky: I_T = I_b R_b + I_d (1 + cos β)/2 + I ρ_g (1 − cos β)/2);
+ * equation numbers `from memory`.
  */
 
 /** Orientation of a plane: tilt from horizontal and the azimuth its face points to. */

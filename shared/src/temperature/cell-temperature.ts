@@ -1,7 +1,7 @@
 /**
  * Solar cell temperature from air temperature and the irradiance on the panel's plane.
  * Default: the NOCT model (Ross 1976; Duffie & Beckman, Solar Engineering of Thermal Processes, 3rd ed.,
- * eq. 23.3.3 without the efficiency term): T_c = T_a + (NOCT − 20 °C) × G / 800 W/m².
+ * eq. 23.3.3 without the efficiency term, equation number `from memory`): T_c = T_a + (NOCT − 20 °C) × G / 800 W/m².
  * Alternative: Faiman (2008), T_c = T_a + G / (U0 + U1 × wind).
  */
 import {

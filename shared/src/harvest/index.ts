@@ -1,1 +1,3 @@
-export {};
+export * from './system-factor.js';
+export * from './panel-power.js';
+export * from './panel-series.js';

@@ -1,0 +1,176 @@
+import { lithiumMinChargeTemperatureC } from '../constants/electrical.js';
+import { deviceChargePowerW, deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
+import { panelPowerSeries } from '../harvest/panel-series.js';
+import type { BankSpec, UsbPanelSpec } from '../schemas/items.js';
+import { bankUsableWh } from '../storage/bank.js';
+import { chargePaths, panelReachesBank, type ChargePath, type KitConverter, type KitLead, type MissingLink } from './connections.js';
+import type { DeviceUnit, KitSimulationInput, StoreUnit } from './types.js';
+
+/** The kit turned into flat typed arrays for the step loop (no allocation per step). */
+export interface CompiledKit {
+  stepCount: number;
+  dayCount: number;
+  stepDurationH: Float64Array;
+  stepDay: Int32Array;
+  stepCamp: Uint8Array;
+  stepFrozen: Uint8Array;
+  /** Panels (kit lines), each series already × count: [sky][panel]. */
+  panelCount: number;
+  panelItemIds: string[];
+  panelSeries: Float64Array[][];
+  /** Stores in merit order. */
+  storeCount: number;
+  stores: StoreUnit[];
+  storeCapWh: Float64Array;
+  storeFloorWh: Float64Array;
+  storeInputMaxW: Float64Array;
+  storeChargeEff: Float64Array;
+  storeOutputEff: Float64Array;
+  /** panel × store: 1 where the panel's port reaches the store's input. */
+  panelReach: Uint8Array;
+  panelReachLead: (string | null)[];
+  deviceCount: number;
+  devices: DeviceUnit[];
+  deviceCapWh: Float64Array;
+  deviceDemandWhPerH: Float64Array;
+  deviceChargeInW: Float64Array;
+  deviceChargeEff: Float64Array;
+  /** store × device: path efficiency (0 = no path) and most power into the device, W. */
+  pathEff: Float64Array;
+  pathMaxW: Float64Array;
+  freezeBlocksDeviceTopUps: boolean;
+  reserveShare: number;
+  usedItemIds: Set<string>;
+}
+
+/**
+ * Merit order of stores for both harvest and top-ups: most usable Wh per input Wh first (charge × output
+ * efficiency), then larger input limit, larger capacity, then item id. The order depends only on each store's own
+ * spec — never on its state or on the other items — which is what makes the dispatch monotone (see README).
+ */
+function meritCompare(a: { spec: BankSpec; itemId: string; unit: number }, b: { spec: BankSpec; itemId: string; unit: number }): number {
+  const ea = a.spec.chargeEfficiency * a.spec.outputEfficiency;
+  const eb = b.spec.chargeEfficiency * b.spec.outputEfficiency;
+  return (
+    eb - ea ||
+    b.spec.inputMaxW - a.spec.inputMaxW ||
+    bankUsableWh(b.spec) - bankUsableWh(a.spec) ||
+    (a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0) ||
+    a.unit - b.unit
+  );
+}
+
+/** Compiles a simulation input into typed arrays. */
+export function compileKit(input: KitSimulationInput): CompiledKit {
+  const { solar, kit, devices, reserveShare } = input;
+  const options = input.options ?? {};
+  const stepCount = solar.steps.length;
+  const dayCount = solar.days.length || (stepCount ? (solar.steps[stepCount - 1]?.dayIndex ?? 0) + 1 : 0);
+  const stepDurationH = new Float64Array(stepCount);
+  const stepDay = new Int32Array(stepCount);
+  const stepCamp = new Uint8Array(stepCount);
+  const stepFrozen = new Uint8Array(stepCount);
+  solar.steps.forEach((s, i) => {
+    stepDurationH[i] = s.durationH;
+    stepDay[i] = s.dayIndex;
+    stepCamp[i] = s.window === 'camp' ? 1 : 0;
+    stepFrozen[i] = s.airTempC < lithiumMinChargeTemperatureC ? 1 : 0;
+  });
+
+  const leads: KitLead[] = [];
+  const converters: KitConverter[] = [];
+  const panels: { itemId: string; count: number; spec: UsbPanelSpec }[] = [];
+  const storeEntries: { itemId: string; unit: number; spec: BankSpec }[] = [];
+  for (const entry of kit) {
+    const spec = entry.spec;
+    if (spec.kind === 'lead') leads.push({ itemId: entry.itemId, spec });
+    else if (spec.kind === 'converter') converters.push({ itemId: entry.itemId, spec });
+    else if (spec.kind === 'panel') panels.push({ itemId: entry.itemId, count: entry.count, spec });
+    else if (spec.kind === 'bank') for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
+  }
+  storeEntries.sort(meritCompare);
+  const usedItemIds = new Set<string>();
+
+  const storeCount = storeEntries.length;
+  const stores: StoreUnit[] = storeEntries.map((s) => {
+    const usableWh = bankUsableWh(s.spec);
+    return { storeId: `${s.itemId}#${s.unit}`, itemId: s.itemId, unit: s.unit, usableWh, reserveWh: usableWh * reserveShare };
+  });
+  const storeCapWh = Float64Array.from(stores, (s) => s.usableWh);
+  const storeFloorWh = Float64Array.from(stores, (s) => s.reserveWh);
+  const storeInputMaxW = Float64Array.from(storeEntries, (s) => s.spec.inputMaxW);
+  const storeChargeEff = Float64Array.from(storeEntries, (s) => s.spec.chargeEfficiency);
+  const storeOutputEff = Float64Array.from(storeEntries, (s) => s.spec.outputEfficiency);
+
+  const panelCount = panels.length;
+  const panelReach = new Uint8Array(panelCount * storeCount);
+  const panelReachLead: (string | null)[] = new Array(panelCount * storeCount).fill(null);
+  panels.forEach((p, pi) => {
+    storeEntries.forEach((s, si) => {
+      const hop = panelReachesBank(p.spec.outputPort, s.spec, leads);
+      if (hop.joined) {
+        panelReach[pi * storeCount + si] = 1;
+        panelReachLead[pi * storeCount + si] = hop.leadItemId;
+        usedItemIds.add(p.itemId);
+        if (hop.leadItemId) usedItemIds.add(hop.leadItemId);
+      }
+    });
+  });
+  const skyCount = solar.skies.length;
+  const panelSeries: Float64Array[][] = Array.from({ length: skyCount }, () => []);
+  panels.forEach((p) => {
+    const perSky = options.panelSeriesCache?.get(p.itemId) ?? panelPowerSeries(p.spec, solar, options.panelPower);
+    for (let k = 0; k < skyCount; k++) {
+      const one = perSky[k] ?? new Float64Array(stepCount);
+      const scaled = new Float64Array(stepCount);
+      for (let i = 0; i < stepCount; i++) scaled[i] = (one[i] ?? 0) * p.count;
+      panelSeries[k]?.push(scaled);
+    }
+  });
+
+  const deviceCount = devices.length;
+  const pathEff = new Float64Array(storeCount * deviceCount);
+  const pathMaxW = new Float64Array(storeCount * deviceCount);
+  const tripDays = solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
+  const deviceUnits: DeviceUnit[] = devices.map((d, di) => {
+    const paths: (ChargePath | null)[] = [];
+    const missing = new Map<string, MissingLink>();
+    storeEntries.forEach((s, si) => {
+      const found = chargePaths(s.spec, d.spec, converters, leads);
+      const best = found.paths[0] ?? null;
+      paths.push(best);
+      if (best) {
+        pathEff[si * deviceCount + di] = best.pathEfficiency;
+        pathMaxW[si * deviceCount + di] = best.maxDeviceInputW;
+        if (best.converterItemId) usedItemIds.add(best.converterItemId);
+        for (const id of best.leadItemIds) usedItemIds.add(id);
+      } else for (const m of found.missing) missing.set(m.text, m);
+    });
+    const demandWhPerDay = deviceDemandWhPerDay(d.spec);
+    const needs = needsChargingPath(d.spec, tripDays);
+    const anyPath = paths.some((p) => p !== null);
+    const missingLinks: MissingLink[] =
+      needs && !anyPath
+        ? storeCount === 0
+          ? [{ kind: 'store', text: 'a bank that can charge it' }]
+          : [...missing.values()]
+        : [];
+    return { deviceId: d.deviceId, demandWhPerDay, ownBatteryWh: d.spec.ownBatteryWh, needsChargingPath: needs, paths, missing: missingLinks };
+  });
+
+  return {
+    stepCount, dayCount, stepDurationH, stepDay, stepCamp, stepFrozen,
+    panelCount, panelItemIds: panels.map((p) => p.itemId), panelSeries,
+    storeCount, stores, storeCapWh, storeFloorWh, storeInputMaxW, storeChargeEff, storeOutputEff,
+    panelReach, panelReachLead,
+    deviceCount, devices: deviceUnits,
+    deviceCapWh: Float64Array.from(devices, (d) => d.spec.ownBatteryWh),
+    deviceDemandWhPerH: Float64Array.from(deviceUnits, (d) => d.demandWhPerDay / 24),
+    deviceChargeInW: Float64Array.from(devices, (d) => deviceChargePowerW(d.spec)),
+    deviceChargeEff: Float64Array.from(devices, (d) => d.spec.chargeEfficiency),
+    pathEff, pathMaxW,
+    freezeBlocksDeviceTopUps: options.freezeBlocksDeviceTopUps ?? false,
+    reserveShare,
+    usedItemIds,
+  };
+}

@@ -1,0 +1,156 @@
+import { usbBusVolts } from '../constants/electrical.js';
+import { deviceChargePowerW, deviceChargeVolts } from '../demand/device-demand.js';
+import type { DeviceSpec } from '../schemas/devices.js';
+import type { BankSpec, ConverterSpec, LeadSpec } from '../schemas/items.js';
+import type { Connector, OutputPort, Port } from '../schemas/ports.js';
+
+/** A lead the kit holds, by item id. */
+export interface KitLead {
+  itemId: string;
+  spec: LeadSpec;
+}
+
+/** A converter the kit holds, by item id. */
+export interface KitConverter {
+  itemId: string;
+  spec: ConverterSpec;
+}
+
+/** The result of joining two ports: direct (a captive cable fits), through a lead of the kit, or missing a lead. */
+export type HopResult =
+  | { joined: true; leadItemId: string | null }
+  | { joined: false; needs: { fromConnector: Connector; toConnector: Connector } };
+
+/**
+ * Joins a source port to a sink port. A captive cable on exactly one side whose plug is the other side's connector
+ * joins them directly; otherwise the hop needs a lead with those two ends (either way round). Our rule, stated in the
+ * README; two captive plugs never mate.
+ * @example joinPorts({ connector: 'usb-a', captiveCable: true }, { connector: 'usb-a', captiveCable: false }, []) // { joined: true, leadItemId: null }
+ */
+export function joinPorts(from: Port, to: Port, leads: readonly KitLead[]): HopResult {
+  if (from.captiveCable !== to.captiveCable && from.connector === to.connector) return { joined: true, leadItemId: null };
+  for (const lead of leads) {
+    const { fromConnector: a, toConnector: b } = lead.spec;
+    if ((a === from.connector && b === to.connector) || (a === to.connector && b === from.connector)) {
+      return { joined: true, leadItemId: lead.itemId };
+    }
+  }
+  return { joined: false, needs: { fromConnector: from.connector, toConnector: to.connector } };
+}
+
+/** One way to charge a device from a store: the store port, an optional converter and the leads of each hop. */
+export interface ChargePath {
+  outputPortIndex: number;
+  converterItemId: string | null;
+  leadItemIds: string[];
+  /** Efficiency after the store's output (the converter's; 1 when there is none). */
+  pathEfficiency: number;
+  /** Most power the path can put into the device's charge input, W. */
+  maxDeviceInputW: number;
+}
+
+/** Something a device's charging path lacks. */
+export interface MissingLink {
+  kind: 'store' | 'converter' | 'lead';
+  /** Plain sentence for the plan. */
+  text: string;
+  fromConnector?: Connector;
+  toConnector?: Connector;
+}
+
+const voltsTolerance = 0.05;
+
+function portOffersVolts(port: OutputPort, volts: number): boolean {
+  return Math.abs(port.volts - volts) <= voltsTolerance || port.usbPdVolts.some((v) => Math.abs(v - volts) <= voltsTolerance);
+}
+
+/** Power a USB port gives at a voltage it offers, W (volts × max amps). */
+function portPowerAtW(port: OutputPort, volts: number): number {
+  return volts * port.maxA;
+}
+
+/** The supply window a 12 V device accepts, V (default 11–14.6 V: a 13.8 V nominal radio's usual range — common practice). */
+export function deviceSupplyWindowV(device: DeviceSpec): { minV: number; maxV: number } {
+  return { minV: device.supplyVoltsMin ?? 11, maxV: device.supplyVoltsMax ?? 14.6 };
+}
+
+/**
+ * Every charging path from a bank to a device with this kit's converters and leads, best first (highest path
+ * efficiency, then most power), and what is missing when there is none. USB devices charge from a bank port directly
+ * (a USB PD device at its PD voltage where the port offers it, else at 5 V); a 12 V DC device needs a boost converter
+ * whose input the port offers and whose output is inside the device's supply window.
+ */
+export function chargePaths(
+  bank: BankSpec,
+  device: DeviceSpec,
+  converters: readonly KitConverter[],
+  leads: readonly KitLead[],
+): { paths: ChargePath[]; missing: MissingLink[] } {
+  const paths: ChargePath[] = [];
+  const missingLeads = new Map<string, MissingLink>();
+  const deviceW = deviceChargePowerW(device);
+  const noteLead = (needs: { fromConnector: Connector; toConnector: Connector }) => {
+    const key = [needs.fromConnector, needs.toConnector].sort().join('|');
+    if (!missingLeads.has(key)) {
+      missingLeads.set(key, {
+        kind: 'lead',
+        text: `a lead from ${needs.fromConnector} to ${needs.toConnector}`,
+        fromConnector: needs.fromConnector,
+        toConnector: needs.toConnector,
+      });
+    }
+  };
+  let fittingConverter = false;
+  bank.outputPorts.forEach((port, portIndex) => {
+    if (device.chargesVia === 'usb-5v' || device.chargesVia === 'usb-pd') {
+      if (!portOffersVolts(port, usbBusVolts)) return;
+      const volts = device.chargesVia === 'usb-pd' && portOffersVolts(port, deviceChargeVolts(device)) ? deviceChargeVolts(device) : usbBusVolts;
+      const hop = joinPorts(port, device.chargePort, leads);
+      if (!hop.joined) return noteLead(hop.needs);
+      // A PD device on a 5 V-only port charges at 5 V × the port's amps at most.
+      paths.push({
+        outputPortIndex: portIndex, converterItemId: null, leadItemIds: hop.leadItemId ? [hop.leadItemId] : [],
+        pathEfficiency: 1, maxDeviceInputW: Math.min(deviceW, portPowerAtW(port, volts)),
+      });
+      return;
+    }
+    const window = deviceSupplyWindowV(device);
+    for (const converter of converters) {
+      const c = converter.spec;
+      if (c.converterType !== 'boost') continue;
+      if (!portOffersVolts(port, c.inputVolts)) continue;
+      if (c.outputVolts < window.minV - voltsTolerance || c.outputVolts > window.maxV + voltsTolerance) continue;
+      fittingConverter = true;
+      const inHop = joinPorts(port, c.inputPort, leads);
+      const outHop = joinPorts(c.outputPort, device.chargePort, leads);
+      if (!inHop.joined) noteLead(inHop.needs);
+      if (!outHop.joined) noteLead(outHop.needs);
+      if (!inHop.joined || !outHop.joined) continue;
+      paths.push({
+        outputPortIndex: portIndex,
+        converterItemId: converter.itemId,
+        leadItemIds: [inHop.leadItemId, outHop.leadItemId].filter((id): id is string => id !== null),
+        pathEfficiency: c.efficiency,
+        maxDeviceInputW: Math.min(deviceW, c.maxOutputA * c.outputVolts, portPowerAtW(port, c.inputVolts) * c.efficiency),
+      });
+    }
+  });
+  paths.sort((a, b) => b.pathEfficiency - a.pathEfficiency || b.maxDeviceInputW - a.maxDeviceInputW);
+  const missing: MissingLink[] = [];
+  if (paths.length === 0) {
+    if (device.chargesVia === '12v-dc' && !fittingConverter) {
+      const window = deviceSupplyWindowV(device);
+      missing.push({
+        kind: 'converter',
+        text: `a boost converter from a USB voltage this bank offers to ${window.minV}–${window.maxV} V`,
+      });
+    }
+    missing.push(...missingLeads.values());
+  }
+  return { paths, missing };
+}
+
+/** Whether a panel's port reaches a bank's input, and through which lead. */
+export function panelReachesBank(panelPort: Port, bank: BankSpec, leads: readonly KitLead[]): HopResult {
+  return joinPorts(panelPort, bank.inputPort, leads);
+}

@@ -1,0 +1,278 @@
+import { energyEpsilonWh } from '../constants/electrical.js';
+import type { CompiledKit } from './compile-kit.js';
+import type { DryReason } from './types.js';
+
+/** Ledger columns per day, in a flat `Float64Array` (day × column). */
+export const ledgerColumns = [
+  'availableHarvestWh', 'harvestWh', 'spilledWh', 'frozenSpilledWh', 'storeChargeLossWh', 'storeOutputLossWh',
+  'converterLossWh', 'deviceChargeLossWh', 'toppedUpWh', 'deliveredWh', 'unmetWh', 'storedStartWh', 'storedEndWh',
+  'storesStartWh', 'storesEndWh', 'devicesStartWh', 'devicesEndWh', 'frozenHours',
+] as const;
+const C = Object.fromEntries(ledgerColumns.map((k, i) => [k, i])) as Record<(typeof ledgerColumns)[number], number>;
+const columnCount = ledgerColumns.length;
+
+/** Buffers a recorded run writes into (allocated once per sky). */
+export interface SkyRecord {
+  ledger: Float64Array;
+  storedWhByStep: Float64Array;
+  storesWhByStep: Float64Array;
+  unitWhByStep: Float64Array;
+  /** Flat session log: per step, per flow. Called only when recording. */
+  onFlow?: (kind: 'harvest' | 'top-up', stepIndex: number, from: number, to: number, energyWh: number) => void;
+}
+
+/** The first dry step of a run, by index. */
+export interface SkyDry {
+  stepIndex: number;
+  dayIndex: number;
+  deviceIndex: number;
+  reason: DryReason;
+  shortWh: number;
+}
+
+/** Result of one sky's run. */
+export interface SkyRun {
+  dry: SkyDry | null;
+  worstMarginShare: number;
+  /** Stored energy (stores + devices) at the start of each day, Wh (scratch-owned when `stopAtDry`, else a copy). */
+  storedStartByDayWh: Float64Array;
+  /** Energy above the floors (stores above their reserve + devices) at the start of each day, Wh. */
+  aboveFloorStartByDayWh: Float64Array;
+}
+
+/** Scratch state reused between runs of the same compiled kit. */
+export interface SkyScratch {
+  storeWh: Float64Array;
+  deviceWh: Float64Array;
+  panelRemWh: Float64Array;
+  storedStartByDayWh: Float64Array;
+  aboveFloorStartByDayWh: Float64Array;
+}
+
+/** Allocates scratch buffers for a compiled kit. */
+export function skyScratch(k: CompiledKit): SkyScratch {
+  return {
+    storeWh: new Float64Array(k.storeCount),
+    deviceWh: new Float64Array(k.deviceCount),
+    panelRemWh: new Float64Array(k.panelCount),
+    storedStartByDayWh: new Float64Array(k.dayCount),
+    aboveFloorStartByDayWh: new Float64Array(k.dayCount),
+  };
+}
+
+/** Allocates record buffers for a compiled kit. */
+export function skyRecord(k: CompiledKit): SkyRecord {
+  return {
+    ledger: new Float64Array(k.dayCount * columnCount),
+    storedWhByStep: new Float64Array(k.stepCount),
+    storesWhByStep: new Float64Array(k.stepCount),
+    unitWhByStep: new Float64Array(k.stepCount * (k.storeCount + k.deviceCount)),
+  };
+}
+
+/** Reads one ledger cell. */
+export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof ledgerColumns)[number]): number {
+  return record.ledger[dayIndex * columnCount + C[column]] ?? 0;
+}
+
+/**
+ * Runs one design sky step by step: harvest into stores (merit order, within input limits and room, none below 0 °C),
+ * then each device uses its demand for the step from its own battery, then — in the camp window — devices are
+ * topped up from stores (merit order, down to each store's reserve, within path and device charge power).
+ * `stopAtDry` returns at the first dry step (the fast feasibility path).
+ */
+export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, record: SkyRecord | null, stopAtDry: boolean): SkyRun {
+  const { storeCount: S, deviceCount: D, panelCount: P } = k;
+  const E = scratch.storeWh;
+  const devE = scratch.deviceWh;
+  const rem = scratch.panelRemWh;
+  E.set(k.storeCapWh);
+  devE.set(k.deviceCapWh);
+  const series = k.panelSeries[skyIndex] ?? [];
+  const ledger = record?.ledger;
+  if (ledger) ledger.fill(0);
+  const eps = energyEpsilonWh;
+
+  let capAboveFloor = 0;
+  for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
+  for (let d = 0; d < D; d++) capAboveFloor += k.deviceCapWh[d] ?? 0;
+
+  let dry: SkyDry | null = null;
+  let worstMargin = 1;
+  let currentDay = -1;
+  const storedStartByDayWh = scratch.storedStartByDayWh;
+  const aboveFloorStartByDayWh = scratch.aboveFloorStartByDayWh;
+  storedStartByDayWh.fill(0);
+  aboveFloorStartByDayWh.fill(0);
+
+  const totals = () => {
+    let stores = 0;
+    let above = 0;
+    for (let s = 0; s < S; s++) {
+      const e = E[s] ?? 0;
+      stores += e;
+      above += e - (k.storeFloorWh[s] ?? 0);
+    }
+    let devices = 0;
+    for (let d = 0; d < D; d++) devices += devE[d] ?? 0;
+    return { stores, devices, above: above + devices };
+  };
+
+  for (let i = 0; i < k.stepCount; i++) {
+    const dt = k.stepDurationH[i] ?? 0;
+    const day = k.stepDay[i] ?? 0;
+    const row = day * columnCount;
+    if (day !== currentDay) {
+      const t = totals();
+      storedStartByDayWh[day] = t.stores + t.devices;
+      aboveFloorStartByDayWh[day] = t.above;
+      if (ledger) {
+        ledger[row + C.storedStartWh] = t.stores + t.devices;
+        ledger[row + C.storesStartWh] = t.stores;
+        ledger[row + C.devicesStartWh] = t.devices;
+      }
+      currentDay = day;
+    }
+    const frozen = k.stepFrozen[i] === 1;
+
+    // 1. Harvest.
+    let availWh = 0;
+    for (let p = 0; p < P; p++) {
+      const w = (series[p]?.[i] ?? 0) * dt;
+      rem[p] = w;
+      availWh += w;
+    }
+    if (availWh > 0 && !frozen) {
+      for (let s = 0; s < S; s++) {
+        const cap = k.storeCapWh[s] ?? 0;
+        const e = E[s] ?? 0;
+        const room = cap - e;
+        if (room <= eps) continue;
+        const etaC = k.storeChargeEff[s] ?? 1;
+        const etaO = k.storeOutputEff[s] ?? 1;
+        const limit = Math.min((k.storeInputMaxW[s] ?? 0) * dt, room / (etaC * etaO));
+        let take = 0;
+        for (let p = 0; p < P && take < limit; p++) {
+          const r = rem[p] ?? 0;
+          if (r <= 0 || k.panelReach[p * S + s] !== 1) continue;
+          const t = Math.min(r, limit - take);
+          rem[p] = r - t;
+          take += t;
+          if (record?.onFlow) record.onFlow('harvest', i, p, s, t);
+        }
+        if (take > 0) {
+          E[s] = Math.min(cap, e + take * etaC * etaO);
+          if (ledger) {
+            ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
+            ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
+            ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
+          }
+        }
+      }
+    }
+    if (ledger) {
+      let left = 0;
+      for (let p = 0; p < P; p++) left += rem[p] ?? 0;
+      ledger[row + C.availableHarvestWh] = (ledger[row + C.availableHarvestWh] ?? 0) + availWh;
+      ledger[row + C.spilledWh] = (ledger[row + C.spilledWh] ?? 0) + left;
+      if (frozen) ledger[row + C.frozenSpilledWh] = (ledger[row + C.frozenSpilledWh] ?? 0) + availWh;
+      if (frozen) ledger[row + C.frozenHours] = (ledger[row + C.frozenHours] ?? 0) + dt;
+    }
+
+    // 2. Devices use their step's share of the day's demand from their own batteries.
+    for (let d = 0; d < D; d++) {
+      const need = (k.deviceDemandWhPerH[d] ?? 0) * dt;
+      const have = devE[d] ?? 0;
+      if (have >= need - eps) {
+        devE[d] = Math.max(0, have - need);
+        if (ledger) ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + need;
+      } else {
+        devE[d] = 0;
+        if (ledger) {
+          ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + have;
+          ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + need - have;
+        }
+        if (!dry) {
+          dry = { stepIndex: i, dayIndex: day, deviceIndex: d, reason: dryReason(k, d), shortWh: need - have };
+          if (stopAtDry) return finish();
+        }
+      }
+    }
+
+    // 3. Camp top-ups from stores, merit order, down to each store's reserve.
+    if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
+      for (let d = 0; d < D; d++) {
+        const cap = k.deviceCapWh[d] ?? 0;
+        let want = cap - (devE[d] ?? 0);
+        if (want <= eps) continue;
+        const etaDev = k.deviceChargeEff[d] ?? 1;
+        let budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
+        for (let s = 0; s < S && want > eps && budgetInWh > eps; s++) {
+          const idx = s * D + d;
+          const eff = k.pathEff[idx] ?? 0;
+          if (eff === 0) continue;
+          const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
+          if (avail <= eps) continue;
+          const inCapWh = Math.min(budgetInWh, (k.pathMaxW[idx] ?? 0) * dt);
+          const gain = Math.min(want, inCapWh * etaDev, avail * eff * etaDev);
+          if (gain <= 0) continue;
+          const draw = gain / (eff * etaDev);
+          E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
+          budgetInWh -= gain / etaDev;
+          want -= gain;
+          devE[d] = Math.min(cap, (devE[d] ?? 0) + gain);
+          if (ledger) {
+            ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw * (1 - eff);
+            ledger[row + C.deviceChargeLossWh] = (ledger[row + C.deviceChargeLossWh] ?? 0) + draw * eff * (1 - etaDev);
+            ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
+          }
+          if (record?.onFlow) record.onFlow('top-up', i, s, d, gain);
+        }
+      }
+    }
+
+    const t = totals();
+    const margin = capAboveFloor > 0 ? t.above / capAboveFloor : 1;
+    if (margin < worstMargin) worstMargin = margin;
+    if (record) {
+      record.storedWhByStep[i] = t.stores + t.devices;
+      record.storesWhByStep[i] = t.stores;
+      const base = i * (S + D);
+      for (let s = 0; s < S; s++) record.unitWhByStep[base + s] = E[s] ?? 0;
+      for (let d = 0; d < D; d++) record.unitWhByStep[base + S + d] = devE[d] ?? 0;
+      if (ledger) {
+        ledger[row + C.storedEndWh] = t.stores + t.devices;
+        ledger[row + C.storesEndWh] = t.stores;
+        ledger[row + C.devicesEndWh] = t.devices;
+      }
+    }
+  }
+  return finish();
+
+  function finish(): SkyRun {
+    return {
+      dry,
+      worstMarginShare: Math.max(0, worstMargin),
+      storedStartByDayWh: stopAtDry ? storedStartByDayWh : storedStartByDayWh.slice(),
+      aboveFloorStartByDayWh: stopAtDry ? aboveFloorStartByDayWh : aboveFloorStartByDayWh.slice(),
+    };
+  }
+
+  function dryReason(kit: CompiledKit, d: number): DryReason {
+    let reachable = false;
+    let aboveFloor = false;
+    let belowFloor = false;
+    for (let s = 0; s < S; s++) {
+      if ((kit.pathEff[s * D + d] ?? 0) === 0) continue;
+      reachable = true;
+      const e = E[s] ?? 0;
+      const floor = kit.storeFloorWh[s] ?? 0;
+      if (e - floor > eps) aboveFloor = true;
+      else if (e > eps) belowFloor = true;
+    }
+    if (!reachable) return 'no-charging-path';
+    if (aboveFloor) return 'charge-window-too-short';
+    if (belowFloor) return 'store-at-reserve';
+    return 'stores-empty';
+  }
+}

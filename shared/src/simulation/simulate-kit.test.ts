@@ -1,0 +1,133 @@
+import { describe, expect, it } from 'vitest';
+import { isKitFeasible, simulateKit } from './simulate-kit.js';
+import type { KitEntry, TripDevice } from '../schemas/kit.js';
+import { syntheticTripSolar } from '../testing/synthetic-solar.js';
+import { testBank, testBoostConverter, testLead, testPhone, testRadio, testUsbPanel } from '../testing/fixtures.js';
+import type { TripSolarSeries } from '../sun/trip-solar-types.js';
+
+const phoneDevice = (share = 0.5): TripDevice => ({ deviceId: 'phone', spec: testPhone(share) });
+const bankLine = (count = 1, itemId = 'bank'): KitEntry => ({ itemId, count, spec: testBank() });
+const phoneLead: KitEntry = { itemId: 'lead-a-c', count: 1, spec: testLead('usb-a', 'usb-c') };
+
+function polarNight(nights: number): TripSolarSeries {
+  return syntheticTripSolar({ nights, peakWm2: 0, lowC: -20, highC: -12 });
+}
+
+describe('worked case: one phone, 2 nights, one bank, no panel (hand calculation)', () => {
+  // Synthetic trip: walk 08–16, camp 16–08; 3 trip days of 24 h, 24 h and 8 h.
+  // Phone: 15 Wh battery, uses 0.5 × 15 = 7.5 Wh/day = 0.3125 Wh/h; charges at 85 % through a USB-A → USB-C lead.
+  // Bank: 10,000 mAh × 3.7 V = 37 Wh rated × 0.85 output efficiency = 31.45 Wh usable; reserve 10 % = 3.145 Wh.
+  // Days 0 and 1: the phone ends each day full again, so each day the bank gives 7.5 / 0.85 = 8.82353 Wh.
+  // Bank at the end of day 0: 31.45 − 8.82353 = 22.62647 Wh; day 1: 13.80294 Wh; day 2 (walk only): unchanged.
+  const solar = syntheticTripSolar({ nights: 2, peakWm2: 0 });
+  const result = simulateKit({ solar, kit: [bankLine(), phoneLead], devices: [phoneDevice()], reserveShare: 0.1 });
+  const expected = result.skies[0];
+
+  it('bank energy at the end of each day', () => {
+    expect(expected?.ledger[0]?.storesEndWh).toBeCloseTo(22.62647, 4);
+    expect(expected?.ledger[1]?.storesEndWh).toBeCloseTo(13.80294, 4);
+    expect(expected?.ledger[2]?.storesEndWh).toBeCloseTo(13.80294, 4);
+    // Phone on the last day: 15 − 8 h × 0.3125 = 12.5 Wh.
+    expect(expected?.ledger[2]?.devicesEndWh).toBeCloseTo(12.5, 6);
+  });
+  it('losses: device charging loss is 15 % of the 8.82353 Wh drawn each full day', () => {
+    expect(expected?.ledger[0]?.deviceChargeLossWh).toBeCloseTo(8.82353 * 0.15, 4);
+    expect(expected?.ledger[0]?.converterLossWh).toBeCloseTo(0, 12);
+  });
+  it('lasts the trip and would run dry on day 5 (0-based 4) if it went on', () => {
+    // Keeps up compares day 2's start with day 1's (day 0 starts full by definition): 28.80 < 37.63 Wh → drains.
+    // Above the reserve: start of day 1 22.62647 − 3.145 + 15 = 34.48147 Wh, start of day 2 25.65794 Wh;
+    // drain 8.82353 Wh/day → 2.9 more days → dry during day index 2 + 2 = 4.
+    expect(result.verdict.status).toBe('lasts-trip');
+    if (result.verdict.status === 'lasts-trip') expect(result.verdict.wouldRunDryOnDayIndex).toBe(4);
+  });
+  it('the schedule charges the phone from the bank in camp through the lead', () => {
+    const topUps = result.schedule.filter((s) => s.kind === 'top-up');
+    expect(topUps.length).toBeGreaterThanOrEqual(2);
+    expect(topUps[0]).toMatchObject({ fromId: 'bank#1', toId: 'phone', leadItemIds: ['lead-a-c'], startLocalTime: '16:00' });
+    expect(topUps[0]?.energyWh).toBeCloseTo(7.5 * 16 / 24 + 7.5 * 8 / 24 - 0, 4); // refills the walk's 2.5 Wh and 16 camp hours
+  });
+});
+
+describe('verdicts', () => {
+  it('a short trip whose devices need no charging: the empty kit is feasible', () => {
+    // 1 night = 24 h + 8 h = 32 h; phone 0.3 × 15 = 4.5 Wh/day → 6 Wh < 15 Wh own battery.
+    const solar = syntheticTripSolar({ nights: 1 });
+    const input = { solar, kit: [], devices: [phoneDevice(0.3)], reserveShare: 0.1 };
+    expect(isKitFeasible(input)).toBe(true);
+    expect(simulateKit(input).verdict.status).not.toBe('runs-dry');
+  });
+  it('runs dry with no charging path and names what is missing', () => {
+    // Bank has only USB-A and USB-C sockets, the phone a USB-C socket: no lead, no path.
+    const solar = syntheticTripSolar({ nights: 4 });
+    const result = simulateKit({ solar, kit: [bankLine()], devices: [phoneDevice(0.8)], reserveShare: 0 });
+    expect(result.verdict.status).toBe('runs-dry');
+    if (result.verdict.status !== 'runs-dry') return;
+    expect(result.verdict.reason).toBe('no-charging-path');
+    expect(result.verdict.missing.map((m) => m.text)).toContain('a lead from usb-a to usb-c');
+    // 15 Wh at 12 Wh/day = 0.5 Wh/h: empty after 30 h → during day 1 (0-based).
+    expect(result.verdict.dayIndex).toBe(1);
+  });
+  it('a 12 V radio without a boost converter: "missing converter"', () => {
+    const solar = syntheticTripSolar({ nights: 4 });
+    const result = simulateKit({ solar, kit: [bankLine()], devices: [{ deviceId: 'radio', spec: testRadio() }], reserveShare: 0 });
+    expect(result.verdict.status).toBe('runs-dry');
+    if (result.verdict.status === 'runs-dry') expect(result.verdict.missing[0]?.kind).toBe('converter');
+  });
+  it('a radio charged through a boost converter with captive cables needs no lead', () => {
+    const solar = syntheticTripSolar({ nights: 3 });
+    const kit: KitEntry[] = [bankLine(3), { itemId: 'boost', count: 1, spec: testBoostConverter() }];
+    // Radio day: 13.8 V × (1.6 A × 5/60 h + 0.35 A × 1 h + 0.08 A × 8 h) = 15.50 Wh; 3 nights = 80 h = 51.7 Wh, of which
+    // 14.8 Wh from its own battery; the rest / (0.85 × 0.85) ≈ 51 Wh from 3 banks of 31.45 Wh usable.
+    const radio = testRadio({ useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 5, receiveHoursPerDay: 1, standbyHoursPerDay: 8 } });
+    const result = simulateKit({ solar, kit, devices: [{ deviceId: 'radio', spec: radio }], reserveShare: 0.1 });
+    expect(result.verdict.status).not.toBe('runs-dry');
+    expect(result.devices[0]?.paths[0]?.converterItemId).toBe('boost');
+    // Converter loss is 15 % of what is drawn for the radio.
+    const day0 = result.skies[0]?.ledger[0];
+    expect(day0?.converterLossWh).toBeGreaterThan(0);
+  });
+  it('keeps up when a panel covers the phone (expected sky) ', () => {
+    const solar = syntheticTripSolar({ nights: 5, cloudyShare: 0.5 });
+    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
+    const result = simulateKit({ solar, kit, devices: [phoneDevice(0.5)], reserveShare: 0.1 });
+    expect(result.verdict.status).toBe('keeps-up');
+    expect(result.verdict.text).toMatch(/^Keeps up: \d+ % to spare on the worst day\.$/);
+    expect(result.schedule.some((s) => s.kind === 'harvest' && s.fromId === 'panel' && s.toId === 'bank#1')).toBe(true);
+    expect(result.unusedItemIds).toEqual([]);
+  });
+  it('a panel that reaches no store is unused and harvests nothing', () => {
+    const solar = syntheticTripSolar({ nights: 2 });
+    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'micro-usb', captiveCable: false } }) }];
+    const result = simulateKit({ solar, kit, devices: [phoneDevice()], reserveShare: 0.1 });
+    expect(result.unusedItemIds).toContain('panel');
+    expect(result.skies[0]?.ledger.reduce((s, d) => s + d.harvestWh, 0)).toBe(0);
+  });
+});
+
+describe('edge cases', () => {
+  it('zero sun (polar night): no harvest, frozen hours reported, still simulated', () => {
+    const solar = polarNight(3);
+    const result = simulateKit({ solar, kit: [bankLine(2), phoneLead], devices: [phoneDevice(0.5)], reserveShare: 0.1 });
+    const ledger = result.skies[0]?.ledger ?? [];
+    expect(ledger.every((d) => d.availableHarvestWh === 0)).toBe(true);
+    expect(ledger[0]?.frozenHours).toBeCloseTo(24, 9);
+    expect(result.verdict.status).toBe('lasts-trip');
+  });
+  it('freezing days refuse harvest into lithium stores and report it', () => {
+    const solar = syntheticTripSolar({ nights: 2, lowC: -15, highC: -2 });
+    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
+    const ledger = simulateKit({ solar, kit, devices: [phoneDevice()], reserveShare: 0 }).skies[0]?.ledger ?? [];
+    expect(ledger[0]?.availableHarvestWh).toBeGreaterThan(0);
+    expect(ledger[0]?.harvestWh).toBe(0);
+    expect(ledger[0]?.frozenSpilledWh).toBeCloseTo(ledger[0]?.availableHarvestWh ?? -1, 9);
+  });
+  it('a 60-night trip runs with 61 days in each sky', () => {
+    const solar = syntheticTripSolar({ nights: 60, cloudyRunDays: 5 });
+    const kit: KitEntry[] = [bankLine(2), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
+    const result = simulateKit({ solar, kit, devices: [phoneDevice(0.6), { deviceId: 'radio', spec: testRadio() }], reserveShare: 0.1 });
+    expect(result.skies).toHaveLength(4);
+    expect(result.skies[0]?.ledger).toHaveLength(61);
+    expect(result.verdict.status).toBe('runs-dry'); // no boost converter for the radio
+  });
+});

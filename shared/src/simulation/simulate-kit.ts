@@ -1,0 +1,113 @@
+import { compileKit, type CompiledKit } from './compile-kit.js';
+import { ledgerCell, ledgerColumns, runSky, skyRecord, skyScratch, type SkyRecord, type SkyRun } from './run-sky.js';
+import type { ChargeSession, KitSimulation, KitSimulationInput, LedgerDay, SkySimulation } from './types.js';
+import { kitVerdict } from './verdict.js';
+
+/**
+ * Simulates a kit step by step over every trip day in every design sky: harvest, dispatch, the state of every store
+ * and device, the ledger per day, the verdict and the expected sky's charging schedule.
+ *
+ * Dispatch (one rule everywhere): harvest goes to stores in a fixed merit order (most usable Wh per input Wh first)
+ * within each store's input limit and room — never into lithium below 0 °C; each device uses its demand spread evenly
+ * over the day's hours from its own battery; in the camp window devices are topped up from stores in the same merit
+ * order, each store down to its reserve, within the path's and the device's charge power. A boost converter only
+ * charges a 12 V device's battery: the device's use in a step comes from its battery before that step's top-up, so it
+ * is never run live through the converter.
+ * @example simulateKit({ solar, kit: [{ itemId: 'bank', count: 1, spec: bank }], devices: [{ deviceId: 'phone', spec: phone }], reserveShare: 0.1 }).verdict.status // 'lasts-trip'
+ */
+export function simulateKit(input: KitSimulationInput): KitSimulation {
+  const k = compileKit(input);
+  const scratch = skyScratch(k);
+  const runs: { skyId: SkySimulation['skyId']; run: SkyRun }[] = [];
+  const skies: SkySimulation[] = [];
+  const schedule: ChargeSession[] = [];
+  input.solar.skies.forEach((sky, skyIndex) => {
+    const record = skyRecord(k);
+    if (skyIndex === 0) record.onFlow = sessionLogger(k, input, schedule);
+    const run = runSky(k, skyIndex, scratch, record, false);
+    runs.push({ skyId: sky.id, run });
+    skies.push({
+      skyId: sky.id,
+      ledger: ledgerDays(k, record),
+      dry: run.dry
+        ? {
+            skyId: sky.id,
+            dayIndex: run.dry.dayIndex,
+            stepIndex: run.dry.stepIndex,
+            startUtcMs: input.solar.steps[run.dry.stepIndex]?.startUtcMs ?? 0,
+            localTime: input.solar.steps[run.dry.stepIndex]?.localTime ?? '',
+            deviceId: k.devices[run.dry.deviceIndex]?.deviceId ?? '',
+            reason: run.dry.reason,
+            storeIds: k.stores.filter((_, s) => k.devices[run.dry?.deviceIndex ?? 0]?.paths[s]).map((s) => s.storeId),
+            shortWh: run.dry.shortWh,
+            missing: k.devices[run.dry.deviceIndex]?.missing ?? [],
+          }
+        : null,
+      storedWhByStep: record.storedWhByStep,
+      storesWhByStep: record.storesWhByStep,
+      unitWhByStep: record.unitWhByStep,
+      worstMarginShare: run.worstMarginShare,
+    });
+  });
+  const unusedItemIds = input.kit.map((e) => e.itemId).filter((id) => !k.usedItemIds.has(id));
+  return {
+    verdict: kitVerdict(runs, k.devices, k.stores, k.dayCount),
+    skies,
+    stores: k.stores,
+    devices: k.devices,
+    schedule,
+    unusedItemIds: input.kit.some((e) => e.spec.kind === 'bank') ? unusedItemIds.filter((id) => !k.stores.some((s) => s.itemId === id)) : unusedItemIds,
+  };
+}
+
+/**
+ * The fast path for the solver: whether the kit is feasible (no device runs dry in any design sky), stopping at the
+ * first dry step and recording nothing. Same rule as `simulateKit`.
+ * @example isKitFeasible(input) // true
+ */
+export function isKitFeasible(input: KitSimulationInput): boolean {
+  const k = compileKit(input);
+  const scratch = skyScratch(k);
+  for (let skyIndex = 0; skyIndex < input.solar.skies.length; skyIndex++) {
+    if (runSky(k, skyIndex, scratch, null, true).dry) return false;
+  }
+  return true;
+}
+
+function ledgerDays(k: CompiledKit, record: SkyRecord): LedgerDay[] {
+  const days: LedgerDay[] = [];
+  for (let d = 0; d < k.dayCount; d++) {
+    const row = { dayIndex: d } as LedgerDay;
+    for (const column of ledgerColumns) row[column] = ledgerCell(record, d, column);
+    days.push(row);
+  }
+  return days;
+}
+
+function sessionLogger(k: CompiledKit, input: KitSimulationInput, schedule: ChargeSession[]) {
+  const open = new Map<string, ChargeSession>();
+  return (kind: 'harvest' | 'top-up', stepIndex: number, from: number, to: number, energyWh: number) => {
+    if (energyWh <= 0) return;
+    const step = input.solar.steps[stepIndex];
+    if (!step) return;
+    const fromId = kind === 'harvest' ? (k.panelItemIds[from] ?? '') : (k.stores[from]?.storeId ?? '');
+    const toId = kind === 'harvest' ? (k.stores[to]?.storeId ?? '') : (k.devices[to]?.deviceId ?? '');
+    const key = `${kind}|${fromId}|${toId}`;
+    const endUtcMs = step.startUtcMs + step.durationH * 3_600_000;
+    const current = open.get(key);
+    if (current && current.endUtcMs === step.startUtcMs && current.dayIndex === step.dayIndex) {
+      current.endUtcMs = endUtcMs;
+      current.energyWh += energyWh;
+      return;
+    }
+    const path = kind === 'top-up' ? k.devices[to]?.paths[from] : null;
+    const lead = kind === 'harvest' ? k.panelReachLead[from * k.storeCount + to] : null;
+    const session: ChargeSession = {
+      kind, dayIndex: step.dayIndex, fromId, toId, converterItemId: path?.converterItemId ?? null,
+      leadItemIds: path ? path.leadItemIds : lead ? [lead] : [], startUtcMs: step.startUtcMs, endUtcMs,
+      startLocalTime: step.localTime, energyWh,
+    };
+    open.set(key, session);
+    schedule.push(session);
+  };
+}

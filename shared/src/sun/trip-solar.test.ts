@@ -251,6 +251,15 @@ describe('computeTripSolar: carry modes and skies', () => {
     expect(start?.cloudyDays.slice(0, s.cloudyRunDays).every(Boolean)).toBe(true);
   });
 
+  it('uses one bearing per day when given one per day', () => {
+    const perDay = series({ sky: clearSky, walkingBearingsDeg: [0, 180, 0, 180] });
+    const allNorth = series({ sky: clearSky, walkingBearingsDeg: [0] });
+    const walkOn = (s: TripSolarSeries, day: number) => (i: number) =>
+      s.steps[i]?.window === 'walk' && s.steps[i]?.dayIndex === day;
+    expect(sumWh(perDay, 0, walkOn(perDay, 0))).toBeCloseTo(sumWh(allNorth, 0, walkOn(allNorth, 0)), 9);
+    expect(sumWh(perDay, 0, walkOn(perDay, 1))).toBeLessThan(sumWh(allNorth, 0, walkOn(allNorth, 1)) * 0.8);
+  });
+
   it('gives a steep pack panel no tilt gain under overcast', () => {
     const overcast = {
       clearShare: 0,

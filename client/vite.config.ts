@@ -10,6 +10,11 @@ export default defineConfig({
   resolve: {
     alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) },
   },
+  optimizeDeps: {
+    // Crawl every page up front: lazy routes otherwise reveal new dependencies on first visit, and the
+    // dev server's re-optimisation reload breaks that first dynamic import.
+    entries: ['index.html', 'src/**/*.{ts,tsx}', '!src/**/*.test.{ts,tsx}', '!src/testing/**'],
+  },
   server: {
     port: Number(process.env.CLIENT_DEV_PORT ?? 5173),
     proxy: { '/api': { target: apiProxyTarget, changeOrigin: false } },

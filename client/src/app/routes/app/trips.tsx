@@ -30,7 +30,8 @@ export default function TripsRoute() {
       <EmptyState title="No trips planned yet" illustration={<TripsIllustration />}>
         <p>
           Planning a trip comes after the locker: you will give the place, the dates and your devices, and Gramwatt will
-          work out the lightest kit from your own gear, day by day. Not ready yet — nothing is hidden here.
+          work out the lightest kit from your own gear, day by day. That part is still being built, so this list stays
+          empty for now.
         </p>
       </EmptyState>
     </>

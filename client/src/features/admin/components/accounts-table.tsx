@@ -63,7 +63,13 @@ export function AccountsTable() {
           </Alert>
         )}
       </div>
-      <div className="overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card">
+      {/* Focusable so keyboard users can scroll the table sideways on a phone. */}
+      <div
+        tabIndex={0}
+        role="region"
+        aria-label="Accounts table"
+        className="overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card"
+      >
         <table className="w-full min-w-[40rem] border-collapse text-left text-sm">
           <caption className="sr-only">Accounts, with their role and whether they can sign in</caption>
           <thead className="bg-firn-100 text-scree-700">

@@ -26,5 +26,12 @@ export default defineConfig({
     outDir: 'dist',
     emptyOutDir: true,
     sourcemap: true,
+    rollupOptions: {
+      treeshake: {
+        // The shared package is pure (no I/O, no globals touched at import), so a page keeps only the
+        // schemas it uses instead of every module the barrel re-exports.
+        moduleSideEffects: (id: string) => !/[\\/]shared[\\/](dist|src)[\\/]/.test(id),
+      },
+    },
   },
 });

@@ -1,6 +1,7 @@
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { accounts } from '../src/database/schema';
+import { AccountsService } from '../src/users/accounts.service';
 import { type TestApp, insertAccount, signInToken, startTestApp, testPassword } from './support/test-app';
 
 describe('admin accounts', () => {
@@ -115,6 +116,22 @@ describe('admin accounts', () => {
       // Re-enabling the second makes stepping down possible again.
       await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(token)).send({ disabled: false }).expect(200);
       await t.http().patch(`/api/admin/accounts/${first.id}`).set(bearer(token)).send({ role: 'member' }).expect(200);
+    });
+
+    it('lets only one of two concurrent demotions of the last two admins through', async () => {
+      const first = await insertAccount(t.db, { role: 'admin' });
+      const second = await insertAccount(t.db, { role: 'admin' });
+      const service = t.app.get(AccountsService);
+      const results = await Promise.allSettled([
+        service.update(first.id, { role: 'member' }),
+        service.update(second.id, { disabled: true }),
+      ]);
+      expect(results.map((r) => r.status).sort()).toEqual(['fulfilled', 'rejected']);
+      const active = await t.db
+        .select()
+        .from(accounts)
+        .where(and(eq(accounts.role, 'admin'), eq(accounts.disabled, false)));
+      expect(active).toHaveLength(1);
     });
 
     it('an admin may re-confirm their own role (no change is not a demotion)', async () => {

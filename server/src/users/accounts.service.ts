@@ -69,6 +69,7 @@ export class AccountsService {
         .select({ id: accounts.id })
         .from(accounts)
         .where(and(eq(accounts.role, 'admin'), eq(accounts.disabled, false)))
+        .orderBy(asc(accounts.id)) // one lock order for every transaction: no deadlock
         .for('update');
       const [current] = await tx.select().from(accounts).where(eq(accounts.id, id)).limit(1).for('update');
       if (!current) throw new NotFoundException('No such account');

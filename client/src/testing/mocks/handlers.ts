@@ -13,6 +13,8 @@ const validationError = (issues: Array<{ path: PropertyKey[]; message: string }>
     issues.map((issue) => ({ path: issue.path.map(String).join('.'), message: issue.message })),
   );
 
+const takenMessage = 'An account with this e-mail already exists';
+
 const unauthorised = () => apiError(401, 'Sign in to continue');
 
 /** A fake of the API's auth and admin routes, following the same contract as the server. */
@@ -37,10 +39,11 @@ export const handlers = [
     const parsed = signUpSchema.safeParse(await request.json());
     if (!parsed.success) return validationError(parsed.error.issues);
     if (db.accounts.some((account) => account.email === parsed.data.email))
-      return apiError(409, 'An account with this e-mail already exists');
+      return apiError(409, takenMessage, [{ path: 'email', message: takenMessage }]);
     const account = buildAccount({ email: parsed.data.email, displayName: parsed.data.displayName });
     db.accounts.push(account);
     db.passwords.set(account.email, parsed.data.password);
+    db.sessionAccountId = account.id;
     return HttpResponse.json({ account }, { status: 201 });
   }),
 

@@ -83,7 +83,20 @@ describe('SignUpForm', () => {
     expect(onSuccess).not.toHaveBeenCalled();
   });
 
-  it('creates the account, signs in with it and hands it over', async () => {
+  it('shows a 409 without field paths beside the e-mail field too', async () => {
+    server.use(
+      http.post('/api/auth/sign-up', () =>
+        HttpResponse.json({ statusCode: 409, message: 'That e-mail is already in use', errors: [] }, { status: 409 }),
+      ),
+    );
+    const { user } = setup();
+    await fillIn(user);
+    await vi.waitFor(() =>
+      expect(screen.getByLabelText('E-mail')).toHaveAccessibleDescription('That e-mail is already in use'),
+    );
+  });
+
+  it('creates the account (signed in by the server) and hands it over', async () => {
     const { user, onSuccess } = setup();
     await fillIn(user);
     await vi.waitFor(() =>

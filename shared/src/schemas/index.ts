@@ -5,3 +5,4 @@ export * from './items.js';
 export * from './devices.js';
 export * from './kit.js';
 export * from './trip-solar.js';
+export * from './locker.js';

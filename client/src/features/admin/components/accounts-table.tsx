@@ -2,6 +2,7 @@ import type { Account, AccountRole } from '@gramwatt/shared';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { cn } from '@/components/ui/cn';
 import { Dialog } from '@/components/ui/dialog';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Select, type SelectOption } from '@/components/ui/select';
@@ -68,11 +69,12 @@ export function AccountsTable() {
         tabIndex={0}
         role="region"
         aria-label="Accounts table"
-        className="overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card"
+        className="relative overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card"
       >
-        <table className="w-full min-w-[40rem] border-collapse text-left text-sm">
+        {/* On a phone each account becomes a small card: name and e-mail on top, role and sign-in below. */}
+        <table className="w-full border-collapse text-left text-sm max-md:block md:min-w-[40rem]">
           <caption className="sr-only">Accounts, with their role and whether they can sign in</caption>
-          <thead className="bg-firn-100 text-scree-700">
+          <thead className="bg-firn-100 text-scree-700 max-md:sr-only">
             <tr>
               <th scope="col" className="px-4 py-3 font-semibold">
                 Name
@@ -91,22 +93,28 @@ export function AccountsTable() {
               </th>
             </tr>
           </thead>
-          <tbody className="divide-y-2 divide-firn-200">
+          <tbody className="divide-y-2 divide-firn-200 max-md:block">
             {accounts.data.map((account) => {
               const isMe = account.id === me?.id;
               const isBusy = pending?.accountId === account.id;
               const shownRole = (isBusy && pending?.data.role) || account.role;
               return (
-                <tr key={account.id} className={account.disabled ? 'text-scree-600' : 'text-scree-900'}>
-                  <th scope="row" className="px-4 py-3 font-medium">
+                <tr
+                  key={account.id}
+                  className={cn(
+                    'max-md:grid max-md:grid-cols-[auto_1fr_auto] max-md:items-center max-md:gap-x-4 max-md:gap-y-2 max-md:p-4',
+                    account.disabled ? 'text-scree-600' : 'text-scree-900',
+                  )}
+                >
+                  <th scope="row" className="px-4 py-3 font-medium max-md:col-span-3 max-md:p-0">
                     {account.displayName}
                     {isMe && <span className="font-normal text-scree-600"> (you)</span>}
                     <span className="block text-xs font-normal text-scree-600">
                       Joined {joinedFormat.format(new Date(account.createdAt))}
                     </span>
                   </th>
-                  <td className="px-4 py-3 break-all">{account.email}</td>
-                  <td className="px-4 py-3">
+                  <td className="px-4 py-3 break-all max-md:col-span-3 max-md:p-0">{account.email}</td>
+                  <td className="px-4 py-3 max-md:p-0">
                     <Select
                       aria-label={`Role of ${account.displayName}`}
                       options={roleOptions}
@@ -121,8 +129,10 @@ export function AccountsTable() {
                       }
                     />
                   </td>
-                  <td className="px-4 py-3">{account.disabled ? 'Disabled' : 'Allowed'}</td>
-                  <td className="px-4 py-3 text-right">
+                  <td className="px-4 py-3 max-md:p-0 max-md:before:text-scree-600 max-md:before:content-['Sign-in:_']">
+                    {account.disabled ? 'Disabled' : 'Allowed'}
+                  </td>
+                  <td className="px-4 py-3 text-right max-md:p-0">
                     {account.disabled ? (
                       <Button
                         variant="secondary"

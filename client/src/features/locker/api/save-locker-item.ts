@@ -1,0 +1,27 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { getLockerItemsQueryOptions } from './get-locker-items';
+import type { LockerItem, LockerItemBody } from './types';
+
+export interface SaveLockerItemInput {
+  /** Present to change an item (`PUT`), absent to add one (`POST`). */
+  itemId?: string;
+  body: LockerItemBody;
+}
+
+/** `POST /api/locker/items` or `PUT /api/locker/items/:id`; a 400 carries field paths such as `spec.ratedW`. */
+export const saveLockerItem = async ({ itemId, body }: SaveLockerItemInput): Promise<LockerItem> =>
+  (
+    await apiRequest<{ item: LockerItem }>(
+      itemId ? `/locker/items/${encodeURIComponent(itemId)}` : '/locker/items',
+      { method: itemId ? 'PUT' : 'POST', body: { ...body } },
+    )
+  ).item;
+
+export const useSaveLockerItem = () => {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveLockerItem,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey }),
+  });
+};

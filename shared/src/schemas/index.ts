@@ -6,3 +6,5 @@ export * from './devices.js';
 export * from './kit.js';
 export * from './trip-solar.js';
 export * from './locker.js';
+export * from './locker-files.js';
+export * from './catalogue.js';

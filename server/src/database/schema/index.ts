@@ -1,2 +1,4 @@
 export * from './accounts';
 export * from './locker-items';
+export * from './locker-item-files';
+export * from './catalogue-entries';

@@ -35,6 +35,15 @@ describe('health, docs and errors', () => {
     const ref = doc.paths['/api/auth/sign-up']?.post?.requestBody?.content['application/json']?.schema.$ref ?? '';
     const schema = doc.components.schemas[ref.split('/').pop() ?? ''];
     expect(schema?.properties?.password?.minLength).toBe(10);
+
+    const me = (doc.paths['/api/auth/me']?.get ?? {}) as {
+      security?: Record<string, unknown>[];
+      responses?: Record<string, { content?: Record<string, { schema: { $ref?: string } }> }>;
+    };
+    expect(me.security).toEqual(expect.arrayContaining([{ cookie: [] }, { bearer: [] }]));
+    const errorRef = me.responses?.['401']?.content?.['application/json']?.schema.$ref ?? '';
+    const errorSchema = doc.components.schemas[errorRef.split('/').pop() ?? ''] as { required?: string[] } | undefined;
+    expect(errorSchema?.required).toEqual(['statusCode', 'message', 'errors']);
   });
 
   it('serves Swagger UI with its assets from this server, not a CDN', async () => {

@@ -4,6 +4,7 @@ import { ApiTags } from '@nestjs/swagger';
 import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Response } from 'express';
 import { ZodResponse } from 'nestjs-zod';
+import { ApiErrorResponses, ApiSession } from '../common/api-error-responses.decorator';
 import type { AuthConfig } from '../config';
 import type { AccountRow } from '../database/schema';
 import { AccountResponseDto } from '../users/account.dto';
@@ -28,6 +29,7 @@ export class AuthController {
   @UseGuards(ThrottlerGuard)
   @Post('sign-up')
   @ZodResponse({ status: HttpStatus.CREATED, type: AccountResponseDto, description: 'The new account; the session cookie is set' })
+  @ApiErrorResponses(400, 409, 429)
   async signUp(@Body() body: SignUpDto, @Res({ passthrough: true }) response: Response) {
     const account = await this.auth.signUp(body);
     setSessionCookie(response, this.auth.issueToken(account), this.authConfig());
@@ -39,6 +41,7 @@ export class AuthController {
   @UseGuards(ThrottlerGuard)
   @Post('sign-in')
   @ZodResponse({ status: HttpStatus.OK, type: AccountResponseDto, description: 'The account; the session cookie is set' })
+  @ApiErrorResponses(400, 401, 429)
   async signIn(@Body() body: SignInDto, @Res({ passthrough: true }) response: Response) {
     const account = await this.auth.signIn(body);
     setSessionCookie(response, this.auth.issueToken(account), this.authConfig());
@@ -55,6 +58,7 @@ export class AuthController {
 
   /** The signed-in account. */
   @Get('me')
+  @ApiSession()
   @ZodResponse({ status: HttpStatus.OK, type: AccountResponseDto })
   me(@CurrentAccount() account: AccountRow) {
     return { account: toAccount(account) };

@@ -7,7 +7,7 @@ export interface DialogProps {
   title: string;
   description?: ReactNode;
   children?: ReactNode;
-  /** The buttons along the bottom; put the safe choice first so it gets focus. */
+  /** The buttons along the bottom; give the safe choice `data-autofocus` so it takes the focus on open. */
   actions?: ReactNode;
 }
 

@@ -69,6 +69,7 @@ describe('AccountsTable', () => {
 
     await user.click(await screen.findByRole('button', { name: 'Disable Ash Member' }));
     const dialog = await screen.findByRole('dialog', { name: 'Disable Ash Member?' });
+    expect(within(dialog).getByRole('button', { name: 'Keep allowed' })).toHaveFocus();
     await user.click(within(dialog).getByRole('button', { name: 'Keep allowed' }));
     expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
     expect(patches).toEqual([]);

@@ -174,7 +174,7 @@ export function AccountsTable() {
         description="They are signed out on their next request and cannot sign in until an admin enables the account again. Their locker and trips are kept."
         actions={
           <>
-            <Button variant="secondary" onClick={() => setToDisable(null)}>
+            <Button variant="secondary" data-autofocus onClick={() => setToDisable(null)}>
               Keep allowed
             </Button>
             <Button

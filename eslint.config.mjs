@@ -1,6 +1,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 
 /**
  * House rules (../shared/STYLE.md): no `any`, no import cycles, dependencies point one way
@@ -12,6 +13,14 @@ export default tseslint.config(
   ...tseslint.configs.recommended,
   {
     plugins: { 'import-x': importX },
+    settings: {
+      'import-x/resolver-next': [
+        createTypeScriptImportResolver({
+          project: ['shared/tsconfig.json', 'server/tsconfig.json', 'client/tsconfig.json', 'seed/tsconfig.json'],
+          noWarnOnMultipleProjects: true,
+        }),
+      ],
+    },
     rules: {
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],

@@ -35,18 +35,29 @@ export interface CompiledKit {
   deviceDemandWhPerH: Float64Array;
   deviceChargeInW: Float64Array;
   deviceChargeEff: Float64Array;
-  /** store × device: path efficiency (0 = no path) and most power into the device, W. */
+  /** store × device: best path efficiency (0 = no path). */
   pathEff: Float64Array;
-  pathMaxW: Float64Array;
+  /**
+   * store × device: the lower convex hull of the paths' (battery gain W, store draw W) points, from the origin —
+   * the least a store gives up for each charge rate when the device may be switched between paths within a step.
+   * Points `hullOffset[i] … + hullCount[i]`, rising in both coordinates; `hullPathEff` is each point's path efficiency.
+   */
+  hullOffset: Int32Array;
+  hullCount: Int32Array;
+  hullGainW: Float64Array;
+  hullDrawW: Float64Array;
+  hullPathEff: Float64Array;
+  /** Devices that need a charging path (own battery short of the trip); only they are topped up. */
+  deviceTopsUp: Uint8Array;
   freezeBlocksDeviceTopUps: boolean;
   reserveShare: number;
   usedItemIds: Set<string>;
 }
 
 /**
- * Merit order of stores for both harvest and top-ups: most usable Wh per input Wh first (charge × output
- * efficiency), then larger input limit, larger capacity, then item id. The order depends only on each store's own
- * spec — never on its state or on the other items — which is what makes the dispatch monotone (see README).
+ * Merit order of stores for top-ups: most usable Wh per input Wh first (charge × output efficiency) — the store
+ * cheapest to refill is used first, so a less efficient store added to a kit stays full as a spare and takes no
+ * harvest — then larger input limit, larger capacity, then item id. It depends only on each store's own spec.
  */
 function meritCompare(a: { spec: BankSpec; itemId: string; unit: number }, b: { spec: BankSpec; itemId: string; unit: number }): number {
   const ea = a.spec.chargeEfficiency * a.spec.outputEfficiency;
@@ -89,6 +100,8 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     else if (spec.kind === 'bank') for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
   }
   storeEntries.sort(meritCompare);
+  // Panels water-fill one after another; a fixed order by item id keeps the result independent of the kit's line order.
+  panels.sort((a, b) => (a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0));
   const usedItemIds = new Set<string>();
 
   const storeCount = storeEntries.length;
@@ -130,7 +143,11 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
 
   const deviceCount = devices.length;
   const pathEff = new Float64Array(storeCount * deviceCount);
-  const pathMaxW = new Float64Array(storeCount * deviceCount);
+  const hullOffset = new Int32Array(storeCount * deviceCount);
+  const hullCount = new Int32Array(storeCount * deviceCount);
+  const hullGain: number[] = [];
+  const hullDraw: number[] = [];
+  const hullEff: number[] = [];
   const tripDays = solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
   const deviceUnits: DeviceUnit[] = devices.map((d, di) => {
     const paths: (ChargePath | null)[] = [];
@@ -139,11 +156,19 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
       const found = chargePaths(s.spec, d.spec, converters, leads);
       const best = found.paths[0] ?? null;
       paths.push(best);
+      const idx = si * deviceCount + di;
       if (best) {
-        pathEff[si * deviceCount + di] = best.pathEfficiency;
-        pathMaxW[si * deviceCount + di] = best.maxDeviceInputW;
-        if (best.converterItemId) usedItemIds.add(best.converterItemId);
-        for (const id of best.leadItemIds) usedItemIds.add(id);
+        pathEff[idx] = best.pathEfficiency;
+        const hull = lowerHull(found.paths, d.spec.chargeEfficiency);
+        hullOffset[idx] = hullGain.length;
+        hullCount[idx] = hull.length;
+        for (const h of hull) {
+          hullGain.push(h.gainW);
+          hullDraw.push(h.drawW);
+          hullEff.push(h.path.pathEfficiency);
+          if (h.path.converterItemId) usedItemIds.add(h.path.converterItemId);
+          for (const id of h.path.leadItemIds) usedItemIds.add(id);
+        }
       } else for (const m of found.missing) missing.set(m.text, m);
     });
     const demandWhPerDay = deviceDemandWhPerDay(d.spec);
@@ -168,9 +193,38 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     deviceDemandWhPerH: Float64Array.from(deviceUnits, (d) => d.demandWhPerDay / 24),
     deviceChargeInW: Float64Array.from(devices, (d) => deviceChargePowerW(d.spec)),
     deviceChargeEff: Float64Array.from(devices, (d) => d.spec.chargeEfficiency),
-    pathEff, pathMaxW,
+    pathEff, hullOffset, hullCount,
+    hullGainW: Float64Array.from(hullGain), hullDrawW: Float64Array.from(hullDraw), hullPathEff: Float64Array.from(hullEff),
+    deviceTopsUp: Uint8Array.from(deviceUnits, (d) => (d.needsChargingPath ? 1 : 0)),
     freezeBlocksDeviceTopUps: options.freezeBlocksDeviceTopUps ?? false,
     reserveShare,
     usedItemIds,
   };
+}
+
+/**
+ * The lower convex hull, from the origin, of the paths' (battery gain W, store draw W) points: gain = device input
+ * power × device charge efficiency, draw = device input power / path efficiency. Time-sharing two paths within a step
+ * reaches any point on a segment, so the hull is the least draw for each gain rate; a path that only adds choice can
+ * only lower it — which keeps the dispatch monotone when a converter or lead is added.
+ */
+function lowerHull(paths: readonly ChargePath[], deviceChargeEff: number): { gainW: number; drawW: number; path: ChargePath }[] {
+  const points = paths
+    .filter((p) => p.maxDeviceInputW > 0 && p.pathEfficiency > 0)
+    .map((path) => ({ gainW: path.maxDeviceInputW * deviceChargeEff, drawW: path.maxDeviceInputW / path.pathEfficiency, path }))
+    .sort((a, b) => a.gainW - b.gainW || a.drawW - b.drawW);
+  const hull: { gainW: number; drawW: number; path: ChargePath }[] = [];
+  for (const p of points) {
+    // Drop hull points that lie on or above the segment from their predecessor (or the origin) to p.
+    while (hull.length > 0) {
+      const b = hull[hull.length - 1];
+      const a = hull.length > 1 ? hull[hull.length - 2] : { gainW: 0, drawW: 0 };
+      if (!b || !a) break;
+      const cross = (b.gainW - a.gainW) * (p.drawW - a.drawW) - (b.drawW - a.drawW) * (p.gainW - a.gainW);
+      if (cross <= 0 || b.gainW === p.gainW) hull.pop();
+      else break;
+    }
+    hull.push(p);
+  }
+  return hull;
 }

@@ -47,6 +47,7 @@ export interface SkyScratch {
   panelRemWh: Float64Array;
   storedStartByDayWh: Float64Array;
   aboveFloorStartByDayWh: Float64Array;
+  storeLimitWh: Float64Array;
 }
 
 /** Allocates scratch buffers for a compiled kit. */
@@ -57,6 +58,7 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     panelRemWh: new Float64Array(k.panelCount),
     storedStartByDayWh: new Float64Array(k.dayCount),
     aboveFloorStartByDayWh: new Float64Array(k.dayCount),
+    storeLimitWh: new Float64Array(k.storeCount),
   };
 }
 
@@ -76,7 +78,8 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 }
 
 /**
- * Runs one design sky step by step: harvest into stores (merit order, within input limits and room, none below 0 °C),
+ * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
+ * none below 0 °C),
  * then each device uses its demand for the step from its own battery, then — in the camp window — devices are
  * topped up from stores (merit order, down to each store's reserve, within path and device charge power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
@@ -143,25 +146,46 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
       availWh += w;
     }
     if (availWh > 0 && !frozen) {
-      for (let s = 0; s < S; s++) {
-        const cap = k.storeCapWh[s] ?? 0;
-        const e = E[s] ?? 0;
-        const room = cap - e;
-        if (room <= eps) continue;
-        const etaC = k.storeChargeEff[s] ?? 1;
-        const etaO = k.storeOutputEff[s] ?? 1;
-        const limit = Math.min((k.storeInputMaxW[s] ?? 0) * dt, room / (etaC * etaO));
-        let take = 0;
-        for (let p = 0; p < P && take < limit; p++) {
-          const r = rem[p] ?? 0;
-          if (r <= 0 || k.panelReach[p * S + s] !== 1) continue;
-          const t = Math.min(r, limit - take);
-          rem[p] = r - t;
-          take += t;
-          if (record?.onFlow) record.onFlow('harvest', i, p, s, t);
+      // Harvest goes to the stores with the most room (usable Wh), levelling their room, within input limits:
+      // each panel in turn (item id order) water-fills the stores its port reaches.
+      const limitLeft = scratch.storeLimitWh;
+      for (let s = 0; s < S; s++) limitLeft[s] = (k.storeInputMaxW[s] ?? 0) * dt;
+      for (let p = 0; p < P; p++) {
+        const h = rem[p] ?? 0;
+        if (h <= 0) continue;
+        let maxRoom = 0;
+        let total0 = 0;
+        for (let s = 0; s < S; s++) {
+          if (k.panelReach[p * S + s] !== 1) continue;
+          const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+          if (room <= eps) continue;
+          if (room > maxRoom) maxRoom = room;
+          total0 += Math.min(limitLeft[s] ?? 0, room / storeEta(k, s));
         }
-        if (take > 0) {
-          E[s] = Math.min(cap, e + take * etaC * etaO);
+        if (total0 <= 0) continue;
+        let level = 0;
+        if (total0 > h) {
+          let lo = 0;
+          let hi = maxRoom;
+          for (let iter = 0; iter < 60; iter++) {
+            const mid = (lo + hi) / 2;
+            if (fillAtLevel(k, E, limitLeft, p, mid) > h) lo = mid;
+            else hi = mid;
+          }
+          level = hi;
+        }
+        for (let s = 0; s < S; s++) {
+          if (k.panelReach[p * S + s] !== 1) continue;
+          const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+          if (room <= eps) continue;
+          const etaC = k.storeChargeEff[s] ?? 1;
+          const etaO = k.storeOutputEff[s] ?? 1;
+          const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
+          if (!(take > 0)) continue;
+          rem[p] = (rem[p] ?? 0) - take;
+          limitLeft[s] = (limitLeft[s] ?? 0) - take;
+          E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
+          if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
           if (ledger) {
             ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
             ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
@@ -199,31 +223,51 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
       }
     }
 
-    // 3. Camp top-ups from stores, merit order, down to each store's reserve.
+    // 3. Camp top-ups of the devices that need charging, from stores in merit order, down to each store's reserve.
+    //    The device's step is shared between stores; within a store it may be switched between paths (the hull).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       for (let d = 0; d < D; d++) {
+        if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
         let want = cap - (devE[d] ?? 0);
         if (want <= eps) continue;
         const etaDev = k.deviceChargeEff[d] ?? 1;
-        let budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
-        for (let s = 0; s < S && want > eps && budgetInWh > eps; s++) {
+        let timeShare = 1;
+        for (let s = 0; s < S && want > eps && timeShare > 1e-12; s++) {
           const idx = s * D + d;
-          const eff = k.pathEff[idx] ?? 0;
-          if (eff === 0) continue;
+          const n = k.hullCount[idx] ?? 0;
+          if (n === 0) continue;
           const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
           if (avail <= eps) continue;
-          const inCapWh = Math.min(budgetInWh, (k.pathMaxW[idx] ?? 0) * dt);
-          const gain = Math.min(want, inCapWh * etaDev, avail * eff * etaDev);
-          if (gain <= 0) continue;
-          const draw = gain / (eff * etaDev);
+          const off = k.hullOffset[idx] ?? 0;
+          const span = timeShare * dt;
+          // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want, then by what the store holds.
+          const maxGainW = k.hullGainW[off + n - 1] ?? 0;
+          let x = Math.min(want / span, maxGainW);
+          if (hullDrawAt(k, off, n, x) * span > avail) x = hullGainAtDraw(k, off, n, avail / span);
+          if (!(x > 0)) continue;
+          // Split the rate between the two hull points around x, each with its own efficiencies.
+          let seg = 0;
+          while (seg < n - 1 && (k.hullGainW[off + seg] ?? 0) < x) seg++;
+          const g1 = k.hullGainW[off + seg] ?? 0;
+          const e1 = k.hullPathEff[off + seg] ?? 1;
+          const g0 = seg > 0 ? (k.hullGainW[off + seg - 1] ?? 0) : 0;
+          const e0 = seg > 0 ? (k.hullPathEff[off + seg - 1] ?? 1) : 1;
+          const f1 = seg > 0 ? (x - g0) / (g1 - g0) : x / g1;
+          const gain1Wh = f1 * g1 * span;
+          const gain0Wh = seg > 0 ? (1 - f1) * g0 * span : 0;
+          const gain = gain0Wh + gain1Wh;
+          const draw0 = gain0Wh / (e0 * etaDev);
+          const draw1 = gain1Wh / (e1 * etaDev);
+          const draw = draw0 + draw1;
           E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
-          budgetInWh -= gain / etaDev;
+          devE[d] = (devE[d] ?? 0) + gain;
           want -= gain;
-          devE[d] = Math.min(cap, (devE[d] ?? 0) + gain);
+          timeShare = seg > 0 ? 0 : timeShare * (1 - f1);
           if (ledger) {
-            ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw * (1 - eff);
-            ledger[row + C.deviceChargeLossWh] = (ledger[row + C.deviceChargeLossWh] ?? 0) + draw * eff * (1 - etaDev);
+            ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
+            ledger[row + C.deviceChargeLossWh] =
+              (ledger[row + C.deviceChargeLossWh] ?? 0) + draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
             ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
           }
           if (record?.onFlow) record.onFlow('top-up', i, s, d, gain);
@@ -275,4 +319,50 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
     if (belowFloor) return 'store-at-reserve';
     return 'stores-empty';
   }
+}
+
+/** Draw rate (W) on a store–device hull at gain rate x (W), linear between points, through the origin. */
+function hullDrawAt(k: CompiledKit, off: number, n: number, x: number): number {
+  let g0 = 0;
+  let c0 = 0;
+  for (let j = 0; j < n; j++) {
+    const g1 = k.hullGainW[off + j] ?? 0;
+    const c1 = k.hullDrawW[off + j] ?? 0;
+    if (x <= g1) return c0 + ((c1 - c0) * (x - g0)) / (g1 - g0);
+    g0 = g1;
+    c0 = c1;
+  }
+  return c0;
+}
+
+/** Gain rate (W) on a store–device hull at draw rate c (W): the inverse of `hullDrawAt`. */
+function hullGainAtDraw(k: CompiledKit, off: number, n: number, c: number): number {
+  let g0 = 0;
+  let c0 = 0;
+  for (let j = 0; j < n; j++) {
+    const g1 = k.hullGainW[off + j] ?? 0;
+    const c1 = k.hullDrawW[off + j] ?? 0;
+    if (c <= c1) return g0 + ((g1 - g0) * (c - c0)) / (c1 - c0);
+    g0 = g1;
+    c0 = c1;
+  }
+  return g0;
+}
+
+/** Usable Wh a store gains per input Wh (charge × output efficiency). */
+function storeEta(k: CompiledKit, s: number): number {
+  return (k.storeChargeEff[s] ?? 1) * (k.storeOutputEff[s] ?? 1);
+}
+
+/** Input Wh panel p would put into its reachable stores to bring every store's room down to `level` (usable Wh). */
+function fillAtLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p: number, level: number): number {
+  const S = k.storeCount;
+  let total = 0;
+  for (let s = 0; s < S; s++) {
+    if (k.panelReach[p * S + s] !== 1) continue;
+    const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+    if (room <= level) continue;
+    total += Math.min(limitLeft[s] ?? 0, (room - level) / storeEta(k, s));
+  }
+  return total;
 }

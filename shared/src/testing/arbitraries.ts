@@ -8,9 +8,15 @@ import { syntheticTripSolar } from './synthetic-solar.js';
 /** fast-check generators of schema-valid items, devices, kits and synthetic trips for property tests. */
 
 const usbConnectors: Connector[] = ['usb-a', 'usb-c', 'micro-usb'];
-const connector = fc.constantFrom(...usbConnectors);
+// Weighted like real gear: USB-C most common, then USB-A, then micro-USB.
+const connector = fc.oneof(
+  { weight: 5, arbitrary: fc.constant<Connector>('usb-c') },
+  { weight: 3, arbitrary: fc.constant<Connector>('usb-a') },
+  { weight: 2, arbitrary: fc.constant<Connector>('micro-usb') },
+);
 const port = fc.record({ connector, captiveCable: fc.boolean() });
-const share = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+/** A number spread evenly over [min, max] (fc.double leans hard towards the ends and tiny values). */
+export const share = (min: number, max: number) => fc.integer({ min: 0, max: 10_000 }).map((i) => min + ((max - min) * i) / 10_000);
 
 export const panelArb = fc
   .record({
@@ -46,19 +52,24 @@ export const converterArb = fc
 
 export const leadArb = fc
   .record({
-    fromConnector: fc.constantFrom<Connector>(...usbConnectors, 'barrel-5.5x2.1', 'radio-dc'),
-    toConnector: fc.constantFrom<Connector>(...usbConnectors, 'barrel-5.5x2.1', 'radio-dc'),
+    fromConnector: fc.constantFrom<Connector>('usb-a', 'usb-c', 'usb-c', 'barrel-5.5x2.1'),
+    toConnector: fc.constantFrom<Connector>(...usbConnectors, 'usb-c', 'barrel-5.5x2.1', 'radio-dc'),
     lengthM: share(0.1, 2), massG: fc.integer({ min: 5, max: 80 }),
   })
   .map((l) => leadSpecSchema.parse({ kind: 'lead', ...l }));
 
-export const kitItemArb: fc.Arbitrary<KitItemSpec> = fc.oneof(panelArb, bankArb, converterArb, leadArb);
+export const kitItemArb: fc.Arbitrary<KitItemSpec> = fc.oneof(
+  { weight: 3, arbitrary: panelArb },
+  { weight: 4, arbitrary: bankArb },
+  { weight: 2, arbitrary: converterArb },
+  { weight: 3, arbitrary: leadArb },
+);
 
 const usbDeviceArb = fc
   .record({
     deviceKind: fc.constantFrom('phone', 'messenger', 'headlamp', 'camera') as fc.Arbitrary<DeviceSpec['deviceKind']>,
     ownBatteryWh: share(1, 25), chargesVia: fc.constantFrom('usb-5v', 'usb-pd') as fc.Arbitrary<DeviceSpec['chargesVia']>,
-    chargePowerW: share(2, 20), chargeEfficiency: share(0.7, 0.95), chargePort: port, share: share(0, 1.2),
+    chargePowerW: share(2, 20), chargeEfficiency: share(0.7, 0.95), chargePort: port, share: share(0, 1.5),
   })
   .map(({ share: batterySharePerDay, ...d }) =>
     deviceSpecSchema.parse({ kind: 'device', ...d, useProfile: { basis: 'battery-share', batterySharePerDay } }),
@@ -80,14 +91,24 @@ const radioArb = fc
 
 export const deviceArb: fc.Arbitrary<DeviceSpec> = fc.oneof({ weight: 3, arbitrary: usbDeviceArb }, { weight: 1, arbitrary: radioArb });
 
-/** A kit from a list of item specs (each its own line, count 1–2). */
+/** Leads most hikers carry; half the generated kits hold them, so that charging paths exist often enough to matter. */
+const commonLeads = [
+  leadSpecSchema.parse({ kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 }),
+  leadSpecSchema.parse({ kind: 'lead', fromConnector: 'usb-c', toConnector: 'usb-c', lengthM: 0.3, massG: 15 }),
+  leadSpecSchema.parse({ kind: 'lead', fromConnector: 'usb-a', toConnector: 'micro-usb', lengthM: 0.3, massG: 15 }),
+];
+
+/** A kit from a list of item specs (each its own line, count 1–2), half the time with the common leads. */
 export const kitArb = (maxLines = 6): fc.Arbitrary<KitEntry[]> =>
   fc
-    .array(fc.record({ spec: kitItemArb, count: fc.integer({ min: 1, max: 2 }) }), { maxLength: maxLines })
-    .map((lines) => lines.map((l, i) => ({ itemId: `item-${i}`, count: l.count, spec: l.spec })));
+    .tuple(fc.array(fc.record({ spec: kitItemArb, count: fc.integer({ min: 1, max: 2 }) }), { maxLength: maxLines, size: 'max' }), fc.boolean())
+    .map(([lines, withCommonLeads]) => [
+      ...lines.map((l, i) => ({ itemId: `item-${i}`, count: l.count, spec: l.spec })),
+      ...(withCommonLeads ? commonLeads.map((spec, i) => ({ itemId: `common-lead-${i}`, count: 1, spec })) : []),
+    ]);
 
 export const devicesArb: fc.Arbitrary<TripDevice[]> = fc
-  .array(deviceArb, { minLength: 1, maxLength: 3 })
+  .array(deviceArb, { minLength: 1, maxLength: 2 })
   .map((ds) => ds.map((spec, i) => ({ deviceId: `device-${i}`, spec })));
 
 /** A synthetic trip: nights, peak irradiance, temperatures (some freezing), cloudy share, step length. */

@@ -14,3 +14,4 @@ export * from './simulation/index.js';
 export * from './optimisation/index.js';
 export * from './cautions/index.js';
 export * from './schemas/index.js';
+export * from './locker-csv/index.js';

@@ -14,4 +14,5 @@ export * from './simulation/index.js';
 export * from './optimisation/index.js';
 export * from './cautions/index.js';
 export * from './schemas/index.js';
+export * from './trips/index.js';
 export * from './locker-csv/index.js';

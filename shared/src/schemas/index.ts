@@ -8,3 +8,4 @@ export * from './trip-solar.js';
 export * from './locker.js';
 export * from './locker-files.js';
 export * from './catalogue.js';
+export * from './trips.js';

@@ -33,6 +33,17 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     logger,
     abortOnError: false,
   });
+  configureApp(app);
+  await app.init();
+  return app;
+}
+
+/**
+ * The app-level setup `createApp` applies before `init()`: body parsers with plain errors, cookies, the
+ * `api` prefix and the OpenAPI document. Exported for tests that build the module with
+ * `Test.createTestingModule` (and override `DRIZZLE`) instead of `createApp`.
+ */
+export function configureApp(app: NestExpressApplication): void {
   app.disable('x-powered-by');
   // Register the body parsers now (init() then skips its own) so the translator can follow them.
   app.useBodyParser('json');
@@ -42,6 +53,4 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
   app.setGlobalPrefix(apiPrefix);
   const auth = app.get(ConfigService).getOrThrow<AuthConfig>('auth');
   setUpOpenApi(app, auth.cookieName);
-  await app.init();
-  return app;
 }

@@ -3,7 +3,7 @@
  * so every path through the app is set up the same way.
  */
 export { AppModule, type AppModuleOptions } from './app.module';
-export { apiPrefix, createApp, type CreateAppOptions } from './create-app';
+export { apiPrefix, configureApp, createApp, type CreateAppOptions } from './create-app';
 export { CLOCK, type Clock, systemClock } from './common/clock';
 export { hashPassword, verifyPassword } from './auth/password';
 export {

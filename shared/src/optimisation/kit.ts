@@ -1,0 +1,51 @@
+import type { KitCandidate, KitCounts, KitLine } from './types.js';
+
+/**
+ * Kit lines (non-zero counts, sorted by item id) from counts.
+ * @example kitLines(new Map([['b', 1], ['a', 0]])) // [{ itemId: 'b', count: 1 }]
+ */
+export function kitLines(counts: KitCounts): KitLine[] {
+  return [...counts.entries()]
+    .filter(([, count]) => count > 0)
+    .map(([itemId, count]) => ({ itemId, count }))
+    .sort((a, b) => (a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0));
+}
+
+/**
+ * Counts from kit lines.
+ * @example kitCounts([{ itemId: 'a', count: 2 }]).get('a') // 2
+ */
+export function kitCounts(lines: readonly KitLine[]): Map<string, number> {
+  const counts = new Map<string, number>();
+  for (const line of lines) if (line.count > 0) counts.set(line.itemId, (counts.get(line.itemId) ?? 0) + line.count);
+  return counts;
+}
+
+/**
+ * A stable text key of a kit (for caches and sets).
+ * @example kitKey(new Map([['b', 1], ['a', 2]])) // 'a*2|b*1'
+ */
+export function kitKey(counts: KitCounts): string {
+  return kitLines(counts)
+    .map((l) => `${l.itemId}*${l.count}`)
+    .join('|');
+}
+
+/**
+ * Grams of a kit: Σ count × unit grams. Items not among the candidates weigh nothing here (the caller validates ids).
+ * @example kitMassG(new Map([['a', 2]]), [{ itemId: 'a', kind: 'bank', massG: 150, ownedCount: 2 }]) // 300
+ */
+export function kitMassG(counts: KitCounts, candidates: readonly KitCandidate[]): number {
+  let massG = 0;
+  for (const c of candidates) massG += (counts.get(c.itemId) ?? 0) * c.massG;
+  return massG;
+}
+
+/**
+ * Whether kit `a` holds no more of any item than kit `b` (a ≤ b item by item).
+ * @example kitNoLarger(new Map([['a', 1]]), new Map([['a', 2]])) // true
+ */
+export function kitNoLarger(a: KitCounts, b: KitCounts): boolean {
+  for (const [itemId, count] of a) if (count > (b.get(itemId) ?? 0)) return false;
+  return true;
+}

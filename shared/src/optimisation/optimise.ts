@@ -1,0 +1,162 @@
+import { dailyBalance } from './daily-balance.js';
+import { kitLines, kitMassG } from './kit.js';
+import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
+import type { JudgeVerdict, KitChoice, KitCounts, KitJudge, KitSwap, OptimisationProblem, OptimiseAnswer, SearchStats } from './types.js';
+
+/** How many next-best kits `findSwaps` returns by default. */
+export const defaultSwapCount = 5;
+
+function choice(counts: KitCounts, search: KitSearch, verdict: JudgeVerdict): KitChoice {
+  return { lines: kitLines(counts), massG: kitMassG(counts, search.problem.candidates), verdict };
+}
+
+function statsOf(search: KitSearch): SearchStats {
+  return {
+    rounds: search.stats.rounds,
+    judgedKits: search.stats.judgedKits,
+    activeItems: search.presolved.items.length,
+    candidateItems: search.problem.candidates.length,
+  };
+}
+
+/** Every owned unit of every candidate. */
+function wholeLocker(problem: OptimisationProblem): Map<string, number> {
+  return new Map(problem.candidates.filter((c) => c.ownedCount > 0).map((c) => [c.itemId, c.ownedCount]));
+}
+
+/**
+ * From a feasible kit, removes units one at a time, heaviest first, while the judge still accepts the kit: a quick
+ * feasible kit when the search stops early. At most one judge call per unit.
+ */
+function greedyShave(search: KitSearch, start: KitCounts): { counts: Map<string, number>; verdict: JudgeVerdict } {
+  const counts = new Map(start);
+  let verdict = search.judge(counts);
+  const order = [...search.problem.candidates].sort((a, b) => b.massG - a.massG || (a.itemId < b.itemId ? -1 : 1));
+  for (const cand of order) {
+    while ((counts.get(cand.itemId) ?? 0) > 0) {
+      const trial = new Map(counts);
+      trial.set(cand.itemId, (trial.get(cand.itemId) ?? 0) - 1);
+      if (trial.get(cand.itemId) === 0) trial.delete(cand.itemId);
+      const v = search.judge(trial);
+      if (!v.feasible) break;
+      counts.clear();
+      for (const [k, n] of trial) counts.set(k, n);
+      verdict = v;
+    }
+  }
+  return { counts, verdict };
+}
+
+function limitFields(problem: OptimisationProblem, massG: number): { gramLimitG?: number; overLimitG?: number } {
+  if (problem.gramLimitG === undefined) return {};
+  return massG > problem.gramLimitG ? { gramLimitG: problem.gramLimitG, overLimitG: massG - problem.gramLimitG } : { gramLimitG: problem.gramLimitG };
+}
+
+/**
+ * The lightest kit the judge accepts (ties: the most worst-day margin in the daily model), as a never-empty answer:
+ * `optimal`; `over-limit` (the lightest feasible kit and the grams over the limit — the limit never changes which kit
+ * is lightest, so it is checked, not modelled); `best-so-far` (round cap, time budget or solver failure: a judged
+ * feasible kit and the model's lower bound); or `nothing-feasible` (which device has no path; which sky-day runs short
+ * by how many Wh with the whole locker in the daily model; the judge's finding for the whole locker).
+ * @example optimiseKit(problem, judge).status // 'optimal'
+ */
+export function optimiseKit(problem: OptimisationProblem, judge: KitJudge, options: KitSearchOptions = {}, search: KitSearch = createKitSearch(problem, judge, options)): OptimiseAnswer {
+  const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
+  const locker = wholeLocker(problem);
+  const lockerBalance = dailyBalance(search.presolved, locker);
+  // The judge is monotone: if the whole locker runs dry, every kit does.
+  const lockerVerdict = search.judge(locker);
+  if (!lockerVerdict.feasible) {
+    return {
+      status: 'nothing-feasible',
+      missingPaths: lockerBalance.missingPaths,
+      shortfalls: lockerBalance.shortfalls,
+      ...(lockerVerdict.runsDry ? { runsDry: lockerVerdict.runsDry } : {}),
+      stats: statsOf(search),
+      notes: [
+        lockerBalance.missingPaths.length > 0
+          ? 'No kit from these items can charge every device that needs it.'
+          : 'Even every item owned, packed together, runs dry.',
+      ],
+    };
+  }
+  const step = search.next(deadlineMs);
+  return answerFromStep(step, search, locker);
+}
+
+function answerFromStep(step: SearchStep, search: KitSearch, locker: KitCounts): OptimiseAnswer {
+  const problem = search.problem;
+  if (step.kind === 'found') {
+    const kit = choice(step.counts, search, step.verdict);
+    const notes = step.proven ? [] : ['A model solve stopped on its timeout: the kit is feasible but may not be the lightest.'];
+    if (!step.proven) return { status: 'best-so-far', kit, lowerBoundG: 0, ...limitFields(problem, kit.massG), stats: statsOf(search), notes };
+    if (problem.gramLimitG !== undefined && kit.massG > problem.gramLimitG) {
+      return { status: 'over-limit', kit, gramLimitG: problem.gramLimitG, overLimitG: kit.massG - problem.gramLimitG, stats: statsOf(search), notes };
+    }
+    return { status: 'optimal', kit, ...(problem.gramLimitG !== undefined ? { gramLimitG: problem.gramLimitG } : {}), stats: statsOf(search), notes };
+  }
+  // The whole locker was judged feasible, so a kit exists: shave it down greedily.
+  const fallback = greedyShave(search, locker);
+  const kit = choice(fallback.counts, search, fallback.verdict);
+  const notes =
+    step.kind === 'exhausted'
+      ? ['The daily model rejects every kit the judge might accept: its coefficients are stricter than the simulation (a bug in building them). This kit is the whole locker shaved by hand-rules.']
+      : [`The search stopped (${step.reason}${step.detail ? `: ${step.detail}` : ''}); this is the lightest kit found by shaving the whole locker.`];
+  return {
+    status: 'best-so-far',
+    kit,
+    lowerBoundG: step.kind === 'stopped' ? Math.min(step.lowerBoundG, kit.massG) : 0,
+    ...limitFields(problem, kit.massG),
+    stats: statsOf(search),
+    notes,
+  };
+}
+
+function buysOf(search: KitSearch, optimum: KitChoice, swap: KitChoice): string[] {
+  const kinds = new Map(search.problem.candidates.map((c) => [c.itemId, c.kind]));
+  const has = (k: KitChoice, kind: string): boolean => k.lines.some((l) => kinds.get(l.itemId) === kind);
+  const units = (k: KitChoice): number => k.lines.reduce((n, l) => n + l.count, 0);
+  const buys: string[] = [];
+  if (swap.verdict.margin !== undefined && optimum.verdict.margin !== undefined && swap.verdict.margin > optimum.verdict.margin) buys.push('more-margin');
+  if (units(swap) < units(optimum)) buys.push('fewer-items');
+  if (has(optimum, 'converter') && !has(swap, 'converter')) buys.push('no-converter');
+  if (has(optimum, 'lead') && !has(swap, 'lead')) buys.push('no-lead');
+  if (has(optimum, 'panel') && !has(swap, 'panel')) buys.push('no-panel');
+  return buys;
+}
+
+/**
+ * The next best distinct kits after `optimum`: each round cuts off the previous kit and every kit holding it (so "the
+ * optimum plus a spare lead" is never a swap), then finds the lightest kit the judge accepts. Each swap carries its
+ * extra grams, what was added and removed, and what it buys. Pass the search used for the optimum to reuse its cuts.
+ * @example findSwaps(problem, judge, answer.kit).length // up to 5
+ */
+export function findSwaps(
+  problem: OptimisationProblem,
+  judge: KitJudge,
+  optimum: KitChoice,
+  options: KitSearchOptions & { count?: number } = {},
+  search: KitSearch = createKitSearch(problem, judge, options),
+): KitSwap[] {
+  const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
+  const count = options.count ?? defaultSwapCount;
+  const swaps: KitSwap[] = [];
+  const base = new Map(optimum.lines.map((l) => [l.itemId, l.count]));
+  search.excludeSupersetsOf(base);
+  while (swaps.length < count) {
+    const step = search.next(deadlineMs);
+    if (step.kind !== 'found') break;
+    const kit = choice(step.counts, search, step.verdict);
+    const ids = new Set([...base.keys(), ...step.counts.keys()]);
+    const added = [];
+    const removed = [];
+    for (const id of [...ids].sort()) {
+      const d = (step.counts.get(id) ?? 0) - (base.get(id) ?? 0);
+      if (d > 0) added.push({ itemId: id, count: d });
+      if (d < 0) removed.push({ itemId: id, count: -d });
+    }
+    swaps.push({ kit, extraG: kit.massG - optimum.massG, added, removed, buys: buysOf(search, optimum, kit) });
+    search.excludeSupersetsOf(step.counts);
+  }
+  return swaps;
+}

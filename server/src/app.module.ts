@@ -16,6 +16,7 @@ import { type AuthConfig, type Env, appConfig, authConfig, databaseConfig } from
 import { DatabaseModule } from './database/database.module';
 import type { Database } from './database/database.types';
 import { HealthModule } from './health/health.module';
+import { LockerModule } from './locker/locker.module';
 import { UsersModule } from './users/users.module';
 
 export interface AppModuleOptions {
@@ -63,6 +64,7 @@ export class AppModule {
         AuthModule,
         AdminModule,
         HealthModule,
+        LockerModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

@@ -12,10 +12,11 @@ import { ClientStaticModule } from './client-static/client-static.module';
 import { ApiExceptionFilter } from './common/api-exception.filter';
 import type { Clock } from './common/clock';
 import { ClockModule } from './common/clock.module';
-import { type AuthConfig, type Env, appConfig, authConfig, databaseConfig } from './config';
+import { type AuthConfig, type Env, appConfig, authConfig, databaseConfig, storageConfig } from './config';
 import { DatabaseModule } from './database/database.module';
 import type { Database } from './database/database.types';
 import { HealthModule } from './health/health.module';
+import { LockerFilesModule } from './locker-files/locker-files.module';
 import { LockerModule } from './locker/locker.module';
 import { UsersModule } from './users/users.module';
 
@@ -46,7 +47,7 @@ export class AppModule {
           cache: true,
           ignoreEnvFile: true,
           ignoreEnvVars: true,
-          load: [appConfig(env), authConfig(env), databaseConfig(env)],
+          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env)],
         }),
         ClockModule.forRoot(options.clock),
         DatabaseModule.forRoot({ database: options.database }),
@@ -64,6 +65,7 @@ export class AppModule {
         AuthModule,
         AdminModule,
         HealthModule,
+        LockerFilesModule,
         LockerModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],

@@ -9,6 +9,7 @@ import { lockerItemKindSchema } from './locker.js';
 
 /** Item kinds a catalogue entry may have: the locker's kinds. */
 export const catalogueKindSchema = lockerItemKindSchema;
+export type CatalogueKind = z.infer<typeof catalogueKindSchema>;
 
 /** Longest entry name, in characters. */
 export const maxCatalogueNameLength = 120;

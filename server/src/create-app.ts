@@ -5,7 +5,8 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import cookieParser from 'cookie-parser';
 import { AppModule, type AppModuleOptions } from './app.module';
 import { translateBodyParserErrors } from './common/body-parser-errors';
-import type { AuthConfig } from './config';
+import { securityHeaders } from './common/security-headers';
+import type { AppConfig, AuthConfig } from './config';
 import { setUpOpenApi } from './docs/openapi';
 
 /** The URL prefix of every API route. */
@@ -45,6 +46,10 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
  */
 export function configureApp(app: NestExpressApplication): void {
   app.disable('x-powered-by');
+  const { trustProxyHops } = app.get(ConfigService).getOrThrow<AppConfig>('app');
+  // Behind N reverse proxies, req.ip (the rate limit's key) comes from X-Forwarded-For.
+  if (trustProxyHops > 0) app.set('trust proxy', trustProxyHops);
+  app.use(securityHeaders());
   // Register the body parsers now (init() then skips its own) so the translator can follow them.
   app.useBodyParser('json');
   app.useBodyParser('urlencoded', { extended: true });

@@ -58,6 +58,16 @@ describe('health, docs and errors', () => {
     }
   });
 
+  it('sends security headers, with a same-origin content security policy', async () => {
+    const response = await t.http().get('/api/health').expect(200);
+    expect(response.headers['x-content-type-options']).toBe('nosniff');
+    expect(response.headers['x-powered-by']).toBeUndefined();
+    const csp = String(response.headers['content-security-policy']);
+    expect(csp).toContain("default-src 'self'");
+    expect(csp).toContain("script-src 'self'");
+    expect(csp).not.toContain('upgrade-insecure-requests');
+  });
+
   it('answers an unknown API path with 404 in the error shape, even without a session', async () => {
     const response = await t.http().get('/api/no-such-thing').expect(404);
     expect(response.body).toEqual({ statusCode: 404, message: 'Cannot GET /api/no-such-thing', errors: [] });

@@ -18,6 +18,11 @@ const appEnvSchema = z.object({
     .max(65535, { error: 'PORT must be 0–65535' })
     .default(3000),
   HOST: z.string().optional(),
+  TRUST_PROXY_HOPS: z.coerce
+    .number({ error: 'TRUST_PROXY_HOPS must be a number' })
+    .int({ error: 'TRUST_PROXY_HOPS must be a whole number' })
+    .min(0, { error: 'TRUST_PROXY_HOPS must be 0 or more' })
+    .default(0),
   CLIENT_DIST_DIR: z.string().optional(),
 });
 
@@ -28,6 +33,8 @@ export interface AppConfig {
   port: number;
   /** Interface to bind (HOST); unset binds every interface. */
   host: string | undefined;
+  /** Reverse proxies in front of the server whose X-Forwarded-For is believed (TRUST_PROXY_HOPS, default 0). */
+  trustProxyHops: number;
   /** Absolute path of the data folder (DATA_DIR, default ./data): the PGlite files and the generated JWT secret. */
   dataDir: string;
   /** Absolute path of the built client served at `/` (CLIENT_DIST_DIR, default <repo>/client/dist). */
@@ -43,6 +50,7 @@ export function readAppConfig(env: Env): AppConfig {
     nodeEnv: parsed.NODE_ENV,
     port: parsed.PORT,
     host: parsed.HOST,
+    trustProxyHops: parsed.TRUST_PROXY_HOPS,
     dataDir: readDataDir(env),
     clientDistDir: resolve(parsed.CLIENT_DIST_DIR ?? defaultClientDistDir),
   };

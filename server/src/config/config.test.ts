@@ -41,6 +41,12 @@ describe('config validation', () => {
       expect(() => readAppConfig({ PORT: port })).toThrow(/PORT/);
     });
 
+    it('reads TRUST_PROXY_HOPS (default 0) and rejects a negative count', () => {
+      expect(readAppConfig({}).trustProxyHops).toBe(0);
+      expect(readAppConfig({ TRUST_PROXY_HOPS: '1' }).trustProxyHops).toBe(1);
+      expect(() => readAppConfig({ TRUST_PROXY_HOPS: '-1' })).toThrow(/TRUST_PROXY_HOPS/);
+    });
+
     it('rejects an unknown NODE_ENV', () => {
       expect(() => readAppConfig({ NODE_ENV: 'staging' })).toThrow(/NODE_ENV/);
     });

@@ -42,7 +42,7 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
         const lamp = testPhone(0.02, { deviceKind: 'headlamp', ownBatteryWh: 40, chargePort: { connector: 'micro-usb', captiveCable: true } });
         return {
           nights: p.nights ?? 3,
-          devices: [{ deviceId: 'phone', spec: testPhone(p.share) }, { deviceId: 'lamp', spec: lamp }],
+          devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }, { deviceId: 'lamp', spec: lamp }],
           kit: [
             { itemId: 'phone-bank', count: 1, spec: phoneBank },
             { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
@@ -55,7 +55,7 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     );
     expect(feasibleBase).toBeGreaterThan(50);
     expect(broken).toEqual([]);
-  });
+  }, 60_000);
 
   it('a better bank for one device does not take the harvest another device’s bank needs', () => {
     // Merit-order harvest failed here: the new efficient bank, reachable only by the headlamp, outranked the phone's bank.
@@ -67,7 +67,7 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
         const lamp = testPhone(0.9, { deviceKind: 'headlamp', ownBatteryWh: 5, chargePort: { connector: 'micro-usb', captiveCable: true } });
         return {
           nights: p.nights ?? 3,
-          devices: [{ deviceId: 'phone', spec: testPhone(p.share) }, { deviceId: 'lamp', spec: lamp }],
+          devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }, { deviceId: 'lamp', spec: lamp }],
           kit: [
             { itemId: 'phone-bank', count: 1, spec: phoneBank },
             { itemId: 'lamp-bank', count: 1, spec: lampBank },
@@ -81,14 +81,14 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     );
     expect(feasibleBase).toBeGreaterThan(50);
     expect(broken).toEqual([]);
-  });
+  }, 60_000);
 
   it('a less efficient bank added as a spare does not waste the harvest', () => {
     // "Most room first" alone would pour harvest into the lossy spare once it had room.
     const { feasibleBase, broken } = sweep(
       (p) => ({
         nights: p.nights ?? 3,
-        devices: [{ deviceId: 'phone', spec: testPhone(p.share) }],
+        devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }],
         kit: [
           { itemId: 'bank', count: 1, spec: testBank({ capacityMah: p.cap, chargeEfficiency: 0.95, outputEfficiency: 0.95 }) },
           { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
@@ -100,15 +100,15 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     );
     expect(feasibleBase).toBeGreaterThan(30);
     expect(broken).toEqual([]);
-  });
+  }, 60_000);
 
   it('a more efficient but slower boost converter does not slow the radio’s charging', () => {
     // A single "most efficient path" would switch to the slow converter; the paths' hull keeps the fast one in use.
     const { feasibleBase, broken } = sweep(
       (p) => {
         const radio = testRadio({
-          chargeCurrentA: 2, ownBatteryWh: p.battery,
-          useProfile: { basis: 'radio-hours', transmitMinutesPerDay: p.tx, receiveHoursPerDay: 3, standbyHoursPerDay: 8 },
+          chargeCurrentA: 2, ownBatteryWh: p.battery ?? 0,
+          useProfile: { basis: 'radio-hours', transmitMinutesPerDay: p.tx ?? 0, receiveHoursPerDay: 3, standbyHoursPerDay: 8 },
         });
         return {
           nights: 4,
@@ -124,5 +124,5 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     );
     expect(feasibleBase).toBeGreaterThan(10);
     expect(broken).toEqual([]);
-  });
+  }, 60_000);
 });

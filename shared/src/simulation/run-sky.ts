@@ -48,6 +48,7 @@ export interface SkyScratch {
   storedStartByDayWh: Float64Array;
   aboveFloorStartByDayWh: Float64Array;
   storeLimitWh: Float64Array;
+  breakpoints: Float64Array;
 }
 
 /** Allocates scratch buffers for a compiled kit. */
@@ -59,6 +60,7 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     storedStartByDayWh: new Float64Array(k.dayCount),
     aboveFloorStartByDayWh: new Float64Array(k.dayCount),
     storeLimitWh: new Float64Array(k.storeCount),
+    breakpoints: new Float64Array(2 * k.storeCount + 1),
   };
 }
 
@@ -95,6 +97,8 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
   const ledger = record?.ledger;
   if (ledger) ledger.fill(0);
   const eps = energyEpsilonWh;
+  // Loop guards far below the 1e-9 Wh the checks resolve, so they add no visible steps to the state.
+  const tiny = 1e-13;
 
   let capAboveFloor = 0;
   for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -158,26 +162,16 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
         for (let s = 0; s < S; s++) {
           if (k.panelReach[p * S + s] !== 1) continue;
           const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
-          if (room <= eps) continue;
+          if (room <= tiny) continue;
           if (room > maxRoom) maxRoom = room;
           total0 += Math.min(limitLeft[s] ?? 0, room / storeEta(k, s));
         }
         if (total0 <= 0) continue;
-        let level = 0;
-        if (total0 > h) {
-          let lo = 0;
-          let hi = maxRoom;
-          for (let iter = 0; iter < 60; iter++) {
-            const mid = (lo + hi) / 2;
-            if (fillAtLevel(k, E, limitLeft, p, mid) > h) lo = mid;
-            else hi = mid;
-          }
-          level = hi;
-        }
+        const level = total0 > h ? waterLevel(k, E, limitLeft, p, h, scratch.breakpoints) : 0;
         for (let s = 0; s < S; s++) {
           if (k.panelReach[p * S + s] !== 1) continue;
           const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
-          if (room <= eps) continue;
+          if (room <= tiny) continue;
           const etaC = k.storeChargeEff[s] ?? 1;
           const etaO = k.storeOutputEff[s] ?? 1;
           const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
@@ -207,19 +201,15 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
     for (let d = 0; d < D; d++) {
       const need = (k.deviceDemandWhPerH[d] ?? 0) * dt;
       const have = devE[d] ?? 0;
-      if (have >= need - eps) {
-        devE[d] = Math.max(0, have - need);
-        if (ledger) ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + need;
-      } else {
-        devE[d] = 0;
-        if (ledger) {
-          ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + have;
-          ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + need - have;
-        }
-        if (!dry) {
-          dry = { stepIndex: i, dayIndex: day, deviceIndex: d, reason: dryReason(k, d), shortWh: need - have };
-          if (stopAtDry) return finish();
-        }
+      const used = Math.min(have, need);
+      devE[d] = have - used;
+      if (ledger) {
+        ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + used;
+        if (need > used) ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + (need - used);
+      }
+      if (need - used > eps && !dry) {
+        dry = { stepIndex: i, dayIndex: day, deviceIndex: d, reason: dryReason(k, d, i), shortWh: need - used };
+        if (stopAtDry) return finish();
       }
     }
 
@@ -230,15 +220,15 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
         let want = cap - (devE[d] ?? 0);
-        if (want <= eps) continue;
+        if (want <= tiny) continue;
         const etaDev = k.deviceChargeEff[d] ?? 1;
         let timeShare = 1;
-        for (let s = 0; s < S && want > eps && timeShare > 1e-12; s++) {
+        for (let s = 0; s < S && want > tiny && timeShare > 1e-12; s++) {
           const idx = s * D + d;
           const n = k.hullCount[idx] ?? 0;
           if (n === 0) continue;
           const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
-          if (avail <= eps) continue;
+          if (avail <= tiny) continue;
           const off = k.hullOffset[idx] ?? 0;
           const span = timeShare * dt;
           // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want, then by what the store holds.
@@ -302,7 +292,7 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
     };
   }
 
-  function dryReason(kit: CompiledKit, d: number): DryReason {
+  function dryReason(kit: CompiledKit, d: number, step: number): DryReason {
     let reachable = false;
     let aboveFloor = false;
     let belowFloor = false;
@@ -315,7 +305,7 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
       else if (e > eps) belowFloor = true;
     }
     if (!reachable) return 'no-charging-path';
-    if (aboveFloor) return 'charge-window-too-short';
+    if (aboveFloor) return kit.stepCamp[step] === 1 ? 'charge-window-too-short' : 'empty-between-top-ups';
     if (belowFloor) return 'store-at-reserve';
     return 'stores-empty';
   }
@@ -365,4 +355,45 @@ function fillAtLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p
     total += Math.min(limitLeft[s] ?? 0, (room - level) / storeEta(k, s));
   }
   return total;
+}
+
+/**
+ * The room level (usable Wh) to which panel p's `inputWh` brings its reachable stores: `fillAtLevel` is piecewise
+ * linear and falling in the level, with breaks where a store starts taking harvest (level = its room) and where its
+ * input limit binds; find the two breaks around `inputWh` and interpolate. No allocation: `breaks` is scratch.
+ */
+function waterLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p: number, inputWh: number, breaks: Float64Array): number {
+  const S = k.storeCount;
+  let n = 0;
+  breaks[n++] = 0;
+  for (let s = 0; s < S; s++) {
+    if (k.panelReach[p * S + s] !== 1) continue;
+    const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+    if (room <= 0) continue;
+    breaks[n++] = room;
+    const saturated = room - (limitLeft[s] ?? 0) * storeEta(k, s);
+    if (saturated > 0) breaks[n++] = saturated;
+  }
+  // Insertion sort, descending (n ≤ 2S + 1, small).
+  for (let a = 1; a < n; a++) {
+    const v = breaks[a] ?? 0;
+    let b = a - 1;
+    while (b >= 0 && (breaks[b] ?? 0) < v) {
+      breaks[b + 1] = breaks[b] ?? 0;
+      b--;
+    }
+    breaks[b + 1] = v;
+  }
+  let hiLevel = breaks[0] ?? 0;
+  let hiFill = fillAtLevel(k, E, limitLeft, p, hiLevel);
+  for (let j = 1; j < n; j++) {
+    const loLevel = breaks[j] ?? 0;
+    const loFill = fillAtLevel(k, E, limitLeft, p, loLevel);
+    if (loFill >= inputWh) {
+      return loFill === hiFill ? loLevel : loLevel + ((hiLevel - loLevel) * (loFill - inputWh)) / (loFill - hiFill);
+    }
+    hiLevel = loLevel;
+    hiFill = loFill;
+  }
+  return 0;
 }

@@ -39,8 +39,10 @@ export type DryReason =
   | 'stores-empty'
   /** The stores that can charge it hold energy only below the reserve: a store would go below its reserve. */
   | 'store-at-reserve'
-  /** The stores held energy but the camp window was too short for the path's power to move it. */
-  | 'charge-window-too-short';
+  /** In camp, the stores held energy but the path's power could not move it fast enough. */
+  | 'charge-window-too-short'
+  /** Away from camp (no top-ups), its own battery ran out although the stores still held energy. */
+  | 'empty-between-top-ups';
 
 /** The first step in a design sky where a device could not get the energy its use profile needs. */
 export interface DryEvent {

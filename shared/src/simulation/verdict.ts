@@ -16,6 +16,7 @@ const reasonText: Record<DryReason, string> = {
   'stores-empty': 'the stores that charge it are empty',
   'store-at-reserve': 'charging it would take a store below its reserve',
   'charge-window-too-short': 'the camp window is too short to charge it at the power its path allows',
+  'empty-between-top-ups': 'its own battery cannot cover the hours between camp top-ups',
 };
 
 /**

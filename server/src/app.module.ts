@@ -56,7 +56,8 @@ export class AppModule {
           useFactory: (config: ConfigService) => {
             const auth = config.getOrThrow<AuthConfig>('auth');
             return {
-              throttlers: [{ name: 'auth', ttl: auth.rateWindowS * 1000, limit: auth.rateLimit }],
+              // The name `default` makes the throttler answer a plain `Retry-After` header (RFC 9110 §10.2.3).
+              throttlers: [{ name: 'default', ttl: auth.rateWindowS * 1000, limit: auth.rateLimit }],
               errorMessage: tooManyAttemptsMessage,
             };
           },

@@ -38,7 +38,7 @@ export class CsvUploadErrorsInterceptor implements NestInterceptor {
     return next.handle().pipe(
       catchError((error: unknown) => {
         if (error instanceof PayloadTooLargeException) return throwError(() => new PayloadTooLargeException(csvTooLargeMessage));
-        if (error instanceof BadRequestException && /unexpected field|too many/i.test(error.message)) {
+        if (error instanceof BadRequestException && /unexpected (file )?field|too many/i.test(error.message)) {
           return throwError(() => new BadRequestException({ message: csvMissingMessage, errors: [{ path: csvFieldName, message: csvMissingMessage }] }));
         }
         return throwError(() => error);

@@ -8,6 +8,7 @@ import { tooManyAttemptsMessage } from './auth/auth-messages';
 import { AuthModule } from './auth/auth.module';
 import { JwtAuthGuard } from './auth/guards/jwt-auth.guard';
 import { RolesGuard } from './auth/guards/roles.guard';
+import { CatalogueModule } from './catalogue/catalogue.module';
 import { ClientStaticModule } from './client-static/client-static.module';
 import { ApiExceptionFilter } from './common/api-exception.filter';
 import type { Clock } from './common/clock';
@@ -67,6 +68,7 @@ export class AppModule {
         AdminModule,
         HealthModule,
         LockerFilesModule,
+        CatalogueModule,
         LockerModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],

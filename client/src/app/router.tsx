@@ -48,6 +48,8 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
             element: <Navigate to={paths.app.locker.getHref()} replace />,
           },
           { path: paths.app.locker.path, lazy: () => import('./routes/app/locker').then(convert(queryClient)) },
+          { path: paths.app.catalogue.path, lazy: () => import('./routes/app/catalogue').then(convert(queryClient)) },
+          { path: paths.app.adminCatalogue.path, lazy: () => import('./routes/app/admin/catalogue').then(convert(queryClient)) },
           { path: paths.app.trips.path, lazy: () => import('./routes/app/trips').then(convert(queryClient)) },
           {
             path: paths.app.adminAccounts.path,

@@ -22,6 +22,14 @@ export const paths = {
       path: '/locker',
       getHref: () => '/locker',
     },
+    catalogue: {
+      path: '/catalogue',
+      getHref: () => '/catalogue',
+    },
+    adminCatalogue: {
+      path: '/admin/catalogue',
+      getHref: () => '/admin/catalogue',
+    },
     trips: {
       path: '/trips',
       getHref: () => '/trips',

@@ -1,5 +1,6 @@
 import type { Account } from '@gramwatt/shared';
 import { buildAccount, testPassword } from '../data';
+import { resetLockerDb } from './locker-db';
 
 /** The fake server's state: accounts with their passwords, and who holds the session cookie. */
 interface MockDb {
@@ -14,6 +15,7 @@ export const resetDb = () => {
   db.accounts = [];
   db.passwords = new Map();
   db.sessionAccountId = null;
+  resetLockerDb();
 };
 
 /** Adds an account the fake server knows, optionally signed in. */

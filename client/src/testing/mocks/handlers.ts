@@ -2,6 +2,7 @@ import { accountUpdateSchema, signInSchema, signUpSchema, type Account } from '@
 import { http, HttpResponse } from 'msw';
 import { buildAccount } from '../data';
 import { db, sessionAccount } from './db';
+import { lockerHandlers } from './locker-handlers';
 
 const apiError = (statusCode: number, message: string, errors: Array<{ path: string; message: string }> = []) =>
   HttpResponse.json({ statusCode, message, errors }, { status: statusCode });
@@ -76,4 +77,6 @@ export const handlers = [
     db.accounts[index] = updated;
     return HttpResponse.json({ account: updated });
   }),
+
+  ...lockerHandlers,
 ];

@@ -1,23 +1,20 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/layouts/app-layout';
 import { PageTitle } from '@/components/seo/page-title';
-import { EmptyState } from '@/components/ui/empty-state';
+import { paths } from '@/config/paths';
+import { getLockerItemsQueryOptions } from '@/features/locker/api/get-locker-items';
+import { LockerScreen } from '@/features/locker/components/locker-screen';
+import { requireAccount } from '@/lib/auth';
 
-function LockerIllustration() {
-  return (
-    <svg
-      viewBox="0 0 64 48"
-      className="h-16 w-20"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="2.5"
-      strokeLinejoin="round"
-    >
-      <rect x="6" y="10" width="52" height="32" rx="5" />
-      <path d="M22 10V6h20v4" />
-      <path d="M6 22h52" strokeDasharray="4 4" />
-    </svg>
-  );
-}
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireAccount(queryClient, request);
+    // Start the locker's request with the route's code instead of after the first render.
+    void queryClient.prefetchQuery(getLockerItemsQueryOptions());
+    return null;
+  };
 
 export default function LockerRoute() {
   return (
@@ -26,12 +23,7 @@ export default function LockerRoute() {
       <PageHeader title="Locker">
         The gear you own, grouped by what it does: collect, store, convert, connect and use.
       </PageHeader>
-      <EmptyState title="Nothing in your locker yet" illustration={<LockerIllustration />}>
-        <p>
-          Your panels, banks, converters, batteries, leads and devices will live here, each with its grams and ports.
-          Adding gear is the next part we are building — for now this shelf stays bare.
-        </p>
-      </EmptyState>
+      <LockerScreen catalogueHref={paths.app.catalogue.getHref()} />
     </>
   );
 }

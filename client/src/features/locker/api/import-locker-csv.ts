@@ -1,34 +1,15 @@
-import type { ItemKind } from '@gramwatt/shared';
+import type { LockerImportIssue, LockerImportMode, LockerImportPreviewRow, LockerImportResult } from '@gramwatt/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { getLockerItemsQueryOptions } from './get-locker-items';
 import { FormDataError, postFormData } from './post-form-data';
 
 /** "add": the rows join the locker; "replace": the locker becomes exactly the file's rows. */
-export type ImportMode = 'add' | 'replace';
-
-/** One problem in the file: `row` counts the header as row 1, `column` is empty for a problem with the whole row. */
-export interface ImportReportEntry {
-  row: number;
-  column: string;
-  message: string;
-}
-
-export interface ImportPreviewRow {
-  row: number;
-  kind: ItemKind;
-  name: string;
-  countOwned: number;
-  massG: number;
-}
-
+export type ImportMode = LockerImportMode;
+/** One problem in the file: `row` counts the header as row 1, `column` is empty for the whole row or file. */
+export type ImportReportEntry = LockerImportIssue;
+export type ImportPreviewRow = LockerImportPreviewRow;
 /** `POST /api/locker/import`: with `commit=false` a dry run that writes nothing. */
-export interface ImportResult {
-  ok: boolean;
-  mode: ImportMode;
-  rowCount: number;
-  report: ImportReportEntry[];
-  preview: ImportPreviewRow[];
-}
+export type ImportResult = LockerImportResult;
 
 export interface ImportLockerCsvInput {
   file: File;
@@ -50,7 +31,7 @@ export const importLockerCsv = async ({ file, mode, commit }: ImportLockerCsvInp
     return await postFormData<ImportResult>(`/locker/import?mode=${mode}&commit=${commit}`, formData);
   } catch (error) {
     if (error instanceof FormDataError && error.statusCode === 400 && isImportResult(error.body))
-      return { ...error.body, ok: false };
+      return { ...error.body, ok: false, committed: false };
     throw error;
   }
 };

@@ -1,16 +1,17 @@
+import { lockerFileContentTypes, maxLockerFileBytes } from '@gramwatt/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { getLockerItemsQueryOptions } from './get-locker-items';
 import { postFormData } from './post-form-data';
 import type { LockerFile, LockerFilePurpose } from './types';
 
-/** The largest photo or spec sheet the server takes (5 MB); checked here first to save a wasted upload. */
-export const maxUploadBytes = 5 * 1024 * 1024;
+/** The largest photo or spec sheet the server takes; checked here first to save a wasted upload. */
+export const maxUploadBytes = maxLockerFileBytes;
 
-/** The types the server accepts per purpose (it checks the bytes too, not only the name). */
+/** The file picker's `accept` per purpose (the server checks the bytes themselves, not only the name). */
 export const acceptedTypes: Record<LockerFilePurpose, string> = {
-  photo: 'image/jpeg,image/png,image/webp',
-  'spec-sheet': 'application/pdf',
+  photo: lockerFileContentTypes.photo.join(','),
+  'spec-sheet': lockerFileContentTypes['spec-sheet'].join(','),
 };
 
 const filesPath = (itemId: string) => `/locker/items/${encodeURIComponent(itemId)}/files`;

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { getLockerItemsQueryOptions } from './get-locker-items';
-import type { LockerItem, LockerItemBody } from './types';
+import type { LockerItem, LockerItemInput } from './types';
 
 export interface SaveLockerItemInput {
   /** Present to change an item (`PUT`), absent to add one (`POST`). */
   itemId?: string;
-  body: LockerItemBody;
+  body: LockerItemInput;
 }
 
 /** `POST /api/locker/items` or `PUT /api/locker/items/:id`; a 400 carries field paths such as `spec.ratedW`. */

@@ -277,6 +277,9 @@ describe('auth configuration', () => {
       const body = { email: uniqueEmail(), password: testPassword };
       for (let i = 0; i < 3; i += 1) await t.http().post('/api/auth/sign-in').send(body).expect(401);
       const response = await t.http().post('/api/auth/sign-in').send(body).expect(429);
+      const retryAfterS = Number(response.headers['retry-after']);
+      expect(retryAfterS).toBeGreaterThan(0);
+      expect(retryAfterS).toBeLessThanOrEqual(60);
       expect(response.body).toEqual({
         statusCode: 429,
         message: 'Too many attempts; wait a minute and try again',

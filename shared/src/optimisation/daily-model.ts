@@ -168,8 +168,10 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
     }
   }
 
-  // Dominance rows.
-  for (const [i, j] of pre.dominance) {
+  // A device with no usable path: no kit is feasible.
+  if (pre.missingNeeds.length > 0) rows.push({ name: 'missing', terms: [], lower: 1 });
+  // Dominance rows pick one kit among equivalent ones: not part of the daily model itself, so not for a fixed kit.
+  for (const [i, j] of phase.phase === 'fixed-kit' ? [] : pre.dominance) {
     const ownedJ = pre.items[j]?.candidate.ownedCount ?? 0;
     rows.push({ name: `dom${i}_${j}`, terms: [...atLeast(i, 1), [yColumn(j, ownedJ), -1]], upper: 0 });
   }

@@ -56,6 +56,11 @@ export function toJsLpModel(model: LinearModel, timeoutMs: number): JsLpModel {
  * @example solveWithJsLp(model, { timeoutMs: 1000, now: () => 0 }).status // 'optimal'
  */
 export function solveWithJsLp(model: LinearModel, options: LinearSolveOptions): LinearSolution {
+  // A row with no terms is decided already (javascript-lp-solver would ignore it): e.g. a need with no path, or a cut
+  // that excludes every kit.
+  for (const row of model.rows) {
+    if (row.terms.length === 0 && ((row.lower ?? 0) > 0 || (row.upper ?? 0) < 0)) return { status: 'infeasible' };
+  }
   const startMs = options.now();
   let result: SolveResult;
   try {

@@ -295,3 +295,18 @@ export function randomSyntheticWorld(random: () => number, shape: SyntheticShape
     devices,
   };
 }
+
+/**
+ * A small random world from a seed, the shape of the oracle cases: 2–7 item types, at most `maxOwned` of each, 2–5
+ * days, 1–4 skies.
+ * @example smallSyntheticWorld(3).dayCount // between 2 and 5
+ */
+export function smallSyntheticWorld(seed: number, maxOwned = 2): SyntheticWorld {
+  const random = seededRandom(seed);
+  return randomSyntheticWorld(random, {
+    itemTypes: 2 + Math.floor(random() * 6),
+    maxOwned,
+    dayCount: 2 + Math.floor(random() * 4),
+    skyCount: 1 + Math.floor(random() * 4),
+  });
+}

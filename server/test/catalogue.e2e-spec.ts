@@ -59,7 +59,7 @@ describe('reference catalogue', () => {
     await t.db.delete(lockerItems);
   });
 
-  const create = (body: unknown, token = adminToken) => t.http().post('/api/catalogue').set(bearer(token)).send(body);
+  const create = (body: object, token = adminToken) => t.http().post('/api/catalogue').set(bearer(token)).send(body);
 
   it('needs a session to read', async () => {
     await t.http().get('/api/catalogue').expect(401);

@@ -1,1 +1,1 @@
-export {};
+export * from './kit-cautions.js';

@@ -4,6 +4,8 @@ import { panelPowerSeries, seriesEnergyWh } from './panel-series.js';
 import { defaultUsbPanelLosses, panelSystemFactor } from './system-factor.js';
 import { testUsbPanel } from '../testing/fixtures.js';
 import { syntheticTripSolar } from '../testing/synthetic-solar.js';
+import { clearSkyIrradiance } from '../sun/clear-sky.js';
+import { groundReflectedWm2, isotropicSkyDiffuseWm2 } from '../sun/transposition.js';
 
 // Plane irradiance for "aimed at the sun in clear sky near noon": ~1000 W/m² (the STC level, IEC 61215; a clear
 // noon sky at mid latitudes gives 900–1050 W/m² normal to the beam plus diffuse — common practice).
@@ -23,6 +25,27 @@ describe('panel harvest against the trade', () => {
     expect(amps).toBeGreaterThan(0.7);
     expect(amps).toBeLessThan(1.4);
     expect(amps).toBeLessThan(2); // below a 2 A wall charger
+  });
+});
+
+describe('panel harvest against the trade, with the sun module’s clear sky', () => {
+  // Ineichen–Perez clear sky (the sun module) for a 60° sun on day 172 at sea level, Linke turbidity 3; the panel faces
+  // the sun (tilt 30°, no angle of incidence): plane = DNI + isotropic sky diffuse + ground reflection (albedo 0.2).
+  const sky = clearSkyIrradiance(60, 172);
+  const planeWm2 = sky.dniWm2 + isotropicSkyDiffuseWm2(30, sky.dhiWm2) + groundReflectedWm2(30, sky.ghiWm2, 0.2);
+  it('the aimed plane gets roughly the STC level (900–1100 W/m²)', () => {
+    expect(planeWm2).toBeGreaterThan(900);
+    expect(planeWm2).toBeLessThan(1100);
+  });
+  it('a 50 W panel gives 50–70 % of its label at 20 °C air (common practice: about 30 W)', () => {
+    const share = panelPowerW(testUsbPanel({ ratedW: 50, portMaxA: 10 }), planeWm2, 20) / 50;
+    expect(share).toBeGreaterThan(0.5);
+    expect(share).toBeLessThan(0.7);
+  });
+  it('a 10 W USB panel gives about 1 A at 5 V (common practice)', () => {
+    const amps = panelPowerW(testUsbPanel({ ratedW: 10 }), planeWm2, 20) / 5;
+    expect(amps).toBeGreaterThan(0.7);
+    expect(amps).toBeLessThan(1.4);
   });
 });
 

@@ -131,3 +131,33 @@ describe('edge cases', () => {
     expect(result.verdict.status).toBe('runs-dry'); // no boost converter for the radio
   });
 });
+
+describe('with the sun module’s trip series', () => {
+  it('a 14-night summer trip at 46.5° N simulates in every design sky with a balanced ledger', async () => {
+    const { computeTripSolar } = await import('../sun/trip-solar.js');
+    const { tripSolarInputSchema } = await import('../schemas/trip-solar.js');
+    const solar = computeTripSolar(
+      tripSolarInputSchema.parse({
+        latitudeDeg: 46.5, longitudeDeg: 8, timeZone: 'Europe/Zurich', startDate: '2026-07-01', nights: 14,
+        temperatures: { lowC: 5, highC: 18 },
+      }),
+    );
+    const kit: KitEntry[] = [
+      bankLine(2), phoneLead,
+      { itemId: 'panel', count: 1, spec: testUsbPanel({ ratedW: 10, outputPort: { connector: 'usb-c', captiveCable: true } }) },
+    ];
+    const result = simulateKit({ solar, kit, devices: [phoneDevice(0.6)], reserveShare: 0.1 });
+    expect(result.skies).toHaveLength(4);
+    expect(result.skies[0]?.ledger).toHaveLength(15);
+    const harvestWh = result.skies[0]?.ledger.reduce((s, d) => s + d.harvestWh, 0) ?? 0;
+    expect(harvestWh).toBeGreaterThan(0);
+    for (const sky of result.skies) {
+      for (const d of sky.ledger) {
+        const flows = d.harvestWh - d.storeChargeLossWh - d.storeOutputLossWh - d.converterLossWh - d.deviceChargeLossWh - d.deliveredWh;
+        expect(Math.abs(d.storedEndWh - d.storedStartWh - flows)).toBeLessThan(1e-9);
+      }
+    }
+    expect(['keeps-up', 'lasts-trip', 'runs-dry']).toContain(result.verdict.status);
+    expect(result.verdict.text.length).toBeGreaterThan(10);
+  });
+});

@@ -19,6 +19,7 @@ import type { Database } from './database/database.types';
 import { HealthModule } from './health/health.module';
 import { LockerFilesModule } from './locker-files/locker-files.module';
 import { LockerModule } from './locker/locker.module';
+import { TripsModule } from './trips/trips.module';
 import { UsersModule } from './users/users.module';
 
 export interface AppModuleOptions {
@@ -70,6 +71,7 @@ export class AppModule {
         LockerFilesModule,
         CatalogueModule,
         LockerModule,
+        TripsModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

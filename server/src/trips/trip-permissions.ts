@@ -1,0 +1,26 @@
+import type { TripRole } from '@gramwatt/shared';
+
+/**
+ * What each trip role may do: the one table every trip route is checked against (through
+ * `TripAccessGuard` and `@TripPermission`). Later features add their actions here (plans, kit, invites,
+ * share links), so the rule for who may do what lives in one place.
+ */
+export const tripPermissions = {
+  readTrip: ['leader', 'partner', 'viewer'],
+  updateTrip: ['leader'],
+  deleteTrip: ['leader'],
+  readMembers: ['leader', 'partner', 'viewer'],
+  readDevices: ['leader', 'partner', 'viewer'],
+  /** Adds one of the caller's own locker devices. */
+  addDevice: ['leader', 'partner'],
+  /** Changes or removes a device: a partner only their own (checked by the devices service), the leader any. */
+  changeDevice: ['leader', 'partner'],
+} as const satisfies Record<string, readonly TripRole[]>;
+
+/** An action on a trip, as named in {@link tripPermissions}. */
+export type TripPermission = keyof typeof tripPermissions;
+
+/** The roles that may do `permission`. */
+export function rolesFor(permission: TripPermission): readonly TripRole[] {
+  return tripPermissions[permission];
+}

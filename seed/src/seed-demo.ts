@@ -2,11 +2,13 @@ import { schema, type Database } from '@gramwatt/server';
 import { count, inArray } from 'drizzle-orm';
 import { demoAccounts, demoPassword } from './demo-accounts';
 import { seedAccounts } from './seeders/accounts.seeder';
+import { seedCatalogue } from './seeders/catalogue.seeder';
 import { seedLockers } from './seeders/locker.seeder';
 
 /** Loads the whole invented demo scenario, seeder by seeder in dependency order. Idempotent. */
 export async function seedDemo(db: Database): Promise<void> {
   await seedAccounts(db);
+  await seedCatalogue(db);
   await seedLockers(db);
 }
 

@@ -159,6 +159,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
       const idx = si * deviceCount + di;
       if (best) {
         pathEff[idx] = best.pathEfficiency;
+        usedItemIds.add(s.itemId);
         const hull = lowerHull(found.paths, d.spec.chargeEfficiency);
         hullOffset[idx] = hullGain.length;
         hullCount[idx] = hull.length;

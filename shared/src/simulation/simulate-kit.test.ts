@@ -161,3 +161,13 @@ describe('with the sun module’s trip series', () => {
     expect(result.verdict.text.length).toBeGreaterThan(10);
   });
 });
+
+describe('unused items', () => {
+  it('a bank no device can draw from, and a lead no hop needs, are reported unused', () => {
+    const solar = syntheticTripSolar({ nights: 3 });
+    const lonely = testBank({ outputPorts: [{ connector: 'micro-usb', captiveCable: false, volts: 5, maxA: 1, usbPdVolts: [] }] });
+    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'lonely', count: 1, spec: lonely }, { itemId: 'spare-lead', count: 1, spec: testLead('radio-dc', 'ring-terminal') }];
+    const result = simulateKit({ solar, kit, devices: [phoneDevice(0.8)], reserveShare: 0.1 });
+    expect(result.unusedItemIds.sort()).toEqual(['lonely', 'spare-lead']);
+  });
+});

@@ -56,7 +56,7 @@ export function simulateKit(input: KitSimulationInput): KitSimulation {
     stores: k.stores,
     devices: k.devices,
     schedule,
-    unusedItemIds: input.kit.some((e) => e.spec.kind === 'bank') ? unusedItemIds.filter((id) => !k.stores.some((s) => s.itemId === id)) : unusedItemIds,
+    unusedItemIds,
   };
 }
 

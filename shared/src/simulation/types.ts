@@ -183,6 +183,6 @@ export interface KitSimulation {
   devices: DeviceUnit[];
   /** Charging sessions in the expected sky. */
   schedule: ChargeSession[];
-  /** Kit item ids no path used (a panel that reaches no store, a converter or lead no path needs). */
+  /** Kit item ids no path uses: a panel that reaches no store, a bank no device can draw from, a converter or lead no path needs. */
   unusedItemIds: string[];
 }

@@ -19,7 +19,9 @@ describe('kit cautions', () => {
     expect(cautions.find((c) => c.id === 'airline-forbidden')?.itemIds).toEqual(['big']);
     expect(cautions[0]?.severity).toBe('danger');
     // A 10,000 mAh bank is 37 Wh: no airline caution.
-    expect(ids(kitCautions({ kit: [{ itemId: 'b', count: 1, spec: testBank() }], devices: [] }))).not.toContain('airline-approval');
+    expect(ids(kitCautions({ kit: [{ itemId: 'b', count: 1, spec: testBank() }], devices: [] }))).not.toContain(
+      'airline-approval',
+    );
   });
   it('a radio brings the licence caution; a boost converter the noise and fusing cautions', () => {
     const kit: KitEntry[] = [
@@ -31,10 +33,14 @@ describe('kit cautions', () => {
   });
   it('freezing hours bring the freezing caution with their count', () => {
     const solar = syntheticTripSolar({ nights: 2, lowC: -5, highC: 3 });
-    const freezing = kitCautions({ kit: [{ itemId: 'bank', count: 1, spec: testBank() }], devices: [], solar }).find((c) => c.id === 'freezing');
+    const freezing = kitCautions({ kit: [{ itemId: 'bank', count: 1, spec: testBank() }], devices: [], solar }).find(
+      (c) => c.id === 'freezing',
+    );
     expect(freezing?.text).toMatch(/about \d+ hours/);
     const warm = syntheticTripSolar({ nights: 2, lowC: 5, highC: 20 });
-    expect(ids(kitCautions({ kit: [{ itemId: 'bank', count: 1, spec: testBank() }], devices: [], solar: warm }))).not.toContain('freezing');
+    expect(
+      ids(kitCautions({ kit: [{ itemId: 'bank', count: 1, spec: testBank() }], devices: [], solar: warm })),
+    ).not.toContain('freezing');
   });
   it('heat is a warning on hot trips; a DC lead asks for a fuse', () => {
     const solar = syntheticTripSolar({ nights: 2, lowC: 22, highC: 38 });

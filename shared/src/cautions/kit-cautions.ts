@@ -46,7 +46,13 @@ export interface KitCautionInput {
 /** A share of storage above the reserve below which the plan calls the margin thin (0–1; a planning choice). */
 export const thinMarginShare = 0.15;
 
-const dcConnectors: ReadonlySet<Connector> = new Set(['barrel-5.5x2.1', 'barrel-5.5x2.5', '12v-accessory', 'ring-terminal', 'radio-dc']);
+const dcConnectors: ReadonlySet<Connector> = new Set([
+  'barrel-5.5x2.1',
+  'barrel-5.5x2.5',
+  '12v-accessory',
+  'ring-terminal',
+  'radio-dc',
+]);
 
 /**
  * The cautions that apply to a kit on a trip, most serious first. The wording is ours; each defers to the
@@ -65,12 +71,16 @@ export function kitCautions(input: KitCautionInput): Caution[] {
     const ratedWh = bankRatedWh(entry.spec);
     if (ratedWh > airlineForbiddenAboveWh) {
       cautions.push({
-        id: 'airline-forbidden', severity: 'danger', itemIds: [entry.itemId],
+        id: 'airline-forbidden',
+        severity: 'danger',
+        itemIds: [entry.itemId],
         text: `This bank is rated ${Math.round(ratedWh)} Wh: over ${airlineForbiddenAboveWh} Wh, passengers may not carry it on a plane (IATA guidance). Plan to travel to the trailhead without flying it, or leave it out.`,
       });
     } else if (ratedWh > airlineApprovalAboveWh) {
       cautions.push({
-        id: 'airline-approval', severity: 'warning', itemIds: [entry.itemId],
+        id: 'airline-approval',
+        severity: 'warning',
+        itemIds: [entry.itemId],
         text: `This bank is rated ${Math.round(ratedWh)} Wh: over ${airlineApprovalAboveWh} Wh it needs the airline's approval before you fly with it, in the cabin only (IATA guidance).`,
       });
     }
@@ -81,7 +91,9 @@ export function kitCautions(input: KitCautionInput): Caution[] {
     for (const step of solar.steps) if (step.airTempC < lithiumMinChargeTemperatureC) frozenH += step.durationH;
     if (frozenH > 0) {
       cautions.push({
-        id: 'freezing', severity: 'warning', itemIds: banks.map((b) => b.itemId),
+        id: 'freezing',
+        severity: 'warning',
+        itemIds: banks.map((b) => b.itemId),
         text: `The air is below freezing for about ${Math.round(frozenH)} hours of this trip. Never charge lithium cells below 0 °C: keep banks and devices in a pocket or sleeping bag and charge them only once they are warm. The plan does not charge banks from the panel in those hours.`,
       });
     }
@@ -92,12 +104,16 @@ export function kitCautions(input: KitCautionInput): Caution[] {
     const hasPanel = kit.some((e) => e.spec.kind === 'panel');
     if (hot >= lithiumHeatCautionAirTemperatureC || (hasPanel && banks.length > 0)) {
       cautions.push({
-        id: 'heat', severity: hot >= lithiumHeatCautionAirTemperatureC ? 'warning' : 'info', itemIds: banks.map((b) => b.itemId),
+        id: 'heat',
+        severity: hot >= lithiumHeatCautionAirTemperatureC ? 'warning' : 'info',
+        itemIds: banks.map((b) => b.itemId),
         text: 'Never leave a bank cooking in the sun: keep it in the shade of the panel or inside the pack while it charges, and let a hot bank cool before charging it.',
       });
     }
     cautions.push({
-      id: 'lithium', severity: 'warning', itemIds: [...banks.map((b) => b.itemId), ...devices.map((d) => d.deviceId)],
+      id: 'lithium',
+      severity: 'warning',
+      itemIds: [...banks.map((b) => b.itemId), ...devices.map((d) => d.deviceId)],
       text: 'Lithium batteries can burn. Use protected packs and the charger they were made for, and stop using one that is swollen, hot or damaged.',
     });
   }
@@ -105,7 +121,9 @@ export function kitCautions(input: KitCautionInput): Caution[] {
   const boosts = kit.filter((e) => e.spec.kind === 'converter' && e.spec.converterType === 'boost');
   if (boosts.length > 0) {
     cautions.push({
-      id: 'boost-noise', severity: 'info', itemIds: boosts.map((b) => b.itemId),
+      id: 'boost-noise',
+      severity: 'info',
+      itemIds: boosts.map((b) => b.itemId),
       text: 'Boost converters can make radio noise: charge the radio while you are not operating it.',
     });
   }
@@ -116,7 +134,9 @@ export function kitCautions(input: KitCautionInput): Caution[] {
   const dcDevices = devices.filter((d) => d.spec.chargesVia === '12v-dc');
   if (dcLeads.length > 0 || (dcDevices.length > 0 && boosts.length > 0)) {
     cautions.push({
-      id: 'dc-fusing', severity: 'warning', itemIds: [...dcLeads.map((l) => l.itemId), ...dcDevices.map((d) => d.deviceId)],
+      id: 'dc-fusing',
+      severity: 'warning',
+      itemIds: [...dcLeads.map((l) => l.itemId), ...dcDevices.map((d) => d.deviceId)],
       text: 'Fuse DC leads on the positive side, close to the battery, and check the polarity of every plug before connecting.',
     });
   }
@@ -124,20 +144,26 @@ export function kitCautions(input: KitCautionInput): Caution[] {
   const radios = devices.filter((d) => d.spec.deviceKind === 'radio');
   if (radios.length > 0) {
     cautions.push({
-      id: 'licence', severity: 'info', itemIds: radios.map((r) => r.deviceId),
+      id: 'licence',
+      severity: 'info',
+      itemIds: radios.map((r) => r.deviceId),
       text: 'Transmitting needs the licence the law of the place requires, and the bands and powers it allows. Follow licensed practice.',
     });
   }
 
   if (simulation && simulation.verdict.status !== 'runs-dry' && simulation.verdict.worstMarginShare < thinMarginShare) {
     cautions.push({
-      id: 'thin-margin', severity: 'warning', itemIds: [],
+      id: 'thin-margin',
+      severity: 'warning',
+      itemIds: [],
       text: `On the worst day this kit has only ${Math.round(simulation.verdict.worstMarginShare * 100)} % of its storage to spare above the reserve. A longer cloudy spell, a cold snap or more use than planned could empty it.`,
     });
   }
 
   cautions.push({
-    id: 'estimates', severity: 'info', itemIds: [],
+    id: 'estimates',
+    severity: 'info',
+    itemIds: [],
     text: 'These figures are estimates, not a guarantee: carry a margin. Defer to the manufacturer, local rules and licensed practice.',
   });
 

@@ -7,7 +7,10 @@ describe('device demand', () => {
     // 24 h at 5-5-90: 1.2 h transmit, 1.2 h receive, 21.6 h standby, at the pack's 7.4 V.
     const radio = testRadio({ supplyVoltsNominal: 7.4, supplyVoltsMin: 6, supplyVoltsMax: 9 });
     const perDayWh = deviceDemandWhPerDay(radio, {
-      basis: 'radio-hours', transmitMinutesPerDay: 72, receiveHoursPerDay: 1.2, standbyHoursPerDay: 21.6,
+      basis: 'radio-hours',
+      transmitMinutesPerDay: 72,
+      receiveHoursPerDay: 1.2,
+      standbyHoursPerDay: 21.6,
     });
     const batteryLifeH = 14.8 / (perDayWh / 24);
     expect(batteryLifeH).toBeGreaterThan(10);

@@ -46,7 +46,11 @@ export function storageDrawWh(
  * over the trip's days.
  * @example needsChargingPath(phone, 3) // true when 3 days × demand > own battery Wh
  */
-export function needsChargingPath(device: DeviceSpec, tripDays: number, useProfile: UseProfile = device.useProfile): boolean {
+export function needsChargingPath(
+  device: DeviceSpec,
+  tripDays: number,
+  useProfile: UseProfile = device.useProfile,
+): boolean {
   return deviceDemandWhPerDay(device, useProfile) * tripDays > device.ownBatteryWh * (1 + 1e-12);
 }
 

@@ -42,7 +42,13 @@ export function panelPowerW(
   airTempC: number,
   options: PanelPowerOptions = {},
 ): number {
-  return panelPowerWithFactorW(panel, planeIrradianceWm2, airTempC, panelSystemFactor(options.losses ?? defaultUsbPanelLosses), options.cellTemperature);
+  return panelPowerWithFactorW(
+    panel,
+    planeIrradianceWm2,
+    airTempC,
+    panelSystemFactor(options.losses ?? defaultUsbPanelLosses),
+    options.cellTemperature,
+  );
 }
 
 /** `panelPowerW` with the system factor already computed (for series over many steps). */
@@ -56,6 +62,8 @@ export function panelPowerWithFactorW(
   if (!(planeIrradianceWm2 > 0) || planeIrradianceWm2 < panel.dropoutIrradianceWm2) return 0;
   const cellC = cellTemperatureC(airTempC, planeIrradianceWm2, cellTemperature);
   const powerW =
-    (panel.ratedW * planeIrradianceWm2) / stcIrradianceWm2 * panelTemperatureFactor(panel.tempCoeffPctPerC, cellC) * systemFactor;
+    ((panel.ratedW * planeIrradianceWm2) / stcIrradianceWm2) *
+    panelTemperatureFactor(panel.tempCoeffPctPerC, cellC) *
+    systemFactor;
   return Math.min(powerW, panelPortCapW(panel));
 }

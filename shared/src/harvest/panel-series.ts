@@ -9,7 +9,11 @@ import { defaultUsbPanelLosses, panelSystemFactor } from './system-factor.js';
  * Result: one `Float64Array` per sky, in `solar.skies` order, each `solar.steps.length` long.
  * @example panelPowerSeries(panel, solar)[0][12] // W at step 12 of the expected sky
  */
-export function panelPowerSeries(panel: UsbPanelSpec, solar: TripSolarSeries, options: PanelPowerOptions = {}): Float64Array[] {
+export function panelPowerSeries(
+  panel: UsbPanelSpec,
+  solar: TripSolarSeries,
+  options: PanelPowerOptions = {},
+): Float64Array[] {
   const factor = panelSystemFactor(options.losses ?? defaultUsbPanelLosses);
   return solar.skies.map((sky) => {
     const series = new Float64Array(solar.steps.length);

@@ -28,7 +28,11 @@ export const radioUseProfileSchema = z
   })
   .superRefine((p, ctx) => {
     if (p.transmitMinutesPerDay / 60 + p.receiveHoursPerDay + p.standbyHoursPerDay > 24 + 1e-9) {
-      ctx.addIssue({ code: 'custom', path: ['standbyHoursPerDay'], message: 'Transmit, receive and standby add up to more than 24 h' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['standbyHoursPerDay'],
+        message: 'Transmit, receive and standby add up to more than 24 h',
+      });
     }
   });
 
@@ -49,11 +53,11 @@ export const energyUseProfileSchema = z.object({
 });
 
 /** How a device is used per day (the locker keeps a default; a trip may override it per device). */
-export const useProfileSchema = z.discriminatedUnion('basis', [
-  radioUseProfileSchema,
-  batteryShareUseProfileSchema,
-  energyUseProfileSchema,
-], { error: 'Use profile basis must be radio-hours, battery-share or energy' });
+export const useProfileSchema = z.discriminatedUnion(
+  'basis',
+  [radioUseProfileSchema, batteryShareUseProfileSchema, energyUseProfileSchema],
+  { error: 'Use profile basis must be radio-hours, battery-share or energy' },
+);
 export type UseProfile = z.infer<typeof useProfileSchema>;
 export type RadioUseProfile = z.infer<typeof radioUseProfileSchema>;
 
@@ -102,7 +106,11 @@ export const deviceSpecSchema = z
   })
   .superRefine((d, ctx) => {
     if (d.chargePowerW === undefined && d.chargeCurrentA === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['chargePowerW'], message: 'Give the charge power (W) or the charge current (A)' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['chargePowerW'],
+        message: 'Give the charge power (W) or the charge current (A)',
+      });
     }
     if (d.deviceKind === 'radio') {
       for (const key of ['supplyVoltsNominal', 'transmitCurrentA', 'receiveCurrentA', 'standbyCurrentA'] as const) {
@@ -113,14 +121,26 @@ export const deviceSpecSchema = z
       ctx.addIssue({ code: 'custom', path: ['useProfile', 'basis'], message: 'Transmit/receive hours are for radios' });
     }
     if (d.supplyVoltsMin !== undefined && d.supplyVoltsMax !== undefined && d.supplyVoltsMin > d.supplyVoltsMax) {
-      ctx.addIssue({ code: 'custom', path: ['supplyVoltsMin'], message: 'Minimum supply voltage is above the maximum' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['supplyVoltsMin'],
+        message: 'Minimum supply voltage is above the maximum',
+      });
     }
     if (d.supplyVoltsNominal !== undefined) {
       if (d.supplyVoltsMin !== undefined && d.supplyVoltsNominal < d.supplyVoltsMin) {
-        ctx.addIssue({ code: 'custom', path: ['supplyVoltsNominal'], message: 'Nominal supply voltage is below the minimum' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['supplyVoltsNominal'],
+          message: 'Nominal supply voltage is below the minimum',
+        });
       }
       if (d.supplyVoltsMax !== undefined && d.supplyVoltsNominal > d.supplyVoltsMax) {
-        ctx.addIssue({ code: 'custom', path: ['supplyVoltsNominal'], message: 'Nominal supply voltage is above the maximum' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['supplyVoltsNominal'],
+          message: 'Nominal supply voltage is above the maximum',
+        });
       }
     }
   });

@@ -5,21 +5,46 @@ import { deviceSpecSchema } from './devices.js';
 
 const usbA = { connector: 'usb-a', captiveCable: false } as const;
 const panel = {
-  kind: 'panel', panelType: 'usb', ratedW: 10, portVolts: 5, portMaxA: 2, dropoutIrradianceWm2: 150,
-  tempCoeffPctPerC: -0.4, outputPort: usbA, massG: 300,
+  kind: 'panel',
+  panelType: 'usb',
+  ratedW: 10,
+  portVolts: 5,
+  portMaxA: 2,
+  dropoutIrradianceWm2: 150,
+  tempCoeffPctPerC: -0.4,
+  outputPort: usbA,
+  massG: 300,
 };
 const bank = {
-  kind: 'bank', capacityMah: 10000, inputMaxW: 10, inputPort: { connector: 'usb-c', captiveCable: false },
-  outputPorts: [{ connector: 'usb-a', captiveCable: false, volts: 5, maxA: 2.4 }], massG: 190,
+  kind: 'bank',
+  capacityMah: 10000,
+  inputMaxW: 10,
+  inputPort: { connector: 'usb-c', captiveCable: false },
+  outputPorts: [{ connector: 'usb-a', captiveCable: false, volts: 5, maxA: 2.4 }],
+  massG: 190,
 };
 const phone = {
-  kind: 'device', deviceKind: 'phone', ownBatteryWh: 15, chargesVia: 'usb-5v', chargePowerW: 10,
-  chargePort: { connector: 'usb-c', captiveCable: false }, useProfile: { basis: 'battery-share', batterySharePerDay: 0.5 },
+  kind: 'device',
+  deviceKind: 'phone',
+  ownBatteryWh: 15,
+  chargesVia: 'usb-5v',
+  chargePowerW: 10,
+  chargePort: { connector: 'usb-c', captiveCable: false },
+  useProfile: { basis: 'battery-share', batterySharePerDay: 0.5 },
 };
 const radio = {
-  kind: 'device', deviceKind: 'radio', ownBatteryWh: 14, chargesVia: '12v-dc', chargeCurrentA: 1,
-  chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false }, supplyVoltsNominal: 13.8, supplyVoltsMin: 11,
-  supplyVoltsMax: 16, transmitCurrentA: 1.5, receiveCurrentA: 0.25, standbyCurrentA: 0.05,
+  kind: 'device',
+  deviceKind: 'radio',
+  ownBatteryWh: 14,
+  chargesVia: '12v-dc',
+  chargeCurrentA: 1,
+  chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+  supplyVoltsNominal: 13.8,
+  supplyVoltsMin: 11,
+  supplyVoltsMax: 16,
+  transmitCurrentA: 1.5,
+  receiveCurrentA: 0.25,
+  standbyCurrentA: 0.05,
   useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 20, receiveHoursPerDay: 3, standbyHoursPerDay: 10 },
 };
 
@@ -36,11 +61,21 @@ describe('item schemas: valid specs', () => {
     expect(usbPanelSpecSchema.parse(panel).ratedW).toBe(10);
     expect(
       converterSpecSchema.parse({
-        kind: 'converter', converterType: 'boost', inputVolts: 5, outputVolts: 13.8, maxOutputA: 1, efficiency: 0.85,
-        inputPort: { connector: 'usb-a', captiveCable: true }, outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true }, massG: 40,
+        kind: 'converter',
+        converterType: 'boost',
+        inputVolts: 5,
+        outputVolts: 13.8,
+        maxOutputA: 1,
+        efficiency: 0.85,
+        inputPort: { connector: 'usb-a', captiveCable: true },
+        outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+        massG: 40,
       }).converterType,
     ).toBe('boost');
-    expect(leadSpecSchema.parse({ kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 }).lengthM).toBe(0.3);
+    expect(
+      leadSpecSchema.parse({ kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 })
+        .lengthM,
+    ).toBe(0.3);
     expect(deviceSpecSchema.parse(radio).canRunLive).toBe(false);
     expect(itemSpecSchema.parse(phone).kind).toBe('device');
   });
@@ -75,9 +110,9 @@ describe('item schemas: invalid specs name the field', () => {
     expect(paths(bankSpecSchema.safeParse({ ...bank, outputPorts: [{ ...bank.outputPorts[0], maxA: -1 }] }))).toEqual([
       'outputPorts.0.maxA',
     ]);
-    expect(paths(usbPanelSpecSchema.safeParse({ ...panel, outputPort: { connector: 'usb-z', captiveCable: false } }))).toEqual([
-      'outputPort.connector',
-    ]);
+    expect(
+      paths(usbPanelSpecSchema.safeParse({ ...panel, outputPort: { connector: 'usb-z', captiveCable: false } })),
+    ).toEqual(['outputPort.connector']);
   });
   it('a radio needs its currents and volts; a boost converter puts out 12–13.8 V', () => {
     const { transmitCurrentA: _t, ...noTx } = radio;
@@ -85,8 +120,14 @@ describe('item schemas: invalid specs name the field', () => {
     expect(
       paths(
         converterSpecSchema.safeParse({
-          kind: 'converter', converterType: 'boost', inputVolts: 5, outputVolts: 9, maxOutputA: 1, inputPort: usbA,
-          outputPort: usbA, massG: 30,
+          kind: 'converter',
+          converterType: 'boost',
+          inputVolts: 5,
+          outputVolts: 9,
+          maxOutputA: 1,
+          inputPort: usbA,
+          outputPort: usbA,
+          massG: 30,
         }),
       ),
     ).toEqual(['outputVolts']);
@@ -100,7 +141,14 @@ describe('item schemas: invalid specs name the field', () => {
   });
   it('rejects duplicate item ids and zero counts in a kit', () => {
     const spec = usbPanelSpecSchema.parse(panel);
-    expect(paths(kitSchema.safeParse([{ itemId: 'a', count: 1, spec }, { itemId: 'a', count: 1, spec }]))).toEqual(['1.itemId']);
+    expect(
+      paths(
+        kitSchema.safeParse([
+          { itemId: 'a', count: 1, spec },
+          { itemId: 'a', count: 1, spec },
+        ]),
+      ),
+    ).toEqual(['1.itemId']);
     expect(paths(kitSchema.safeParse([{ itemId: 'a', count: 0, spec }]))).toEqual(['0.count']);
   });
 });

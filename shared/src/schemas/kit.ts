@@ -35,13 +35,17 @@ export const kitEntrySchema = z.object({
 export type KitEntry = z.infer<typeof kitEntrySchema>;
 
 /** A kit: a list of locker items with counts. Item ids are unique within a kit. */
-export const kitSchema = z.array(kitEntrySchema).max(200, { error: 'A kit has at most 200 lines' }).superRefine((kit, ctx) => {
-  const seen = new Set<string>();
-  kit.forEach((entry, i) => {
-    if (seen.has(entry.itemId)) ctx.addIssue({ code: 'custom', path: [i, 'itemId'], message: 'This item is already in the kit' });
-    seen.add(entry.itemId);
+export const kitSchema = z
+  .array(kitEntrySchema)
+  .max(200, { error: 'A kit has at most 200 lines' })
+  .superRefine((kit, ctx) => {
+    const seen = new Set<string>();
+    kit.forEach((entry, i) => {
+      if (seen.has(entry.itemId))
+        ctx.addIssue({ code: 'custom', path: [i, 'itemId'], message: 'This item is already in the kit' });
+      seen.add(entry.itemId);
+    });
   });
-});
 export type Kit = z.infer<typeof kitSchema>;
 
 /** A device on a trip with its effective use profile (the trip's override or the locker default). */

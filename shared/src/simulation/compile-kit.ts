@@ -3,7 +3,14 @@ import { deviceChargePowerW, deviceDemandWhPerDay, needsChargingPath } from '../
 import { panelPowerSeries } from '../harvest/panel-series.js';
 import type { BankSpec, UsbPanelSpec } from '../schemas/items.js';
 import { bankUsableWh } from '../storage/bank.js';
-import { chargePaths, panelReachesBank, type ChargePath, type KitConverter, type KitLead, type MissingLink } from './connections.js';
+import {
+  chargePaths,
+  panelReachesBank,
+  type ChargePath,
+  type KitConverter,
+  type KitLead,
+  type MissingLink,
+} from './connections.js';
 import type { DeviceUnit, KitSimulationInput, StoreUnit } from './types.js';
 
 /** The kit turned into flat typed arrays for the step loop (no allocation per step). */
@@ -59,7 +66,10 @@ export interface CompiledKit {
  * cheapest to refill is used first, so a less efficient store added to a kit stays full as a spare and takes no
  * harvest — then larger input limit, larger capacity, then item id. It depends only on each store's own spec.
  */
-function meritCompare(a: { spec: BankSpec; itemId: string; unit: number }, b: { spec: BankSpec; itemId: string; unit: number }): number {
+function meritCompare(
+  a: { spec: BankSpec; itemId: string; unit: number },
+  b: { spec: BankSpec; itemId: string; unit: number },
+): number {
   const ea = a.spec.chargeEfficiency * a.spec.outputEfficiency;
   const eb = b.spec.chargeEfficiency * b.spec.outputEfficiency;
   return (
@@ -97,7 +107,8 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     if (spec.kind === 'lead') leads.push({ itemId: entry.itemId, spec });
     else if (spec.kind === 'converter') converters.push({ itemId: entry.itemId, spec });
     else if (spec.kind === 'panel') panels.push({ itemId: entry.itemId, count: entry.count, spec });
-    else if (spec.kind === 'bank') for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
+    else if (spec.kind === 'bank')
+      for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
   }
   storeEntries.sort(meritCompare);
   // Panels water-fill one after another; a fixed order by item id keeps the result independent of the kit's line order.
@@ -107,7 +118,13 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const storeCount = storeEntries.length;
   const stores: StoreUnit[] = storeEntries.map((s) => {
     const usableWh = bankUsableWh(s.spec);
-    return { storeId: `${s.itemId}#${s.unit}`, itemId: s.itemId, unit: s.unit, usableWh, reserveWh: usableWh * reserveShare };
+    return {
+      storeId: `${s.itemId}#${s.unit}`,
+      itemId: s.itemId,
+      unit: s.unit,
+      usableWh,
+      reserveWh: usableWh * reserveShare,
+    };
   });
   const storeCapWh = Float64Array.from(stores, (s) => s.usableWh);
   const storeFloorWh = Float64Array.from(stores, (s) => s.reserveWh);
@@ -181,21 +198,47 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
           ? [{ kind: 'store', text: 'a bank that can charge it' }]
           : [...missing.values()]
         : [];
-    return { deviceId: d.deviceId, demandWhPerDay, ownBatteryWh: d.spec.ownBatteryWh, needsChargingPath: needs, paths, missing: missingLinks };
+    return {
+      deviceId: d.deviceId,
+      demandWhPerDay,
+      ownBatteryWh: d.spec.ownBatteryWh,
+      needsChargingPath: needs,
+      paths,
+      missing: missingLinks,
+    };
   });
 
   return {
-    stepCount, dayCount, stepDurationH, stepDay, stepCamp, stepFrozen,
-    panelCount, panelItemIds: panels.map((p) => p.itemId), panelSeries,
-    storeCount, stores, storeCapWh, storeFloorWh, storeInputMaxW, storeChargeEff, storeOutputEff,
-    panelReach, panelReachLead,
-    deviceCount, devices: deviceUnits,
+    stepCount,
+    dayCount,
+    stepDurationH,
+    stepDay,
+    stepCamp,
+    stepFrozen,
+    panelCount,
+    panelItemIds: panels.map((p) => p.itemId),
+    panelSeries,
+    storeCount,
+    stores,
+    storeCapWh,
+    storeFloorWh,
+    storeInputMaxW,
+    storeChargeEff,
+    storeOutputEff,
+    panelReach,
+    panelReachLead,
+    deviceCount,
+    devices: deviceUnits,
     deviceCapWh: Float64Array.from(devices, (d) => d.spec.ownBatteryWh),
     deviceDemandWhPerH: Float64Array.from(deviceUnits, (d) => d.demandWhPerDay / 24),
     deviceChargeInW: Float64Array.from(devices, (d) => deviceChargePowerW(d.spec)),
     deviceChargeEff: Float64Array.from(devices, (d) => d.spec.chargeEfficiency),
-    pathEff, hullOffset, hullCount,
-    hullGainW: Float64Array.from(hullGain), hullDrawW: Float64Array.from(hullDraw), hullPathEff: Float64Array.from(hullEff),
+    pathEff,
+    hullOffset,
+    hullCount,
+    hullGainW: Float64Array.from(hullGain),
+    hullDrawW: Float64Array.from(hullDraw),
+    hullPathEff: Float64Array.from(hullEff),
     deviceTopsUp: Uint8Array.from(deviceUnits, (d) => (d.needsChargingPath ? 1 : 0)),
     freezeBlocksDeviceTopUps: options.freezeBlocksDeviceTopUps ?? false,
     reserveShare,
@@ -209,10 +252,17 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
  * reaches any point on a segment, so the hull is the least draw for each gain rate; a path that only adds choice can
  * only lower it — which keeps the dispatch monotone when a converter or lead is added.
  */
-function lowerHull(paths: readonly ChargePath[], deviceChargeEff: number): { gainW: number; drawW: number; path: ChargePath }[] {
+function lowerHull(
+  paths: readonly ChargePath[],
+  deviceChargeEff: number,
+): { gainW: number; drawW: number; path: ChargePath }[] {
   const points = paths
     .filter((p) => p.maxDeviceInputW > 0 && p.pathEfficiency > 0)
-    .map((path) => ({ gainW: path.maxDeviceInputW * deviceChargeEff, drawW: path.maxDeviceInputW / path.pathEfficiency, path }))
+    .map((path) => ({
+      gainW: path.maxDeviceInputW * deviceChargeEff,
+      drawW: path.maxDeviceInputW / path.pathEfficiency,
+      path,
+    }))
     .sort((a, b) => a.gainW - b.gainW || a.drawW - b.drawW);
   const hull: { gainW: number; drawW: number; path: ChargePath }[] = [];
   for (const p of points) {

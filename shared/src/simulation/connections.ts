@@ -28,7 +28,8 @@ export type HopResult =
  * @example joinPorts({ connector: 'usb-a', captiveCable: true }, { connector: 'usb-a', captiveCable: false }, []) // { joined: true, leadItemId: null }
  */
 export function joinPorts(from: Port, to: Port, leads: readonly KitLead[]): HopResult {
-  if (from.captiveCable !== to.captiveCable && from.connector === to.connector) return { joined: true, leadItemId: null };
+  if (from.captiveCable !== to.captiveCable && from.connector === to.connector)
+    return { joined: true, leadItemId: null };
   for (const lead of leads) {
     const { fromConnector: a, toConnector: b } = lead.spec;
     if ((a === from.connector && b === to.connector) || (a === to.connector && b === from.connector)) {
@@ -61,7 +62,9 @@ export interface MissingLink {
 const voltsTolerance = 0.05;
 
 function portOffersVolts(port: OutputPort, volts: number): boolean {
-  return Math.abs(port.volts - volts) <= voltsTolerance || port.usbPdVolts.some((v) => Math.abs(v - volts) <= voltsTolerance);
+  return (
+    Math.abs(port.volts - volts) <= voltsTolerance || port.usbPdVolts.some((v) => Math.abs(v - volts) <= voltsTolerance)
+  );
 }
 
 /** Power a USB port gives at a voltage it offers, W (volts × max amps). */
@@ -104,13 +107,19 @@ export function chargePaths(
   bank.outputPorts.forEach((port, portIndex) => {
     if (device.chargesVia === 'usb-5v' || device.chargesVia === 'usb-pd') {
       if (!portOffersVolts(port, usbBusVolts)) return;
-      const volts = device.chargesVia === 'usb-pd' && portOffersVolts(port, deviceChargeVolts(device)) ? deviceChargeVolts(device) : usbBusVolts;
+      const volts =
+        device.chargesVia === 'usb-pd' && portOffersVolts(port, deviceChargeVolts(device))
+          ? deviceChargeVolts(device)
+          : usbBusVolts;
       const hop = joinPorts(port, device.chargePort, leads);
       if (!hop.joined) return noteLead(hop.needs);
       // A PD device on a 5 V-only port charges at 5 V × the port's amps at most.
       paths.push({
-        outputPortIndex: portIndex, converterItemId: null, leadItemIds: hop.leadItemId ? [hop.leadItemId] : [],
-        pathEfficiency: 1, maxDeviceInputW: Math.min(deviceW, portPowerAtW(port, volts)),
+        outputPortIndex: portIndex,
+        converterItemId: null,
+        leadItemIds: hop.leadItemId ? [hop.leadItemId] : [],
+        pathEfficiency: 1,
+        maxDeviceInputW: Math.min(deviceW, portPowerAtW(port, volts)),
       });
       return;
     }
@@ -131,7 +140,11 @@ export function chargePaths(
         converterItemId: converter.itemId,
         leadItemIds: [inHop.leadItemId, outHop.leadItemId].filter((id): id is string => id !== null),
         pathEfficiency: c.efficiency,
-        maxDeviceInputW: Math.min(deviceW, c.maxOutputA * c.outputVolts, portPowerAtW(port, c.inputVolts) * c.efficiency),
+        maxDeviceInputW: Math.min(
+          deviceW,
+          c.maxOutputA * c.outputVolts,
+          portPowerAtW(port, c.inputVolts) * c.efficiency,
+        ),
       });
     }
   });

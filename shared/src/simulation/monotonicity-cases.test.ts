@@ -9,16 +9,30 @@ import { testBank, testBoostConverter, testLead, testPhone, testRadio, testUsbPa
 // grid; the check is that no feasible kit turns infeasible when the item is added, on a grid where the base kit is
 // often feasible (so the check is not empty). They pin the dispatch rule described in the README.
 
-const port = (connector: OutputPort['connector']): OutputPort => ({ connector, captiveCable: false, volts: 5, maxA: 2, usbPdVolts: [] });
+const port = (connector: OutputPort['connector']): OutputPort => ({
+  connector,
+  captiveCable: false,
+  volts: 5,
+  maxA: 2,
+  usbPdVolts: [],
+});
 
-function sweep(make: (p: Record<string, number>) => { kit: KitEntry[]; added: KitEntry; devices: TripDevice[]; nights: number }, grid: Record<string, number[]>) {
+function sweep(
+  make: (p: Record<string, number>) => { kit: KitEntry[]; added: KitEntry; devices: TripDevice[]; nights: number },
+  grid: Record<string, number[]>,
+) {
   const keys = Object.keys(grid);
   let feasibleBase = 0;
   const broken: Record<string, number>[] = [];
   const walk = (i: number, p: Record<string, number>) => {
     if (i === keys.length) {
       const { kit, added, devices, nights } = make(p);
-      const solar = syntheticTripSolar({ nights, cloudyShare: 0.3, walkStartHour: p.walkStart ?? 8, walkEndHour: p.walkEnd ?? 16 });
+      const solar = syntheticTripSolar({
+        nights,
+        cloudyShare: 0.3,
+        walkStartHour: p.walkStart ?? 8,
+        walkEndHour: p.walkEnd ?? 16,
+      });
       if (!isKitFeasible({ solar, kit, devices, reserveShare: 0 })) return;
       feasibleBase++;
       if (!isKitFeasible({ solar, kit: [...kit, added], devices, reserveShare: 0 })) broken.push({ ...p });
@@ -37,21 +51,49 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     // took the panel's harvest ahead of the phone's bank.
     const { feasibleBase, broken } = sweep(
       (p) => {
-        const phoneBank = testBank({ capacityMah: p.cap, chargeEfficiency: p.eff, outputEfficiency: 0.8, inputMaxW: 10, outputPorts: [port('usb-a')] });
-        const lampBank = testBank({ capacityMah: 20000, chargeEfficiency: 0.95, outputEfficiency: 0.95, outputPorts: [port('micro-usb')] });
-        const lamp = testPhone(0.02, { deviceKind: 'headlamp', ownBatteryWh: 40, chargePort: { connector: 'micro-usb', captiveCable: true } });
+        const phoneBank = testBank({
+          capacityMah: p.cap,
+          chargeEfficiency: p.eff,
+          outputEfficiency: 0.8,
+          inputMaxW: 10,
+          outputPorts: [port('usb-a')],
+        });
+        const lampBank = testBank({
+          capacityMah: 20000,
+          chargeEfficiency: 0.95,
+          outputEfficiency: 0.95,
+          outputPorts: [port('micro-usb')],
+        });
+        const lamp = testPhone(0.02, {
+          deviceKind: 'headlamp',
+          ownBatteryWh: 40,
+          chargePort: { connector: 'micro-usb', captiveCable: true },
+        });
         return {
           nights: p.nights ?? 3,
-          devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }, { deviceId: 'lamp', spec: lamp }],
+          devices: [
+            { deviceId: 'phone', spec: testPhone(p.share ?? 0) },
+            { deviceId: 'lamp', spec: lamp },
+          ],
           kit: [
             { itemId: 'phone-bank', count: 1, spec: phoneBank },
             { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
-            { itemId: 'panel', count: 1, spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }) },
+            {
+              itemId: 'panel',
+              count: 1,
+              spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }),
+            },
           ],
           added: { itemId: 'lamp-bank', count: 1, spec: lampBank },
         };
       },
-      { nights: [3, 6, 10], cap: [2000, 3000, 5000, 8000], share: [0.4, 0.6, 0.8, 1, 1.3], w: [3, 6, 10, 20], eff: [0.6, 0.8] },
+      {
+        nights: [3, 6, 10],
+        cap: [2000, 3000, 5000, 8000],
+        share: [0.4, 0.6, 0.8, 1, 1.3],
+        w: [3, 6, 10, 20],
+        eff: [0.6, 0.8],
+      },
     );
     expect(feasibleBase).toBeGreaterThan(50);
     expect(broken).toEqual([]);
@@ -61,23 +103,59 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     // Merit-order harvest failed here: the new efficient bank, reachable only by the headlamp, outranked the phone's bank.
     const { feasibleBase, broken } = sweep(
       (p) => {
-        const phoneBank = testBank({ capacityMah: p.cap, chargeEfficiency: 0.8, outputEfficiency: 0.8, inputMaxW: 10, outputPorts: [port('usb-a')] });
-        const lampBank = testBank({ capacityMah: p.capY, chargeEfficiency: 0.6, outputEfficiency: 0.7, inputMaxW: 10, outputPorts: [port('micro-usb')] });
-        const better = testBank({ capacityMah: 20000, chargeEfficiency: 0.95, outputEfficiency: 0.95, inputMaxW: p.inW, outputPorts: [port('micro-usb')] });
-        const lamp = testPhone(0.9, { deviceKind: 'headlamp', ownBatteryWh: 5, chargePort: { connector: 'micro-usb', captiveCable: true } });
+        const phoneBank = testBank({
+          capacityMah: p.cap,
+          chargeEfficiency: 0.8,
+          outputEfficiency: 0.8,
+          inputMaxW: 10,
+          outputPorts: [port('usb-a')],
+        });
+        const lampBank = testBank({
+          capacityMah: p.capY,
+          chargeEfficiency: 0.6,
+          outputEfficiency: 0.7,
+          inputMaxW: 10,
+          outputPorts: [port('micro-usb')],
+        });
+        const better = testBank({
+          capacityMah: 20000,
+          chargeEfficiency: 0.95,
+          outputEfficiency: 0.95,
+          inputMaxW: p.inW,
+          outputPorts: [port('micro-usb')],
+        });
+        const lamp = testPhone(0.9, {
+          deviceKind: 'headlamp',
+          ownBatteryWh: 5,
+          chargePort: { connector: 'micro-usb', captiveCable: true },
+        });
         return {
           nights: p.nights ?? 3,
-          devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }, { deviceId: 'lamp', spec: lamp }],
+          devices: [
+            { deviceId: 'phone', spec: testPhone(p.share ?? 0) },
+            { deviceId: 'lamp', spec: lamp },
+          ],
           kit: [
             { itemId: 'phone-bank', count: 1, spec: phoneBank },
             { itemId: 'lamp-bank', count: 1, spec: lampBank },
             { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
-            { itemId: 'panel', count: 1, spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }) },
+            {
+              itemId: 'panel',
+              count: 1,
+              spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }),
+            },
           ],
           added: { itemId: 'better-bank', count: 1, spec: better },
         };
       },
-      { nights: [3, 6, 10], cap: [2000, 3000, 5000, 8000], share: [0.8, 1, 1.3, 1.6], w: [3, 6, 10, 20], inW: [3, 10], capY: [3000, 10000] },
+      {
+        nights: [3, 6, 10],
+        cap: [2000, 3000, 5000, 8000],
+        share: [0.8, 1, 1.3, 1.6],
+        w: [3, 6, 10, 20],
+        inW: [3, 10],
+        capY: [3000, 10000],
+      },
     );
     expect(feasibleBase).toBeGreaterThan(50);
     expect(broken).toEqual([]);
@@ -90,13 +168,31 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
         nights: p.nights ?? 3,
         devices: [{ deviceId: 'phone', spec: testPhone(p.share ?? 0) }],
         kit: [
-          { itemId: 'bank', count: 1, spec: testBank({ capacityMah: p.cap, chargeEfficiency: 0.95, outputEfficiency: 0.95 }) },
+          {
+            itemId: 'bank',
+            count: 1,
+            spec: testBank({ capacityMah: p.cap, chargeEfficiency: 0.95, outputEfficiency: 0.95 }),
+          },
           { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
-          { itemId: 'panel', count: 1, spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }) },
+          {
+            itemId: 'panel',
+            count: 1,
+            spec: testUsbPanel({ ratedW: p.w, outputPort: { connector: 'usb-c', captiveCable: true } }),
+          },
         ],
-        added: { itemId: 'lossy', count: 1, spec: testBank({ capacityMah: p.capLossy, chargeEfficiency: 0.6, outputEfficiency: 0.6 }) },
+        added: {
+          itemId: 'lossy',
+          count: 1,
+          spec: testBank({ capacityMah: p.capLossy, chargeEfficiency: 0.6, outputEfficiency: 0.6 }),
+        },
       }),
-      { nights: [6, 14, 30], cap: [3000, 6000, 10000], share: [0.8, 1.2, 1.6, 2], w: [4, 6, 8, 12], capLossy: [1000, 5000, 20000] },
+      {
+        nights: [6, 14, 30],
+        cap: [3000, 6000, 10000],
+        share: [0.8, 1.2, 1.6, 2],
+        w: [4, 6, 8, 12],
+        capLossy: [1000, 5000, 20000],
+      },
     );
     expect(feasibleBase).toBeGreaterThan(30);
     expect(broken).toEqual([]);
@@ -107,8 +203,14 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     const { feasibleBase, broken } = sweep(
       (p) => {
         const radio = testRadio({
-          chargeCurrentA: 2, ownBatteryWh: p.battery ?? 0,
-          useProfile: { basis: 'radio-hours', transmitMinutesPerDay: p.tx ?? 0, receiveHoursPerDay: 3, standbyHoursPerDay: 8 },
+          chargeCurrentA: 2,
+          ownBatteryWh: p.battery ?? 0,
+          useProfile: {
+            basis: 'radio-hours',
+            transmitMinutesPerDay: p.tx ?? 0,
+            receiveHoursPerDay: 3,
+            standbyHoursPerDay: 8,
+          },
         });
         return {
           nights: 4,
@@ -117,7 +219,11 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
             { itemId: 'bank', count: 4, spec: testBank({ capacityMah: 20000, outputPorts: [port('usb-a')] }) },
             { itemId: 'fast-boost', count: 1, spec: testBoostConverter({ maxOutputA: 2, efficiency: 0.8 }) },
           ],
-          added: { itemId: 'slow-boost', count: 1, spec: testBoostConverter({ maxOutputA: p.slowA, efficiency: 0.95 }) },
+          added: {
+            itemId: 'slow-boost',
+            count: 1,
+            spec: testBoostConverter({ maxOutputA: p.slowA, efficiency: 0.95 }),
+          },
         };
       },
       { battery: [8, 12, 20], tx: [10, 30, 60], slowA: [0.1, 0.3, 0.6], walkStart: [5, 7], walkEnd: [19, 21, 23] },

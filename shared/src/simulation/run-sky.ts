@@ -4,9 +4,24 @@ import type { DryReason } from './types.js';
 
 /** Ledger columns per day, in a flat `Float64Array` (day × column). */
 export const ledgerColumns = [
-  'availableHarvestWh', 'harvestWh', 'spilledWh', 'frozenSpilledWh', 'storeChargeLossWh', 'storeOutputLossWh',
-  'converterLossWh', 'deviceChargeLossWh', 'toppedUpWh', 'deliveredWh', 'unmetWh', 'storedStartWh', 'storedEndWh',
-  'storesStartWh', 'storesEndWh', 'devicesStartWh', 'devicesEndWh', 'frozenHours',
+  'availableHarvestWh',
+  'harvestWh',
+  'spilledWh',
+  'frozenSpilledWh',
+  'storeChargeLossWh',
+  'storeOutputLossWh',
+  'converterLossWh',
+  'deviceChargeLossWh',
+  'toppedUpWh',
+  'deliveredWh',
+  'unmetWh',
+  'storedStartWh',
+  'storedEndWh',
+  'storesStartWh',
+  'storesEndWh',
+  'devicesStartWh',
+  'devicesEndWh',
+  'frozenHours',
 ] as const;
 const C = Object.fromEntries(ledgerColumns.map((k, i) => [k, i])) as Record<(typeof ledgerColumns)[number], number>;
 const columnCount = ledgerColumns.length;
@@ -86,7 +101,13 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
  * topped up from stores (merit order, down to each store's reserve, within path and device charge power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
-export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, record: SkyRecord | null, stopAtDry: boolean): SkyRun {
+export function runSky(
+  k: CompiledKit,
+  skyIndex: number,
+  scratch: SkyScratch,
+  record: SkyRecord | null,
+  stopAtDry: boolean,
+): SkyRun {
   const { storeCount: S, deviceCount: D, panelCount: P } = k;
   const E = scratch.storeWh;
   const devE = scratch.deviceWh;
@@ -255,7 +276,8 @@ export function runSky(k: CompiledKit, skyIndex: number, scratch: SkyScratch, re
           want -= gain;
           timeShare = seg > 0 ? 0 : timeShare * (1 - f1);
           if (ledger) {
-            ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
+            ledger[row + C.converterLossWh] =
+              (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
             ledger[row + C.deviceChargeLossWh] =
               (ledger[row + C.deviceChargeLossWh] ?? 0) + draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
             ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
@@ -362,7 +384,14 @@ function fillAtLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p
  * linear and falling in the level, with breaks where a store starts taking harvest (level = its room) and where its
  * input limit binds; find the two breaks around `inputWh` and interpolate. No allocation: `breaks` is scratch.
  */
-function waterLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p: number, inputWh: number, breaks: Float64Array): number {
+function waterLevel(
+  k: CompiledKit,
+  E: Float64Array,
+  limitLeft: Float64Array,
+  p: number,
+  inputWh: number,
+  breaks: Float64Array,
+): number {
   const S = k.storeCount;
   let n = 0;
   breaks[n++] = 0;

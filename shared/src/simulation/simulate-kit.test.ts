@@ -44,8 +44,13 @@ describe('worked case: one phone, 2 nights, one bank, no panel (hand calculation
   it('the schedule charges the phone from the bank in camp through the lead', () => {
     const topUps = result.schedule.filter((s) => s.kind === 'top-up');
     expect(topUps.length).toBeGreaterThanOrEqual(2);
-    expect(topUps[0]).toMatchObject({ fromId: 'bank#1', toId: 'phone', leadItemIds: ['lead-a-c'], startLocalTime: '16:00' });
-    expect(topUps[0]?.energyWh).toBeCloseTo(7.5 * 16 / 24 + 7.5 * 8 / 24 - 0, 4); // refills the walk's 2.5 Wh and 16 camp hours
+    expect(topUps[0]).toMatchObject({
+      fromId: 'bank#1',
+      toId: 'phone',
+      leadItemIds: ['lead-a-c'],
+      startLocalTime: '16:00',
+    });
+    expect(topUps[0]?.energyWh).toBeCloseTo((7.5 * 16) / 24 + (7.5 * 8) / 24 - 0, 4); // refills the walk's 2.5 Wh and 16 camp hours
   });
 });
 
@@ -70,7 +75,12 @@ describe('verdicts', () => {
   });
   it('a 12 V radio without a boost converter: "missing converter"', () => {
     const solar = syntheticTripSolar({ nights: 4 });
-    const result = simulateKit({ solar, kit: [bankLine()], devices: [{ deviceId: 'radio', spec: testRadio() }], reserveShare: 0 });
+    const result = simulateKit({
+      solar,
+      kit: [bankLine()],
+      devices: [{ deviceId: 'radio', spec: testRadio() }],
+      reserveShare: 0,
+    });
     expect(result.verdict.status).toBe('runs-dry');
     if (result.verdict.status === 'runs-dry') expect(result.verdict.missing[0]?.kind).toBe('converter');
   });
@@ -79,7 +89,9 @@ describe('verdicts', () => {
     const kit: KitEntry[] = [bankLine(3), { itemId: 'boost', count: 1, spec: testBoostConverter() }];
     // Radio day: 13.8 V × (1.6 A × 5/60 h + 0.35 A × 1 h + 0.08 A × 8 h) = 15.50 Wh; 3 nights = 80 h = 51.7 Wh, of which
     // 14.8 Wh from its own battery; the rest / (0.85 × 0.85) ≈ 51 Wh from 3 banks of 31.45 Wh usable.
-    const radio = testRadio({ useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 5, receiveHoursPerDay: 1, standbyHoursPerDay: 8 } });
+    const radio = testRadio({
+      useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 5, receiveHoursPerDay: 1, standbyHoursPerDay: 8 },
+    });
     const result = simulateKit({ solar, kit, devices: [{ deviceId: 'radio', spec: radio }], reserveShare: 0.1 });
     expect(result.verdict.status).not.toBe('runs-dry');
     expect(result.devices[0]?.paths[0]?.converterItemId).toBe('boost');
@@ -89,7 +101,11 @@ describe('verdicts', () => {
   });
   it('keeps up when a panel covers the phone (expected sky) ', () => {
     const solar = syntheticTripSolar({ nights: 5, cloudyShare: 0.5 });
-    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
+    const kit: KitEntry[] = [
+      bankLine(),
+      phoneLead,
+      { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) },
+    ];
     const result = simulateKit({ solar, kit, devices: [phoneDevice(0.5)], reserveShare: 0.1 });
     expect(result.verdict.status).toBe('keeps-up');
     expect(result.verdict.text).toMatch(/^Keeps up: \d+ % to spare on the worst day\.$/);
@@ -98,7 +114,15 @@ describe('verdicts', () => {
   });
   it('a panel that reaches no store is unused and harvests nothing', () => {
     const solar = syntheticTripSolar({ nights: 2 });
-    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'micro-usb', captiveCable: false } }) }];
+    const kit: KitEntry[] = [
+      bankLine(),
+      phoneLead,
+      {
+        itemId: 'panel',
+        count: 1,
+        spec: testUsbPanel({ outputPort: { connector: 'micro-usb', captiveCable: false } }),
+      },
+    ];
     const result = simulateKit({ solar, kit, devices: [phoneDevice()], reserveShare: 0.1 });
     expect(result.unusedItemIds).toContain('panel');
     expect(result.skies[0]?.ledger.reduce((s, d) => s + d.harvestWh, 0)).toBe(0);
@@ -108,7 +132,12 @@ describe('verdicts', () => {
 describe('edge cases', () => {
   it('zero sun (polar night): no harvest, frozen hours reported, still simulated', () => {
     const solar = polarNight(3);
-    const result = simulateKit({ solar, kit: [bankLine(2), phoneLead], devices: [phoneDevice(0.5)], reserveShare: 0.1 });
+    const result = simulateKit({
+      solar,
+      kit: [bankLine(2), phoneLead],
+      devices: [phoneDevice(0.5)],
+      reserveShare: 0.1,
+    });
     const ledger = result.skies[0]?.ledger ?? [];
     expect(ledger.every((d) => d.availableHarvestWh === 0)).toBe(true);
     expect(ledger[0]?.frozenHours).toBeCloseTo(24, 9);
@@ -116,7 +145,11 @@ describe('edge cases', () => {
   });
   it('freezing days refuse harvest into lithium stores and report it', () => {
     const solar = syntheticTripSolar({ nights: 2, lowC: -15, highC: -2 });
-    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
+    const kit: KitEntry[] = [
+      bankLine(),
+      phoneLead,
+      { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) },
+    ];
     const ledger = simulateKit({ solar, kit, devices: [phoneDevice()], reserveShare: 0 }).skies[0]?.ledger ?? [];
     expect(ledger[0]?.availableHarvestWh).toBeGreaterThan(0);
     expect(ledger[0]?.harvestWh).toBe(0);
@@ -124,8 +157,17 @@ describe('edge cases', () => {
   });
   it('a 60-night trip runs with 61 days in each sky', () => {
     const solar = syntheticTripSolar({ nights: 60, cloudyRunDays: 5 });
-    const kit: KitEntry[] = [bankLine(2), phoneLead, { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) }];
-    const result = simulateKit({ solar, kit, devices: [phoneDevice(0.6), { deviceId: 'radio', spec: testRadio() }], reserveShare: 0.1 });
+    const kit: KitEntry[] = [
+      bankLine(2),
+      phoneLead,
+      { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) },
+    ];
+    const result = simulateKit({
+      solar,
+      kit,
+      devices: [phoneDevice(0.6), { deviceId: 'radio', spec: testRadio() }],
+      reserveShare: 0.1,
+    });
     expect(result.skies).toHaveLength(4);
     expect(result.skies[0]?.ledger).toHaveLength(61);
     expect(result.verdict.status).toBe('runs-dry'); // no boost converter for the radio
@@ -138,13 +180,22 @@ describe('with the sun module’s trip series', () => {
     const { tripSolarInputSchema } = await import('../schemas/trip-solar.js');
     const solar = computeTripSolar(
       tripSolarInputSchema.parse({
-        latitudeDeg: 46.5, longitudeDeg: 8, timeZone: 'Europe/Zurich', startDate: '2026-07-01', nights: 14,
+        latitudeDeg: 46.5,
+        longitudeDeg: 8,
+        timeZone: 'Europe/Zurich',
+        startDate: '2026-07-01',
+        nights: 14,
         temperatures: { lowC: 5, highC: 18 },
       }),
     );
     const kit: KitEntry[] = [
-      bankLine(2), phoneLead,
-      { itemId: 'panel', count: 1, spec: testUsbPanel({ ratedW: 10, outputPort: { connector: 'usb-c', captiveCable: true } }) },
+      bankLine(2),
+      phoneLead,
+      {
+        itemId: 'panel',
+        count: 1,
+        spec: testUsbPanel({ ratedW: 10, outputPort: { connector: 'usb-c', captiveCable: true } }),
+      },
     ];
     const result = simulateKit({ solar, kit, devices: [phoneDevice(0.6)], reserveShare: 0.1 });
     expect(result.skies).toHaveLength(4);
@@ -153,7 +204,13 @@ describe('with the sun module’s trip series', () => {
     expect(harvestWh).toBeGreaterThan(0);
     for (const sky of result.skies) {
       for (const d of sky.ledger) {
-        const flows = d.harvestWh - d.storeChargeLossWh - d.storeOutputLossWh - d.converterLossWh - d.deviceChargeLossWh - d.deliveredWh;
+        const flows =
+          d.harvestWh -
+          d.storeChargeLossWh -
+          d.storeOutputLossWh -
+          d.converterLossWh -
+          d.deviceChargeLossWh -
+          d.deliveredWh;
         expect(Math.abs(d.storedEndWh - d.storedStartWh - flows)).toBeLessThan(1e-9);
       }
     }
@@ -165,8 +222,15 @@ describe('with the sun module’s trip series', () => {
 describe('unused items', () => {
   it('a bank no device can draw from, and a lead no hop needs, are reported unused', () => {
     const solar = syntheticTripSolar({ nights: 3 });
-    const lonely = testBank({ outputPorts: [{ connector: 'micro-usb', captiveCable: false, volts: 5, maxA: 1, usbPdVolts: [] }] });
-    const kit: KitEntry[] = [bankLine(), phoneLead, { itemId: 'lonely', count: 1, spec: lonely }, { itemId: 'spare-lead', count: 1, spec: testLead('radio-dc', 'ring-terminal') }];
+    const lonely = testBank({
+      outputPorts: [{ connector: 'micro-usb', captiveCable: false, volts: 5, maxA: 1, usbPdVolts: [] }],
+    });
+    const kit: KitEntry[] = [
+      bankLine(),
+      phoneLead,
+      { itemId: 'lonely', count: 1, spec: lonely },
+      { itemId: 'spare-lead', count: 1, spec: testLead('radio-dc', 'ring-terminal') },
+    ];
     const result = simulateKit({ solar, kit, devices: [phoneDevice(0.8)], reserveShare: 0.1 });
     expect(result.unusedItemIds.sort()).toEqual(['lonely', 'spare-lead']);
   });

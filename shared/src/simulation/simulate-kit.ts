@@ -103,9 +103,16 @@ function sessionLogger(k: CompiledKit, input: KitSimulationInput, schedule: Char
     const path = kind === 'top-up' ? k.devices[to]?.paths[from] : null;
     const lead = kind === 'harvest' ? k.panelReachLead[from * k.storeCount + to] : null;
     const session: ChargeSession = {
-      kind, dayIndex: step.dayIndex, fromId, toId, converterItemId: path?.converterItemId ?? null,
-      leadItemIds: path ? path.leadItemIds : lead ? [lead] : [], startUtcMs: step.startUtcMs, endUtcMs,
-      startLocalTime: step.localTime, energyWh,
+      kind,
+      dayIndex: step.dayIndex,
+      fromId,
+      toId,
+      converterItemId: path?.converterItemId ?? null,
+      leadItemIds: path ? path.leadItemIds : lead ? [lead] : [],
+      startUtcMs: step.startUtcMs,
+      endUtcMs,
+      startLocalTime: step.localTime,
+      energyWh,
     };
     open.set(key, session);
     schedule.push(session);

@@ -27,6 +27,12 @@ describe('lithium charging temperature (cell makers: 0–45 °C charge range, co
     expect(canChargeLithium(0)).toBe(true);
   });
   it('counts frozen hours, including part steps', () => {
-    expect(frozenHours([{ airTempC: -3, durationH: 1 }, { airTempC: -1, durationH: 0.5 }, { airTempC: 2, durationH: 1 }])).toBeCloseTo(1.5, 12);
+    expect(
+      frozenHours([
+        { airTempC: -3, durationH: 1 },
+        { airTempC: -1, durationH: 0.5 },
+        { airTempC: 2, durationH: 1 },
+      ]),
+    ).toBeCloseTo(1.5, 12);
   });
 });

@@ -18,7 +18,9 @@ export function bankRatedWh(bank: Pick<BankSpec, 'capacityMah' | 'cellVolts' | '
  * the trade's usual finding (common practice).
  * @example bankUsableWh({ capacityMah: 10000, cellVolts: 3.7, outputEfficiency: 0.85, … }) // 31.45
  */
-export function bankUsableWh(bank: Pick<BankSpec, 'capacityMah' | 'cellVolts' | 'capacityWh' | 'outputEfficiency'>): number {
+export function bankUsableWh(
+  bank: Pick<BankSpec, 'capacityMah' | 'cellVolts' | 'capacityWh' | 'outputEfficiency'>,
+): number {
   return bankRatedWh(bank) * bank.outputEfficiency;
 }
 

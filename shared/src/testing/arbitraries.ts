@@ -16,12 +16,17 @@ const connector = fc.oneof(
 );
 const port = fc.record({ connector, captiveCable: fc.boolean() });
 /** A number spread evenly over [min, max] (fc.double leans hard towards the ends and tiny values). */
-export const share = (min: number, max: number) => fc.integer({ min: 0, max: 10_000 }).map((i) => min + ((max - min) * i) / 10_000);
+export const share = (min: number, max: number) =>
+  fc.integer({ min: 0, max: 10_000 }).map((i) => min + ((max - min) * i) / 10_000);
 
 export const panelArb = fc
   .record({
-    ratedW: share(2, 40), portMaxA: share(0.5, 3), dropoutIrradianceWm2: share(0, 250), tempCoeffPctPerC: share(-0.5, -0.2),
-    outputPort: port, massG: fc.integer({ min: 50, max: 1500 }),
+    ratedW: share(2, 40),
+    portMaxA: share(0.5, 3),
+    dropoutIrradianceWm2: share(0, 250),
+    tempCoeffPctPerC: share(-0.5, -0.2),
+    outputPort: port,
+    massG: fc.integer({ min: 50, max: 1500 }),
   })
   .map((p) => usbPanelSpecSchema.parse({ kind: 'panel', panelType: 'usb', portVolts: 5, ...p }));
 
@@ -35,17 +40,27 @@ const outputPortArb = fc.record({
 
 export const bankArb = fc
   .record({
-    capacityMah: fc.integer({ min: 1000, max: 30000 }), inputMaxW: share(3, 30), inputPort: port,
-    outputPorts: fc.array(outputPortArb, { minLength: 1, maxLength: 2 }), outputEfficiency: share(0.6, 1),
-    chargeEfficiency: share(0.6, 1), massG: fc.integer({ min: 50, max: 700 }),
+    capacityMah: fc.integer({ min: 1000, max: 30000 }),
+    inputMaxW: share(3, 30),
+    inputPort: port,
+    outputPorts: fc.array(outputPortArb, { minLength: 1, maxLength: 2 }),
+    outputEfficiency: share(0.6, 1),
+    chargeEfficiency: share(0.6, 1),
+    massG: fc.integer({ min: 50, max: 700 }),
   })
   .map((b) => bankSpecSchema.parse({ kind: 'bank', ...b }));
 
 export const converterArb = fc
   .record({
     inputVolts: fc.constantFrom(5, 9, 12),
-    outputVolts: share(12.5, 13.8), maxOutputA: share(0.2, 2), efficiency: share(0.7, 0.95), inputPort: port,
-    outputPort: fc.record({ connector: fc.constantFrom<Connector>('barrel-5.5x2.1', 'radio-dc'), captiveCable: fc.boolean() }),
+    outputVolts: share(12.5, 13.8),
+    maxOutputA: share(0.2, 2),
+    efficiency: share(0.7, 0.95),
+    inputPort: port,
+    outputPort: fc.record({
+      connector: fc.constantFrom<Connector>('barrel-5.5x2.1', 'radio-dc'),
+      captiveCable: fc.boolean(),
+    }),
     massG: fc.integer({ min: 20, max: 150 }),
   })
   .map((c) => converterSpecSchema.parse({ kind: 'converter', converterType: 'boost', ...c }));
@@ -54,7 +69,8 @@ export const leadArb = fc
   .record({
     fromConnector: fc.constantFrom<Connector>('usb-a', 'usb-c', 'usb-c', 'barrel-5.5x2.1'),
     toConnector: fc.constantFrom<Connector>(...usbConnectors, 'usb-c', 'barrel-5.5x2.1', 'radio-dc'),
-    lengthM: share(0.1, 2), massG: fc.integer({ min: 5, max: 80 }),
+    lengthM: share(0.1, 2),
+    massG: fc.integer({ min: 5, max: 80 }),
   })
   .map((l) => leadSpecSchema.parse({ kind: 'lead', ...l }));
 
@@ -68,8 +84,12 @@ export const kitItemArb: fc.Arbitrary<KitItemSpec> = fc.oneof(
 const usbDeviceArb = fc
   .record({
     deviceKind: fc.constantFrom('phone', 'messenger', 'headlamp', 'camera') as fc.Arbitrary<DeviceSpec['deviceKind']>,
-    ownBatteryWh: share(1, 25), chargesVia: fc.constantFrom('usb-5v', 'usb-pd') as fc.Arbitrary<DeviceSpec['chargesVia']>,
-    chargePowerW: share(2, 20), chargeEfficiency: share(0.7, 0.95), chargePort: port, share: share(0, 1.5),
+    ownBatteryWh: share(1, 25),
+    chargesVia: fc.constantFrom('usb-5v', 'usb-pd') as fc.Arbitrary<DeviceSpec['chargesVia']>,
+    chargePowerW: share(2, 20),
+    chargeEfficiency: share(0.7, 0.95),
+    chargePort: port,
+    share: share(0, 1.5),
   })
   .map(({ share: batterySharePerDay, ...d }) =>
     deviceSpecSchema.parse({ kind: 'device', ...d, useProfile: { basis: 'battery-share', batterySharePerDay } }),
@@ -77,19 +97,37 @@ const usbDeviceArb = fc
 
 const radioArb = fc
   .record({
-    ownBatteryWh: share(5, 20), chargeCurrentA: share(0.2, 1.5), chargeEfficiency: share(0.7, 0.95),
-    chargePort: fc.record({ connector: fc.constantFrom<Connector>('barrel-5.5x2.1', 'radio-dc'), captiveCable: fc.boolean() }),
-    transmitCurrentA: share(0.8, 2), receiveCurrentA: share(0.1, 0.5), standbyCurrentA: share(0.01, 0.1),
-    tx: share(0, 60), rx: share(0, 4), sb: share(0, 12),
+    ownBatteryWh: share(5, 20),
+    chargeCurrentA: share(0.2, 1.5),
+    chargeEfficiency: share(0.7, 0.95),
+    chargePort: fc.record({
+      connector: fc.constantFrom<Connector>('barrel-5.5x2.1', 'radio-dc'),
+      captiveCable: fc.boolean(),
+    }),
+    transmitCurrentA: share(0.8, 2),
+    receiveCurrentA: share(0.1, 0.5),
+    standbyCurrentA: share(0.01, 0.1),
+    tx: share(0, 60),
+    rx: share(0, 4),
+    sb: share(0, 12),
   })
   .map(({ tx, rx, sb, ...d }) =>
     deviceSpecSchema.parse({
-      kind: 'device', deviceKind: 'radio', chargesVia: '12v-dc', supplyVoltsNominal: 13.8, supplyVoltsMin: 11, supplyVoltsMax: 16,
-      ...d, useProfile: { basis: 'radio-hours', transmitMinutesPerDay: tx, receiveHoursPerDay: rx, standbyHoursPerDay: sb },
+      kind: 'device',
+      deviceKind: 'radio',
+      chargesVia: '12v-dc',
+      supplyVoltsNominal: 13.8,
+      supplyVoltsMin: 11,
+      supplyVoltsMax: 16,
+      ...d,
+      useProfile: { basis: 'radio-hours', transmitMinutesPerDay: tx, receiveHoursPerDay: rx, standbyHoursPerDay: sb },
     }),
   );
 
-export const deviceArb: fc.Arbitrary<DeviceSpec> = fc.oneof({ weight: 3, arbitrary: usbDeviceArb }, { weight: 1, arbitrary: radioArb });
+export const deviceArb: fc.Arbitrary<DeviceSpec> = fc.oneof(
+  { weight: 3, arbitrary: usbDeviceArb },
+  { weight: 1, arbitrary: radioArb },
+);
 
 /** Leads most hikers carry; half the generated kits hold them, so that charging paths exist often enough to matter. */
 const commonLeads = [
@@ -101,7 +139,13 @@ const commonLeads = [
 /** A kit from a list of item specs (each its own line, count 1–2), half the time with the common leads. */
 export const kitArb = (maxLines = 6): fc.Arbitrary<KitEntry[]> =>
   fc
-    .tuple(fc.array(fc.record({ spec: kitItemArb, count: fc.integer({ min: 1, max: 2 }) }), { maxLength: maxLines, size: 'max' }), fc.boolean())
+    .tuple(
+      fc.array(fc.record({ spec: kitItemArb, count: fc.integer({ min: 1, max: 2 }) }), {
+        maxLength: maxLines,
+        size: 'max',
+      }),
+      fc.boolean(),
+    )
     .map(([lines, withCommonLeads]) => [
       ...lines.map((l, i) => ({ itemId: `item-${i}`, count: l.count, spec: l.spec })),
       ...(withCommonLeads ? commonLeads.map((spec, i) => ({ itemId: `common-lead-${i}`, count: 1, spec })) : []),
@@ -114,14 +158,26 @@ export const devicesArb: fc.Arbitrary<TripDevice[]> = fc
 /** A synthetic trip: nights, peak irradiance, temperatures (some freezing), cloudy share, step length. */
 export const tripArb = fc
   .record({
-    nights: fc.integer({ min: 1, max: 8 }), peakWm2: share(0, 1100), lowC: share(-10, 15), spanC: share(0, 20),
-    cloudyShare: share(0, 0.6), expectedShare: share(0.3, 1), cloudyRunDays: fc.integer({ min: 1, max: 4 }),
-    walkStartHour: fc.integer({ min: 5, max: 10 }), walkHours: fc.integer({ min: 4, max: 11 }),
+    nights: fc.integer({ min: 1, max: 8 }),
+    peakWm2: share(0, 1100),
+    lowC: share(-10, 15),
+    spanC: share(0, 20),
+    cloudyShare: share(0, 0.6),
+    expectedShare: share(0.3, 1),
+    cloudyRunDays: fc.integer({ min: 1, max: 4 }),
+    walkStartHour: fc.integer({ min: 5, max: 10 }),
+    walkHours: fc.integer({ min: 4, max: 11 }),
   })
   .map((t) =>
     syntheticTripSolar({
-      nights: t.nights, peakWm2: t.peakWm2, lowC: t.lowC, highC: t.lowC + t.spanC, cloudyShare: t.cloudyShare,
-      expectedShare: t.expectedShare, cloudyRunDays: t.cloudyRunDays, walkStartHour: t.walkStartHour,
+      nights: t.nights,
+      peakWm2: t.peakWm2,
+      lowC: t.lowC,
+      highC: t.lowC + t.spanC,
+      cloudyShare: t.cloudyShare,
+      expectedShare: t.expectedShare,
+      cloudyRunDays: t.cloudyRunDays,
+      walkStartHour: t.walkStartHour,
       walkEndHour: t.walkStartHour + t.walkHours,
     }),
   );

@@ -6,7 +6,8 @@ import { type TestApp, insertAccount, signInToken, startTestApp } from './suppor
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
-const header = 'kind,name,count_owned,mass_g,notes,rated_w,port_volts,port_max_a,output_connector,from_connector,to_connector,length_m';
+const header =
+  'kind,name,count_owned,mass_g,notes,rated_w,port_volts,port_max_a,output_connector,from_connector,to_connector,length_m';
 const panelLine = (name: string) => `panel,${name},1,280,,10,5,2,usb-a,,,`;
 const leadLine = (name: string, lengthM = '0.3') => `lead,${name},2,15,,,,,,usb-a,usb-c,${lengthM}`;
 const goodCsv = [header, panelLine('Imported panel'), leadLine('Imported lead'), ''].join('\n');
@@ -18,38 +19,72 @@ const itemsOfEveryKind: LockerItemInputRaw[] = [
     notes: 'Line one\nline two, with "quotes"; and a semicolon',
     countOwned: 2,
     spec: {
-      kind: 'panel', panelType: 'usb', ratedW: 12.5, portVolts: 5, portMaxA: 2.4, dropoutIrradianceWm2: 80, tempCoeffPctPerC: -0.35,
-      outputPort: { connector: 'usb-c', captiveCable: true }, massG: 310.5,
+      kind: 'panel',
+      panelType: 'usb',
+      ratedW: 12.5,
+      portVolts: 5,
+      portMaxA: 2.4,
+      dropoutIrradianceWm2: 80,
+      tempCoeffPctPerC: -0.35,
+      outputPort: { connector: 'usb-c', captiveCable: true },
+      massG: 310.5,
     },
   },
   {
     name: 'Wh bank',
     countOwned: 1,
     spec: {
-      kind: 'bank', capacityWh: 37, inputMaxW: 20, inputPort: { connector: 'usb-c', captiveCable: false },
+      kind: 'bank',
+      capacityWh: 37,
+      inputMaxW: 20,
+      inputPort: { connector: 'usb-c', captiveCable: false },
       outputPorts: [
         { connector: 'usb-a', captiveCable: false, volts: 5, maxA: 2.4 },
         { connector: 'usb-c', captiveCable: true, volts: 5, maxA: 3, usbPdVolts: [9, 12, 15] },
       ],
-      outputEfficiency: 0.82, chargeEfficiency: 0.88, massG: 210,
+      outputEfficiency: 0.82,
+      chargeEfficiency: 0.88,
+      massG: 210,
     },
   },
   {
     name: '12 V to USB',
     countOwned: 1,
     spec: {
-      kind: 'converter', converterType: '12v-to-usb', inputVolts: 12, outputVolts: 5, maxOutputA: 2.1, efficiency: 0.9,
-      inputPort: { connector: '12v-accessory', captiveCable: true }, outputPort: { connector: 'usb-a', captiveCable: false }, massG: 28,
+      kind: 'converter',
+      converterType: '12v-to-usb',
+      inputVolts: 12,
+      outputVolts: 5,
+      maxOutputA: 2.1,
+      efficiency: 0.9,
+      inputPort: { connector: '12v-accessory', captiveCable: true },
+      outputPort: { connector: 'usb-a', captiveCable: false },
+      massG: 28,
     },
   },
-  { name: 'Barrel to radio', countOwned: 1, spec: { kind: 'lead', fromConnector: 'barrel-5.5x2.1', toConnector: 'radio-dc', lengthM: 1.2, massG: 40 } },
+  {
+    name: 'Barrel to radio',
+    countOwned: 1,
+    spec: { kind: 'lead', fromConnector: 'barrel-5.5x2.1', toConnector: 'radio-dc', lengthM: 1.2, massG: 40 },
+  },
   {
     name: 'Radio',
     countOwned: 1,
     spec: {
-      kind: 'device', deviceKind: 'radio', ownBatteryWh: 14.4, chargesVia: '12v-dc', chargeCurrentA: 1.2,
-      chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false }, supplyVoltsNominal: 13.8, supplyVoltsMin: 11, supplyVoltsMax: 16,
-      transmitCurrentA: 1.5, receiveCurrentA: 0.15, standbyCurrentA: 0.05, canRunLive: true, massG: 330,
+      kind: 'device',
+      deviceKind: 'radio',
+      ownBatteryWh: 14.4,
+      chargesVia: '12v-dc',
+      chargeCurrentA: 1.2,
+      chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      supplyVoltsNominal: 13.8,
+      supplyVoltsMin: 11,
+      supplyVoltsMax: 16,
+      transmitCurrentA: 1.5,
+      receiveCurrentA: 0.15,
+      standbyCurrentA: 0.05,
+      canRunLive: true,
+      massG: 330,
       useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 15, receiveHoursPerDay: 2, standbyHoursPerDay: 8 },
     },
   },
@@ -57,16 +92,28 @@ const itemsOfEveryKind: LockerItemInputRaw[] = [
     name: 'Phone',
     countOwned: 1,
     spec: {
-      kind: 'device', deviceKind: 'phone', ownBatteryWh: 16, chargesVia: 'usb-pd', chargePowerW: 20, usbPdVolts: 9,
-      chargePort: { connector: 'usb-c', captiveCable: false }, useProfile: { basis: 'battery-share', batterySharePerDay: 0.55 },
+      kind: 'device',
+      deviceKind: 'phone',
+      ownBatteryWh: 16,
+      chargesVia: 'usb-pd',
+      chargePowerW: 20,
+      usbPdVolts: 9,
+      chargePort: { connector: 'usb-c', captiveCable: false },
+      useProfile: { basis: 'battery-share', batterySharePerDay: 0.55 },
     },
   },
   {
     name: 'Headlamp',
     countOwned: 1,
     spec: {
-      kind: 'device', deviceKind: 'headlamp', ownBatteryWh: 5.5, chargesVia: 'usb-5v', chargePowerW: 5,
-      chargePort: { connector: 'micro-usb', captiveCable: false }, useProfile: { basis: 'energy', energyWhPerDay: 1.2 }, massG: 75,
+      kind: 'device',
+      deviceKind: 'headlamp',
+      ownBatteryWh: 5.5,
+      chargesVia: 'usb-5v',
+      chargePowerW: 5,
+      chargePort: { connector: 'micro-usb', captiveCable: false },
+      useProfile: { basis: 'energy', energyWhPerDay: 1.2 },
+      massG: 75,
     },
   },
 ];
@@ -96,9 +143,13 @@ describe('locker CSV import and export', () => {
       .http()
       .post(`/api/locker/import${query}`)
       .set(bearer(as))
-      .attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), { filename: 'locker.csv', contentType });
+      .attach('file', Buffer.isBuffer(content) ? content : Buffer.from(content, 'utf8'), {
+        filename: 'locker.csv',
+        contentType,
+      });
 
-  const rowsOf = (owner = ownerId): Promise<LockerItemRow[]> => t.db.select().from(lockerItems).where(eq(lockerItems.ownerId, owner));
+  const rowsOf = (owner = ownerId): Promise<LockerItemRow[]> =>
+    t.db.select().from(lockerItems).where(eq(lockerItems.ownerId, owner));
 
   /** An item already in the locker, which a rejected import must leave alone. */
   const seedExisting = async () => {
@@ -145,7 +196,11 @@ describe('locker CSV import and export', () => {
     });
 
     it('reads a semicolon-separated file with decimal commas', async () => {
-      const text = ['kind;name;count_owned;mass_g;from_connector;to_connector;length_m', 'lead;Semicolon lead;1;12,5;usb-c;usb-c;0,25', ''].join('\r\n');
+      const text = [
+        'kind;name;count_owned;mass_g;from_connector;to_connector;length_m',
+        'lead;Semicolon lead;1;12,5;usb-c;usb-c;0,25',
+        '',
+      ].join('\r\n');
       const response = await upload('?commit=true', text).expect(200);
       expect(response.body.report).toEqual([]);
       const [row] = await rowsOf();
@@ -154,7 +209,10 @@ describe('locker CSV import and export', () => {
     });
 
     it('reads a file with a UTF-8 byte-order mark', async () => {
-      const withBom = Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), Buffer.from(goodCsv.replace('Imported panel', 'Panneau été'), 'utf8')]);
+      const withBom = Buffer.concat([
+        Buffer.from([0xef, 0xbb, 0xbf]),
+        Buffer.from(goodCsv.replace('Imported panel', 'Panneau été'), 'utf8'),
+      ]);
       await upload('?commit=true', withBom).expect(200);
       expect((await rowsOf()).map((r) => r.name).sort()).toEqual(['Imported lead', 'Panneau été']);
     });
@@ -170,12 +228,21 @@ describe('locker CSV import and export', () => {
   });
 
   describe('a file that is refused writes nothing', () => {
-    const expectRejected = async (query: string, content: string | Buffer, check: (body: Record<string, unknown>) => void) => {
+    const expectRejected = async (
+      query: string,
+      content: string | Buffer,
+      check: (body: Record<string, unknown>) => void,
+    ) => {
       const before = await seedExisting();
       const preview = await upload(query.replace('commit=true', 'commit=false'), content).expect(200);
       expect(preview.body.ok).toBe(false);
       const response = await upload(query, content).expect(400);
-      expect(response.body).toMatchObject({ statusCode: 400, ok: false, committed: false, mode: query.includes('replace') ? 'replace' : 'add' });
+      expect(response.body).toMatchObject({
+        statusCode: 400,
+        ok: false,
+        committed: false,
+        mode: query.includes('replace') ? 'replace' : 'add',
+      });
       expect(response.body.message).toMatch(/^Nothing was imported/);
       expect(response.body.errors.length).toBe(response.body.report.length);
       check(response.body);
@@ -190,7 +257,10 @@ describe('locker CSV import and export', () => {
     });
 
     it('a bad number on row 37', async () => {
-      const lines = [header, ...Array.from({ length: 50 }, (_, i) => leadLine(`Lead ${i + 2}`, i + 2 === 37 ? '0.3m' : '0.3'))];
+      const lines = [
+        header,
+        ...Array.from({ length: 50 }, (_, i) => leadLine(`Lead ${i + 2}`, i + 2 === 37 ? '0.3m' : '0.3')),
+      ];
       await expectRejected('?mode=add&commit=true', lines.join('\n'), (body) => {
         expect(body.rowCount).toBe(50);
         expect(body.report).toEqual([{ row: 37, column: 'length_m', message: 'Not a number: "0.3m"' }]);
@@ -199,7 +269,9 @@ describe('locker CSV import and export', () => {
 
     it('an unknown column', async () => {
       await expectRejected('?commit=true', `${header},colour\n${leadLine('A')},red\n`, (body) => {
-        expect(body.report).toEqual([{ row: 1, column: 'colour', message: expect.stringContaining('Unknown column "colour"') }]);
+        expect(body.report).toEqual([
+          { row: 1, column: 'colour', message: expect.stringContaining('Unknown column "colour"') },
+        ]);
       });
     });
 
@@ -215,7 +287,9 @@ describe('locker CSV import and export', () => {
       expect(Buffer.byteLength(text)).toBeLessThan(1_048_576);
       await expectRejected('?commit=true', text, (body) => {
         expect(body.rowCount).toBe(10_000);
-        expect(body.report).toEqual([{ row: 2002, column: '', message: 'The file has 10,000 items; at most 2,000 can be imported at once' }]);
+        expect(body.report).toEqual([
+          { row: 2002, column: '', message: 'The file has 10,000 items; at most 2,000 can be imported at once' },
+        ]);
       });
     });
 
@@ -249,14 +323,24 @@ describe('locker CSV import and export', () => {
       const before = await seedExisting();
       const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d]);
       const declared = await upload('?commit=true', png, token, 'image/png').expect(415);
-      expect(declared.body).toMatchObject({ statusCode: 415, message: expect.stringContaining('not a CSV or text file') });
+      expect(declared.body).toMatchObject({
+        statusCode: 415,
+        message: expect.stringContaining('not a CSV or text file'),
+      });
       await upload('?commit=true', png, token, 'text/csv').expect(415);
       expect(await rowsOf()).toEqual(before);
     });
 
     it('no file, or the file in another field: 400 naming the field', async () => {
-      const none = await t.http().post('/api/locker/import?commit=true').set(bearer(token)).field('mode', 'add').expect(400);
-      expect(none.body.errors).toEqual([{ path: 'file', message: 'Attach the CSV file in the multipart field "file"' }]);
+      const none = await t
+        .http()
+        .post('/api/locker/import?commit=true')
+        .set(bearer(token))
+        .field('mode', 'add')
+        .expect(400);
+      expect(none.body.errors).toEqual([
+        { path: 'file', message: 'Attach the CSV file in the multipart field "file"' },
+      ]);
       const wrong = await t
         .http()
         .post('/api/locker/import')
@@ -285,7 +369,9 @@ describe('locker CSV import and export', () => {
       }
       const response = await t.http().get('/api/locker/export').set(bearer(token)).buffer(true).expect(200);
       expect(response.headers['content-type']).toBe('text/csv; charset=utf-8');
-      expect(response.headers['content-disposition']).toBe(`attachment; filename="gramwatt-locker-${t.clock.now().toISOString().slice(0, 10)}.csv"`);
+      expect(response.headers['content-disposition']).toBe(
+        `attachment; filename="gramwatt-locker-${t.clock.now().toISOString().slice(0, 10)}.csv"`,
+      );
       const text = response.text;
       expect(text.split('\r\n').filter((l) => l.startsWith('device,'))).toHaveLength(3);
       // A name a spreadsheet would run as a formula is guarded on the way out.
@@ -297,7 +383,14 @@ describe('locker CSV import and export', () => {
       expect(imported.body).toMatchObject({ ok: true, committed: true, rowCount: itemsOfEveryKind.length, report: [] });
 
       const list = await t.http().get('/api/locker/items?sort=kind').set(bearer(otherToken)).expect(200);
-      const strip = (i: LockerItem) => ({ kind: i.kind, name: i.name, notes: i.notes, countOwned: i.countOwned, massG: i.massG, spec: i.spec });
+      const strip = (i: LockerItem) => ({
+        kind: i.kind,
+        name: i.name,
+        notes: i.notes,
+        countOwned: i.countOwned,
+        massG: i.massG,
+        spec: i.spec,
+      });
       const byName = (a: { name: string }, b: { name: string }) => a.name.localeCompare(b.name);
       expect(list.body.items.map(strip).sort(byName)).toEqual(created.map(strip).sort(byName));
     });

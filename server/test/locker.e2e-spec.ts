@@ -12,8 +12,13 @@ const samples: Record<LockerItem['kind'], LockerItemInputRaw> = {
     name: 'Test fold-out 10 W',
     countOwned: 1,
     spec: {
-      kind: 'panel', panelType: 'usb', ratedW: 10, portVolts: 5, portMaxA: 2,
-      outputPort: { connector: 'usb-a', captiveCable: false }, massG: 280.4,
+      kind: 'panel',
+      panelType: 'usb',
+      ratedW: 10,
+      portVolts: 5,
+      portMaxA: 2,
+      outputPort: { connector: 'usb-a', captiveCable: false },
+      massG: 280.4,
     },
   },
   bank: {
@@ -21,16 +26,26 @@ const samples: Record<LockerItem['kind'], LockerItemInputRaw> = {
     notes: 'Charges from the panel',
     countOwned: 2,
     spec: {
-      kind: 'bank', capacityMah: 10000, inputMaxW: 18, inputPort: { connector: 'usb-c', captiveCable: false },
-      outputPorts: [{ connector: 'usb-c', captiveCable: false, volts: 5, maxA: 3, usbPdVolts: [9, 12] }], massG: 180,
+      kind: 'bank',
+      capacityMah: 10000,
+      inputMaxW: 18,
+      inputPort: { connector: 'usb-c', captiveCable: false },
+      outputPorts: [{ connector: 'usb-c', captiveCable: false, volts: 5, maxA: 3, usbPdVolts: [9, 12] }],
+      massG: 180,
     },
   },
   converter: {
     name: 'Test 9 V → 12 V boost',
     countOwned: 1,
     spec: {
-      kind: 'converter', converterType: 'boost', inputVolts: 9, outputVolts: 12, maxOutputA: 1.5,
-      inputPort: { connector: 'usb-c', captiveCable: true }, outputPort: { connector: 'barrel-5.5x2.1', captiveCable: false }, massG: 35,
+      kind: 'converter',
+      converterType: 'boost',
+      inputVolts: 9,
+      outputVolts: 12,
+      maxOutputA: 1.5,
+      inputPort: { connector: 'usb-c', captiveCable: true },
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      massG: 35,
     },
   },
   lead: {
@@ -42,9 +57,16 @@ const samples: Record<LockerItem['kind'], LockerItemInputRaw> = {
     name: 'Test handheld',
     countOwned: 1,
     spec: {
-      kind: 'device', deviceKind: 'radio', ownBatteryWh: 14, chargesVia: '12v-dc', chargeCurrentA: 1,
-      chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false }, supplyVoltsNominal: 13.8,
-      transmitCurrentA: 1.5, receiveCurrentA: 0.15, standbyCurrentA: 0.05,
+      kind: 'device',
+      deviceKind: 'radio',
+      ownBatteryWh: 14,
+      chargesVia: '12v-dc',
+      chargeCurrentA: 1,
+      chargePort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      supplyVoltsNominal: 13.8,
+      transmitCurrentA: 1.5,
+      receiveCurrentA: 0.15,
+      standbyCurrentA: 0.05,
       useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 20, receiveHoursPerDay: 2, standbyHoursPerDay: 6 },
     },
   },
@@ -81,7 +103,13 @@ describe('locker items', () => {
   describe.each(Object.entries(samples))('CRUD of a %s', (kind, sample) => {
     it('creates, reads, lists, updates and deletes it', async () => {
       const created = await create(sample);
-      expect(created).toMatchObject({ kind, name: sample.name, notes: sample.notes ?? '', countOwned: sample.countOwned, files: [] });
+      expect(created).toMatchObject({
+        kind,
+        name: sample.name,
+        notes: sample.notes ?? '',
+        countOwned: sample.countOwned,
+        files: [],
+      });
       expect(created.spec.kind).toBe(kind);
       expect(created.massG).toBe(Math.round(sample.spec.massG ?? 0));
       expect(created.createdAt).toBe(t.clock.now().toISOString());
@@ -99,7 +127,13 @@ describe('locker items', () => {
         .set(bearer(token))
         .send({ ...sample, name: `${sample.name} (2)`, countOwned: 4, notes: 'changed' })
         .expect(200);
-      expect(changed.body.item).toMatchObject({ id: created.id, name: `${sample.name} (2)`, countOwned: 4, notes: 'changed', createdAt: created.createdAt });
+      expect(changed.body.item).toMatchObject({
+        id: created.id,
+        name: `${sample.name} (2)`,
+        countOwned: 4,
+        notes: 'changed',
+        createdAt: created.createdAt,
+      });
       expect(changed.body.item.updatedAt).toBe(t.clock.now().toISOString());
 
       await t.http().delete(`/api/locker/items/${created.id}`).set(bearer(token)).expect(204);
@@ -137,9 +171,19 @@ describe('locker items', () => {
         .expect(400);
       const paths = response.body.errors.map((e: { path: string }) => e.path).sort();
       expect(paths).toEqual(['countOwned', 'name', 'notes']);
-      const count = await t.http().post('/api/locker/items').set(bearer(token)).send({ ...samples.lead, countOwned: 1.5 }).expect(400);
+      const count = await t
+        .http()
+        .post('/api/locker/items')
+        .set(bearer(token))
+        .send({ ...samples.lead, countOwned: 1.5 })
+        .expect(400);
       expect(count.body.errors).toEqual([{ path: 'countOwned', message: 'Count owned is a whole number' }]);
-      await t.http().post('/api/locker/items').set(bearer(token)).send({ ...samples.lead, countOwned: 0 }).expect(400);
+      await t
+        .http()
+        .post('/api/locker/items')
+        .set(bearer(token))
+        .send({ ...samples.lead, countOwned: 0 })
+        .expect(400);
     });
 
     it('nested and cross-field rules: a bank port, a bank with both capacities, a radio without currents', async () => {
@@ -150,16 +194,38 @@ describe('locker items', () => {
         .set(bearer(token))
         .send({ ...samples.bank, spec: { ...bankSpec, outputPorts: [{ ...bankSpec.outputPorts[0], maxA: 50 }] } })
         .expect(400);
-      expect(port.body.errors).toEqual([{ path: 'spec.outputPorts.0.maxA', message: 'Port current may be at most 20 A' }]);
-      const both = await t.http().post('/api/locker/items').set(bearer(token)).send({ ...samples.bank, spec: { ...bankSpec, capacityWh: 37 } }).expect(400);
-      expect(both.body.errors).toEqual([{ path: 'spec.capacityWh', message: 'Give the capacity in mAh or in Wh, not both' }]);
-      const { transmitCurrentA: _tx, ...radioWithoutTx } = samples.device.spec as Extract<LockerItemInputRaw['spec'], { kind: 'device' }>;
-      const radio = await t.http().post('/api/locker/items').set(bearer(token)).send({ ...samples.device, spec: radioWithoutTx }).expect(400);
+      expect(port.body.errors).toEqual([
+        { path: 'spec.outputPorts.0.maxA', message: 'Port current may be at most 20 A' },
+      ]);
+      const both = await t
+        .http()
+        .post('/api/locker/items')
+        .set(bearer(token))
+        .send({ ...samples.bank, spec: { ...bankSpec, capacityWh: 37 } })
+        .expect(400);
+      expect(both.body.errors).toEqual([
+        { path: 'spec.capacityWh', message: 'Give the capacity in mAh or in Wh, not both' },
+      ]);
+      const { transmitCurrentA: _tx, ...radioWithoutTx } = samples.device.spec as Extract<
+        LockerItemInputRaw['spec'],
+        { kind: 'device' }
+      >;
+      const radio = await t
+        .http()
+        .post('/api/locker/items')
+        .set(bearer(token))
+        .send({ ...samples.device, spec: radioWithoutTx })
+        .expect(400);
       expect(radio.body.errors).toEqual([{ path: 'spec.transmitCurrentA', message: 'A radio needs this value' }]);
     });
 
     it('an unknown kind, a non-uuid id and a bad sort', async () => {
-      const kind = await t.http().post('/api/locker/items').set(bearer(token)).send({ ...samples.lead, spec: { ...samples.lead.spec, kind: 'tent' } }).expect(400);
+      const kind = await t
+        .http()
+        .post('/api/locker/items')
+        .set(bearer(token))
+        .send({ ...samples.lead, spec: { ...samples.lead.spec, kind: 'tent' } })
+        .expect(400);
       expect(kind.body.errors[0].path).toBe('spec.kind');
       await t.http().get('/api/locker/items/not-an-id').set(bearer(token)).expect(400);
       const sort = await t.http().get('/api/locker/items?sort=colour').set(bearer(token)).expect(400);
@@ -168,8 +234,15 @@ describe('locker items', () => {
 
     it("an item's kind cannot change (409) and nothing changes", async () => {
       const lead = await create(samples.lead);
-      const response = await t.http().put(`/api/locker/items/${lead.id}`).set(bearer(token)).send(samples.panel).expect(409);
-      expect(response.body.errors).toEqual([{ path: 'spec.kind', message: "An item's kind cannot change; add a new item instead" }]);
+      const response = await t
+        .http()
+        .put(`/api/locker/items/${lead.id}`)
+        .set(bearer(token))
+        .send(samples.panel)
+        .expect(409);
+      expect(response.body.errors).toEqual([
+        { path: 'spec.kind', message: "An item's kind cannot change; add a new item instead" },
+      ]);
       const [row] = await t.db.select().from(lockerItems).where(eq(lockerItems.id, lead.id));
       expect(row?.kind).toBe('lead');
     });
@@ -188,7 +261,12 @@ describe('locker items', () => {
         const read = await t.http().get(`/api/locker/items/${item.id}`).set(bearer(otherToken)).expect(404);
         expect(read.body).toEqual({ statusCode: 404, message: 'No such item in your locker', errors: [] });
         const sample = samples[item.kind];
-        await t.http().put(`/api/locker/items/${item.id}`).set(bearer(otherToken)).send({ ...sample, name: 'Taken' }).expect(404);
+        await t
+          .http()
+          .put(`/api/locker/items/${item.id}`)
+          .set(bearer(otherToken))
+          .send({ ...sample, name: 'Taken' })
+          .expect(404);
         await t.http().delete(`/api/locker/items/${item.id}`).set(bearer(otherToken)).expect(404);
       }
       // The other member's own item lives beside mine without mixing.
@@ -227,18 +305,44 @@ describe('locker items', () => {
 
     const names = async (query: string) => {
       const response = await t.http().get(`/api/locker/items${query}`).set(bearer(token)).expect(200);
-      return { names: response.body.items.map((i: LockerItem) => i.name), totalMassG: response.body.totalMassG as number };
+      return {
+        names: response.body.items.map((i: LockerItem) => i.name),
+        totalMassG: response.body.totalMassG as number,
+      };
     };
 
     it('sorts by name case-insensitively by default and sums the power gear', async () => {
-      expect(await names('')).toEqual({ names: ['alpha bank', 'Bravo panel', 'Charlie 100%_lead', 'Delta radio'], totalMassG: 280 + 360 + 45 });
+      expect(await names('')).toEqual({
+        names: ['alpha bank', 'Bravo panel', 'Charlie 100%_lead', 'Delta radio'],
+        totalMassG: 280 + 360 + 45,
+      });
     });
 
     it('sorts by kind in power-role order, by grams, by count and by last change, both ways', async () => {
-      expect((await names('?sort=kind')).names).toEqual(['Bravo panel', 'alpha bank', 'Charlie 100%_lead', 'Delta radio']);
-      expect((await names('?sort=massG&order=desc')).names).toEqual(['Bravo panel', 'alpha bank', 'Charlie 100%_lead', 'Delta radio']);
-      expect((await names('?sort=countOwned')).names).toEqual(['Bravo panel', 'Delta radio', 'alpha bank', 'Charlie 100%_lead']);
-      expect((await names('?sort=updatedAt&order=desc')).names).toEqual(['Delta radio', 'Charlie 100%_lead', 'alpha bank', 'Bravo panel']);
+      expect((await names('?sort=kind')).names).toEqual([
+        'Bravo panel',
+        'alpha bank',
+        'Charlie 100%_lead',
+        'Delta radio',
+      ]);
+      expect((await names('?sort=massG&order=desc')).names).toEqual([
+        'Bravo panel',
+        'alpha bank',
+        'Charlie 100%_lead',
+        'Delta radio',
+      ]);
+      expect((await names('?sort=countOwned')).names).toEqual([
+        'Bravo panel',
+        'Delta radio',
+        'alpha bank',
+        'Charlie 100%_lead',
+      ]);
+      expect((await names('?sort=updatedAt&order=desc')).names).toEqual([
+        'Delta radio',
+        'Charlie 100%_lead',
+        'alpha bank',
+        'Bravo panel',
+      ]);
     });
 
     it('filters by kind, and an empty kind means all', async () => {

@@ -16,7 +16,11 @@ export async function seedLockers(db: Database): Promise<Map<string, Map<string,
     const names = items.map((item) => item.name);
     if (new Set(names).size !== names.length) throw new Error(`demo locker of ${email} repeats an item name`);
 
-    const [owner] = await db.select({ id: schema.accounts.id }).from(schema.accounts).where(eq(schema.accounts.email, email)).limit(1);
+    const [owner] = await db
+      .select({ id: schema.accounts.id })
+      .from(schema.accounts)
+      .where(eq(schema.accounts.email, email))
+      .limit(1);
     if (!owner) throw new Error(`demo account ${email} is missing: seed the accounts first`);
 
     const ids = new Map<string, string>();

@@ -37,9 +37,16 @@ export class CsvUploadErrorsInterceptor implements NestInterceptor {
   intercept(_context: ExecutionContext, next: CallHandler): Observable<unknown> {
     return next.handle().pipe(
       catchError((error: unknown) => {
-        if (error instanceof PayloadTooLargeException) return throwError(() => new PayloadTooLargeException(csvTooLargeMessage));
+        if (error instanceof PayloadTooLargeException)
+          return throwError(() => new PayloadTooLargeException(csvTooLargeMessage));
         if (error instanceof BadRequestException && /unexpected (file )?field|too many/i.test(error.message)) {
-          return throwError(() => new BadRequestException({ message: csvMissingMessage, errors: [{ path: csvFieldName, message: csvMissingMessage }] }));
+          return throwError(
+            () =>
+              new BadRequestException({
+                message: csvMissingMessage,
+                errors: [{ path: csvFieldName, message: csvMissingMessage }],
+              }),
+          );
         }
         return throwError(() => error);
       }),
@@ -64,10 +71,17 @@ const csvContentTypes = new Set([
  * type is not a CSV/text type or its content holds NUL bytes (a binary file renamed `.csv`).
  */
 export function csvBytes(file: UploadedCsvFile | undefined): Uint8Array {
-  if (!file) throw new BadRequestException({ message: csvMissingMessage, errors: [{ path: csvFieldName, message: csvMissingMessage }] });
+  if (!file)
+    throw new BadRequestException({
+      message: csvMissingMessage,
+      errors: [{ path: csvFieldName, message: csvMissingMessage }],
+    });
   const declared = file.mimetype.split(';')[0]?.trim().toLowerCase() ?? '';
   if (!csvContentTypes.has(declared) || file.buffer.includes(0)) {
-    throw new UnsupportedMediaTypeException({ message: csvWrongTypeMessage, errors: [{ path: csvFieldName, message: csvWrongTypeMessage }] });
+    throw new UnsupportedMediaTypeException({
+      message: csvWrongTypeMessage,
+      errors: [{ path: csvFieldName, message: csvWrongTypeMessage }],
+    });
   }
   return file.buffer;
 }

@@ -1,4 +1,15 @@
-import { Controller, Get, HttpCode, HttpStatus, Inject, Post, Query, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
+import {
+  Controller,
+  Get,
+  HttpCode,
+  HttpStatus,
+  Inject,
+  Post,
+  Query,
+  Res,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
 import { ApiBody, ApiConsumes, ApiProduces, ApiResponse, ApiTags } from '@nestjs/swagger';
 import { type LockerImportResult, decodeLockerCsv } from '@gramwatt/shared';
 import type { Response } from 'express';
@@ -6,7 +17,13 @@ import { CurrentAccount } from '../auth/decorators/current-account.decorator';
 import { ApiErrorResponses, ApiSession } from '../common/api-error-responses.decorator';
 import { CLOCK, type Clock } from '../common/clock';
 import type { AccountRow } from '../database/schema';
-import { CsvFileInterceptor, CsvUploadErrorsInterceptor, type UploadedCsvFile, csvBytes, csvFieldName } from './csv-upload';
+import {
+  CsvFileInterceptor,
+  CsvUploadErrorsInterceptor,
+  type UploadedCsvFile,
+  csvBytes,
+  csvFieldName,
+} from './csv-upload';
 import { LockerCsvService } from './locker-csv.service';
 import { LockerImportQueryDto, LockerImportResultDto } from './locker.dto';
 
@@ -30,8 +47,18 @@ export class LockerCsvController {
   @HttpCode(HttpStatus.OK)
   @UseInterceptors(CsvUploadErrorsInterceptor, CsvFileInterceptor)
   @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', required: [csvFieldName], properties: { [csvFieldName]: { type: 'string', format: 'binary' } } } })
-  @ApiResponse({ status: HttpStatus.OK, type: LockerImportResultDto.Output, description: 'The report and preview; written when commit=true and ok' })
+  @ApiBody({
+    schema: {
+      type: 'object',
+      required: [csvFieldName],
+      properties: { [csvFieldName]: { type: 'string', format: 'binary' } },
+    },
+  })
+  @ApiResponse({
+    status: HttpStatus.OK,
+    type: LockerImportResultDto.Output,
+    description: 'The report and preview; written when commit=true and ok',
+  })
   @ApiErrorResponses(400, 413, 415)
   async import(
     @CurrentAccount() account: AccountRow,
@@ -42,7 +69,14 @@ export class LockerCsvController {
     const text = decodeLockerCsv(csvBytes(file));
     const result: LockerImportResult =
       text === undefined
-        ? { ok: false, mode: query.mode, committed: false, rowCount: 0, report: [{ row: 1, column: '', message: notUtf8Message }], preview: [] }
+        ? {
+            ok: false,
+            mode: query.mode,
+            committed: false,
+            rowCount: 0,
+            report: [{ row: 1, column: '', message: notUtf8Message }],
+            preview: [],
+          }
         : await this.csv.import(account.id, text, query.mode, query.commit);
     if (query.commit && !result.ok) {
       response.status(HttpStatus.BAD_REQUEST);

@@ -1,5 +1,11 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { type LockerImportMode, type LockerImportResult, lockerItemMassG, readLockerCsv, writeLockerCsv } from '@gramwatt/shared';
+import {
+  type LockerImportMode,
+  type LockerImportResult,
+  lockerItemMassG,
+  readLockerCsv,
+  writeLockerCsv,
+} from '@gramwatt/shared';
 import { eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
@@ -35,7 +41,14 @@ export class LockerCsvService {
       countOwned: item.countOwned,
       massG: lockerItemMassG(item.spec),
     }));
-    const result: LockerImportResult = { ok: read.ok, mode, committed: false, rowCount: read.rowCount, report: read.report, preview };
+    const result: LockerImportResult = {
+      ok: read.ok,
+      mode,
+      committed: false,
+      rowCount: read.rowCount,
+      report: read.report,
+      preview,
+    };
     if (!read.ok || !commit) return result;
 
     const now = this.clock.now();
@@ -52,6 +65,8 @@ export class LockerCsvService {
   /** The owner's whole locker as CSV text (the columns the import reads). */
   async export(ownerId: string): Promise<string> {
     const rows = await this.locker.listAll(ownerId);
-    return writeLockerCsv(rows.map((row) => ({ name: row.name, notes: row.notes, countOwned: row.countOwned, spec: row.spec })));
+    return writeLockerCsv(
+      rows.map((row) => ({ name: row.name, notes: row.notes, countOwned: row.countOwned, spec: row.spec })),
+    );
   }
 }

@@ -4,7 +4,13 @@ import { ZodResponse } from 'nestjs-zod';
 import { CurrentAccount } from '../auth/decorators/current-account.decorator';
 import { ApiErrorResponses, ApiSession } from '../common/api-error-responses.decorator';
 import type { AccountRow } from '../database/schema';
-import { LockerItemIdParamsDto, LockerItemInputDto, LockerItemListResponseDto, LockerItemResponseDto, LockerListQueryDto } from './locker.dto';
+import {
+  LockerItemIdParamsDto,
+  LockerItemInputDto,
+  LockerItemListResponseDto,
+  LockerItemResponseDto,
+  LockerListQueryDto,
+} from './locker.dto';
 import { LockerService } from './locker.service';
 import { toLockerItem, totalPowerGearMassG } from './locker-item-view';
 
@@ -21,7 +27,10 @@ export class LockerItemsController {
   @ApiErrorResponses(400)
   async list(@CurrentAccount() account: AccountRow, @Query() query: LockerListQueryDto) {
     const rows = await this.locker.list(account.id, query);
-    const files = await this.locker.filesByItem(account.id, rows.map((r) => r.id));
+    const files = await this.locker.filesByItem(
+      account.id,
+      rows.map((r) => r.id),
+    );
     return { items: rows.map((row) => toLockerItem(row, files.get(row.id))), totalMassG: totalPowerGearMassG(rows) };
   }
 
@@ -43,7 +52,11 @@ export class LockerItemsController {
   @Put(':id')
   @ZodResponse({ status: HttpStatus.OK, type: LockerItemResponseDto })
   @ApiErrorResponses(400, 404, 409)
-  async update(@CurrentAccount() account: AccountRow, @Param() params: LockerItemIdParamsDto, @Body() body: LockerItemInputDto) {
+  async update(
+    @CurrentAccount() account: AccountRow,
+    @Param() params: LockerItemIdParamsDto,
+    @Body() body: LockerItemInputDto,
+  ) {
     return this.withFiles(account.id, await this.locker.update(account.id, params.id, body));
   }
 

@@ -10,14 +10,24 @@ import {
 import { type SQL, and, asc, desc, eq, ilike, inArray, sql } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type LockerItemFileRow, type LockerItemRow, type NewLockerItemRow, lockerItemFiles, lockerItems } from '../database/schema';
+import {
+  type LockerItemFileRow,
+  type LockerItemRow,
+  type NewLockerItemRow,
+  lockerItemFiles,
+  lockerItems,
+} from '../database/schema';
 
 export const itemNotFoundMessage = 'No such item in your locker';
 export const kindChangeMessage = "An item's kind cannot change; add a new item instead";
 
 /** Power-role order of the kinds (Collect, Store, Convert, Connect, Use), for sorting by kind. */
 const kindOrder = sql.join(
-  [sql`case ${lockerItems.kind}`, ...lockerItemKinds.map((kind, i) => sql`when ${kind} then ${i}`), sql`else ${lockerItemKinds.length} end`],
+  [
+    sql`case ${lockerItems.kind}`,
+    ...lockerItemKinds.map((kind, i) => sql`when ${kind} then ${i}`),
+    sql`else ${lockerItemKinds.length} end`,
+  ],
   sql` `,
 );
 
@@ -105,7 +115,10 @@ export class LockerService {
   }
 
   async create(ownerId: string, input: LockerItemInput): Promise<LockerItemRow> {
-    const [row] = await this.db.insert(lockerItems).values(lockerItemValues(ownerId, input, this.clock.now())).returning();
+    const [row] = await this.db
+      .insert(lockerItems)
+      .values(lockerItemValues(ownerId, input, this.clock.now()))
+      .returning();
     if (!row) throw new Error('insert returned no row');
     return row;
   }
@@ -124,7 +137,10 @@ export class LockerService {
         .for('update');
       if (!current) throw new NotFoundException(itemNotFoundMessage);
       if (current.kind !== input.spec.kind) {
-        throw new ConflictException({ message: kindChangeMessage, errors: [{ path: 'spec.kind', message: kindChangeMessage }] });
+        throw new ConflictException({
+          message: kindChangeMessage,
+          errors: [{ path: 'spec.kind', message: kindChangeMessage }],
+        });
       }
       const { ownerId: _owner, createdAt: _created, ...values } = lockerItemValues(ownerId, input, this.clock.now());
       const [row] = await tx

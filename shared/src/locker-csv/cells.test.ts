@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { guardText, readBooleanCell, readNumberCell, readOutputPortsCell, unguardText, writeOutputPortsCell } from './cells.js';
+import {
+  guardText,
+  readBooleanCell,
+  readNumberCell,
+  readOutputPortsCell,
+  unguardText,
+  writeOutputPortsCell,
+} from './cells.js';
 
 describe('readNumberCell', () => {
   it('reads plain decimals, signs and exponents', () => {

@@ -16,27 +16,77 @@ function csvOf(rows: Record<string, string>[], delimiter = ','): string {
 }
 
 const panelRow = {
-  kind: 'panel', name: 'Fold-out 10', count_owned: '2', mass_g: '280', rated_w: '10', port_volts: '5', port_max_a: '2',
+  kind: 'panel',
+  name: 'Fold-out 10',
+  count_owned: '2',
+  mass_g: '280',
+  rated_w: '10',
+  port_volts: '5',
+  port_max_a: '2',
   output_connector: 'usb-a',
 };
 const bankRow = {
-  kind: 'bank', name: 'Brick 10k', mass_g: '180', capacity_mah: '10000', input_max_w: '18', input_connector: 'usb-c',
+  kind: 'bank',
+  name: 'Brick 10k',
+  mass_g: '180',
+  capacity_mah: '10000',
+  input_max_w: '18',
+  input_connector: 'usb-c',
   output_ports: 'usb-a:5:2.4|usb-c:5:3:pd=9/12',
 };
 const converterRow = {
-  kind: 'converter', name: 'PD boost', mass_g: '35', converter_type: 'boost', input_volts: '9', output_volts: '12',
-  max_output_a: '1.5', efficiency: '0.88', input_connector: 'usb-c', input_captive_cable: 'true', output_connector: 'barrel-5.5x2.1',
+  kind: 'converter',
+  name: 'PD boost',
+  mass_g: '35',
+  converter_type: 'boost',
+  input_volts: '9',
+  output_volts: '12',
+  max_output_a: '1.5',
+  efficiency: '0.88',
+  input_connector: 'usb-c',
+  input_captive_cable: 'true',
+  output_connector: 'barrel-5.5x2.1',
 };
-const leadRow = { kind: 'lead', name: 'Short C', mass_g: '15', from_connector: 'usb-a', to_connector: 'usb-c', length_m: '0.3' };
+const leadRow = {
+  kind: 'lead',
+  name: 'Short C',
+  mass_g: '15',
+  from_connector: 'usb-a',
+  to_connector: 'usb-c',
+  length_m: '0.3',
+};
 const radioRow = {
-  kind: 'device', name: 'Handheld', device_kind: 'radio', own_battery_wh: '14', charges_via: '12v-dc', charge_current_a: '1',
-  charge_connector: 'barrel-5.5x2.1', supply_volts_nominal: '13.8', supply_volts_min: '11', supply_volts_max: '16',
-  transmit_current_a: '1.5', receive_current_a: '0.15', standby_current_a: '0.05', can_run_live: 'yes', use_basis: 'radio-hours',
-  transmit_minutes_per_day: '20', receive_hours_per_day: '2', standby_hours_per_day: '6', mass_g: '310',
+  kind: 'device',
+  name: 'Handheld',
+  device_kind: 'radio',
+  own_battery_wh: '14',
+  charges_via: '12v-dc',
+  charge_current_a: '1',
+  charge_connector: 'barrel-5.5x2.1',
+  supply_volts_nominal: '13.8',
+  supply_volts_min: '11',
+  supply_volts_max: '16',
+  transmit_current_a: '1.5',
+  receive_current_a: '0.15',
+  standby_current_a: '0.05',
+  can_run_live: 'yes',
+  use_basis: 'radio-hours',
+  transmit_minutes_per_day: '20',
+  receive_hours_per_day: '2',
+  standby_hours_per_day: '6',
+  mass_g: '310',
 };
 const phoneRow = {
-  kind: 'device', name: 'Phone', device_kind: 'phone', own_battery_wh: '15', charges_via: 'usb-pd', charge_power_w: '18',
-  usb_pd_volts: '9', charge_connector: 'usb-c', use_basis: 'battery-share', battery_share_per_day: '0.6',
+  kind: 'device',
+  name: 'Phone',
+  device_kind: 'phone',
+  own_battery_wh: '15',
+  charges_via: 'usb-pd',
+  charge_power_w: '18',
+  usb_pd_volts: '9',
+  charge_connector: 'usb-c',
+  use_basis: 'battery-share',
+  battery_share_per_day: '0.6',
 };
 
 describe('readLockerCsv: a good file', () => {
@@ -49,27 +99,51 @@ describe('readLockerCsv: a good file', () => {
     expect(result.rows.map((r) => r.row)).toEqual([2, 3, 4, 5, 6, 7]);
     const [panel, bank, converter, lead, radio, phone] = result.rows.map((r) => r.item);
     expect(panel).toEqual({
-      name: 'Fold-out 10', notes: '', countOwned: 2,
+      name: 'Fold-out 10',
+      notes: '',
+      countOwned: 2,
       spec: {
-        kind: 'panel', panelType: 'usb', ratedW: 10, portVolts: 5, portMaxA: 2, dropoutIrradianceWm2: 0, tempCoeffPctPerC: -0.4,
-        outputPort: { connector: 'usb-a', captiveCable: false }, massG: 280,
+        kind: 'panel',
+        panelType: 'usb',
+        ratedW: 10,
+        portVolts: 5,
+        portMaxA: 2,
+        dropoutIrradianceWm2: 0,
+        tempCoeffPctPerC: -0.4,
+        outputPort: { connector: 'usb-a', captiveCable: false },
+        massG: 280,
       },
     });
     expect(bank?.countOwned).toBe(1);
     expect(bank?.spec).toMatchObject({
-      kind: 'bank', capacityMah: 10000, cellVolts: 3.7, inputMaxW: 18, outputEfficiency: 0.85, chargeEfficiency: 0.9,
+      kind: 'bank',
+      capacityMah: 10000,
+      cellVolts: 3.7,
+      inputMaxW: 18,
+      outputEfficiency: 0.85,
+      chargeEfficiency: 0.9,
       outputPorts: [
         { connector: 'usb-a', volts: 5, maxA: 2.4, usbPdVolts: [], captiveCable: false },
         { connector: 'usb-c', volts: 5, maxA: 3, usbPdVolts: [9, 12], captiveCable: false },
       ],
     });
-    expect(converter?.spec).toMatchObject({ converterType: 'boost', inputPort: { connector: 'usb-c', captiveCable: true }, efficiency: 0.88 });
+    expect(converter?.spec).toMatchObject({
+      converterType: 'boost',
+      inputPort: { connector: 'usb-c', captiveCable: true },
+      efficiency: 0.88,
+    });
     expect(lead?.spec).toEqual({ kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 });
     expect(radio?.spec).toMatchObject({
-      deviceKind: 'radio', canRunLive: true, transmitCurrentA: 1.5,
+      deviceKind: 'radio',
+      canRunLive: true,
+      transmitCurrentA: 1.5,
       useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 20, receiveHoursPerDay: 2, standbyHoursPerDay: 6 },
     });
-    expect(phone?.spec).toMatchObject({ chargesVia: 'usb-pd', usbPdVolts: 9, useProfile: { basis: 'battery-share', batterySharePerDay: 0.6 } });
+    expect(phone?.spec).toMatchObject({
+      chargesVia: 'usb-pd',
+      usbPdVolts: 9,
+      useProfile: { basis: 'battery-share', batterySharePerDay: 0.6 },
+    });
     expect(phone?.spec.massG).toBeUndefined();
   });
 
@@ -93,7 +167,14 @@ describe('readLockerCsv: a good file', () => {
   });
 
   it('reads a semicolon-separated file with decimal commas', () => {
-    const text = csvOf([{ ...leadRow, length_m: '0,3' }, { ...bankRow, output_ports: 'usb-a:5:2,4' }, { ...converterRow, efficiency: '0,88' }], ';');
+    const text = csvOf(
+      [
+        { ...leadRow, length_m: '0,3' },
+        { ...bankRow, output_ports: 'usb-a:5:2,4' },
+        { ...converterRow, efficiency: '0,88' },
+      ],
+      ';',
+    );
     expect(detectLockerCsvDelimiter(text)).toBe(';');
     const result = readLockerCsv(text);
     expect(result.report).toEqual([]);
@@ -105,7 +186,8 @@ describe('readLockerCsv: a good file', () => {
   });
 
   it('reads quoted cells per RFC 4180 §2 (rules 5–7: delimiters, line breaks and doubled quotes inside quotes)', () => {
-    const text = 'kind,name,notes,from_connector,to_connector,length_m,mass_g\r\nlead,"Short, C","say ""hi""\r\nline two; ok",usb-a,usb-c,0.3,15\r\n';
+    const text =
+      'kind,name,notes,from_connector,to_connector,length_m,mass_g\r\nlead,"Short, C","say ""hi""\r\nline two; ok",usb-a,usb-c,0.3,15\r\n';
     const result = readLockerCsv(text);
     expect(result.report).toEqual([]);
     expect(result.rows[0]?.item).toMatchObject({ name: 'Short, C', notes: 'say "hi"\r\nline two; ok' });
@@ -151,10 +233,14 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
   it('a column given twice, and a value under a nameless column', () => {
     const twice = readLockerCsv('kind,name,name\nlead,a,b\n');
     expect(twice.report).toEqual([{ row: 1, column: 'name', message: 'Column "name" appears more than once' }]);
-    const nameless = readLockerCsv('kind,name,,from_connector,to_connector,length_m,mass_g\nlead,a,oops,usb-a,usb-c,1,5\n');
+    const nameless = readLockerCsv(
+      'kind,name,,from_connector,to_connector,length_m,mass_g\nlead,a,oops,usb-a,usb-c,1,5\n',
+    );
     expect(nameless.report).toEqual([{ row: 1, column: '', message: 'Column 3 has values but no name in the header' }]);
     // Trailing separators a spreadsheet adds (empty header cells over empty columns) are fine.
-    expect(readLockerCsv('kind,name,from_connector,to_connector,length_m,mass_g,,\nlead,a,usb-a,usb-c,1,5,,\n').ok).toBe(true);
+    expect(
+      readLockerCsv('kind,name,from_connector,to_connector,length_m,mass_g,,\nlead,a,usb-a,usb-c,1,5,,\n').ok,
+    ).toBe(true);
   });
 
   it('a bad number on row 37: exactly that cell is reported and no row is accepted as the whole file', () => {
@@ -167,7 +253,13 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
   });
 
   it('names the schema field as its column, and a missing value as "needs"', () => {
-    const result = readLockerCsv(csvOf([{ ...panelRow, rated_w: '-5' }, { ...panelRow, port_volts: '' }, { ...radioRow, transmit_current_a: '' }]));
+    const result = readLockerCsv(
+      csvOf([
+        { ...panelRow, rated_w: '-5' },
+        { ...panelRow, port_volts: '' },
+        { ...radioRow, transmit_current_a: '' },
+      ]),
+    );
     expect(result.report).toEqual([
       { row: 2, column: 'rated_w', message: 'Rated power must be above 0 W' },
       { row: 3, column: 'port_volts', message: 'A panel needs port_volts' },
@@ -176,10 +268,19 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
   });
 
   it('a value in a column that does not apply to the kind or to the use basis', () => {
-    const result = readLockerCsv(csvOf([{ ...leadRow, rated_w: '10' }, { ...phoneRow, transmit_minutes_per_day: '5' }]));
+    const result = readLockerCsv(
+      csvOf([
+        { ...leadRow, rated_w: '10' },
+        { ...phoneRow, transmit_minutes_per_day: '5' },
+      ]),
+    );
     expect(result.report).toEqual([
       { row: 2, column: 'rated_w', message: 'rated_w does not apply to a lead; leave it empty' },
-      { row: 3, column: 'transmit_minutes_per_day', message: expect.stringContaining('is for use_basis radio-hours, not battery-share') },
+      {
+        row: 3,
+        column: 'transmit_minutes_per_day',
+        message: expect.stringContaining('is for use_basis radio-hours, not battery-share'),
+      },
     ]);
   });
 
@@ -207,9 +308,9 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
   });
 
   it('a row with more cells than the header, and a broken quote', () => {
-    expect(readLockerCsv('kind,name,from_connector,to_connector,length_m,mass_g\nlead,a,usb-a,usb-c,1,5,extra\n').report).toEqual([
-      { row: 2, column: '', message: 'This row has 7 cells; the header has 6' },
-    ]);
+    expect(
+      readLockerCsv('kind,name,from_connector,to_connector,length_m,mass_g\nlead,a,usb-a,usb-c,1,5,extra\n').report,
+    ).toEqual([{ row: 2, column: '', message: 'This row has 7 cells; the header has 6' }]);
     const broken = readLockerCsv('kind,name,from_connector,to_connector,length_m,mass_g\nlead,"a,usb-a,usb-c,1,5\n');
     expect(broken.ok).toBe(false);
     expect(broken.report.some((i) => i.message.startsWith('Broken quotes'))).toBe(true);
@@ -221,7 +322,9 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
     expect(result.ok).toBe(false);
     expect(result.rows).toEqual([]);
     expect(result.rowCount).toBe(10_000);
-    expect(result.report).toEqual([{ row: 2002, column: '', message: 'The file has 10,000 items; at most 2,000 can be imported at once' }]);
+    expect(result.report).toEqual([
+      { row: 2002, column: '', message: 'The file has 10,000 items; at most 2,000 can be imported at once' },
+    ]);
   });
 
   it('caps a long report and says how many problems are left out', () => {
@@ -247,7 +350,13 @@ describe('the column table', () => {
       for (const key of keys) expect(covered(key), key).toBe(true);
     }
     // The use profile's fields too.
-    for (const key of ['transmitMinutesPerDay', 'receiveHoursPerDay', 'standbyHoursPerDay', 'batterySharePerDay', 'energyWhPerDay']) {
+    for (const key of [
+      'transmitMinutesPerDay',
+      'receiveHoursPerDay',
+      'standbyHoursPerDay',
+      'batterySharePerDay',
+      'energyWhPerDay',
+    ]) {
       expect(covered(`spec.useProfile.${key}`), key).toBe(true);
     }
   });
@@ -268,29 +377,63 @@ const whBankArb = bankArb.map((b) => {
   return bankSpecSchema.parse({ ...rest, capacityWh: Math.round((b.capacityMah ?? 5000) * 0.0037 * 100) / 100 });
 });
 const usbAdapterArb = fc
-  .record({ outputVolts: fc.constantFrom(5, 9), maxOutputA: share(0.5, 3), efficiency: share(0.7, 0.95), massG: fc.integer({ min: 10, max: 90 }) })
+  .record({
+    outputVolts: fc.constantFrom(5, 9),
+    maxOutputA: share(0.5, 3),
+    efficiency: share(0.7, 0.95),
+    massG: fc.integer({ min: 10, max: 90 }),
+  })
   .map((c) =>
     converterSpecSchema.parse({
-      kind: 'converter', converterType: '12v-to-usb', inputVolts: 12, ...c,
-      inputPort: { connector: '12v-accessory', captiveCable: false }, outputPort: { connector: 'usb-a', captiveCable: false },
+      kind: 'converter',
+      converterType: '12v-to-usb',
+      inputVolts: 12,
+      ...c,
+      inputPort: { connector: '12v-accessory', captiveCable: false },
+      outputPort: { connector: 'usb-a', captiveCable: false },
     }),
   );
 const energyDeviceArb = fc
-  .record({ energyWhPerDay: share(0, 30), ownBatteryWh: share(0, 20), massG: fc.option(fc.integer({ min: 20, max: 900 }), { nil: undefined }) })
+  .record({
+    energyWhPerDay: share(0, 30),
+    ownBatteryWh: share(0, 20),
+    massG: fc.option(fc.integer({ min: 20, max: 900 }), { nil: undefined }),
+  })
   .map(({ energyWhPerDay, ...d }) =>
     deviceSpecSchema.parse({
-      kind: 'device', deviceKind: 'camera', chargesVia: 'usb-5v', chargePowerW: 5, chargePort: { connector: 'micro-usb', captiveCable: true },
-      ...d, useProfile: { basis: 'energy', energyWhPerDay },
+      kind: 'device',
+      deviceKind: 'camera',
+      chargesVia: 'usb-5v',
+      chargePowerW: 5,
+      chargePort: { connector: 'micro-usb', captiveCable: true },
+      ...d,
+      useProfile: { basis: 'energy', energyWhPerDay },
     }),
   );
-const specArb: fc.Arbitrary<ItemSpec> = fc.oneof(panelArb, bankArb, whBankArb, converterArb, usbAdapterArb, leadArb, deviceArb, energyDeviceArb);
+const specArb: fc.Arbitrary<ItemSpec> = fc.oneof(
+  panelArb,
+  bankArb,
+  whBankArb,
+  converterArb,
+  usbAdapterArb,
+  leadArb,
+  deviceArb,
+  energyDeviceArb,
+);
 const lockerItemArb: fc.Arbitrary<LockerItemInput> = fc
   .record({ name: nameArb, notes: notesArb, countOwned: fc.integer({ min: 1, max: 20 }), spec: specArb })
   .map((raw) => lockerItemInputSchema.parse(raw));
 
 describe('writeLockerCsv', () => {
   it('writes a BOM, the full header and CRLF line ends; doubles quotes inside quoted cells (RFC 4180 §2 rule 7)', () => {
-    const text = writeLockerCsv([{ name: 'Short C', notes: 'say "hi"', countOwned: 2, spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 } }]);
+    const text = writeLockerCsv([
+      {
+        name: 'Short C',
+        notes: 'say "hi"',
+        countOwned: 2,
+        spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 },
+      },
+    ]);
     expect(text.startsWith(`\uFEFF${lockerCsvHeader.join(',')}\r\n`)).toBe(true);
     expect(text).toContain('lead,Short C,2,15,"say ""hi""",');
     expect(text.endsWith('\r\n')).toBe(true);

@@ -1,6 +1,12 @@
 import Papa from 'papaparse';
 import type { z } from 'zod';
-import { type LockerImportIssue, type LockerItemInput, type LockerItemKind, lockerItemInputSchema, lockerItemKinds } from '../schemas/locker.js';
+import {
+  type LockerImportIssue,
+  type LockerItemInput,
+  type LockerItemKind,
+  lockerItemInputSchema,
+  lockerItemKinds,
+} from '../schemas/locker.js';
 import { type LockerCsvDelimiter, readBooleanCell, readNumberCell, readOutputPortsCell, unguardText } from './cells.js';
 import { type LockerCsvColumn, columnForPath, lockerCsvColumns, lockerCsvColumnsByName } from './columns.js';
 
@@ -98,7 +104,9 @@ function unknownColumnMessage(name: string): string {
       bestDistance = d;
     }
   }
-  return best ? `Unknown column "${name}" — did you mean "${best}"?` : `Unknown column "${name}" (see the list of locker CSV columns)`;
+  return best
+    ? `Unknown column "${name}" — did you mean "${best}"?`
+    : `Unknown column "${name}" (see the list of locker CSV columns)`;
 }
 
 const isBlank = (cell: string | undefined) => cell === undefined || cell.trim() === '';
@@ -171,7 +179,10 @@ function readRow({ rowNumber, cells, delimiter }: RowContext): { item?: LockerIt
       continue;
     }
     if (column.useBases && basis && !column.useBases.includes(basis)) {
-      issue(column.name, `${column.name} is for use_basis ${column.useBases.join(' or ')}, not ${basis}; leave it empty`);
+      issue(
+        column.name,
+        `${column.name} is for use_basis ${column.useBases.join(' or ')}, not ${basis}; leave it empty`,
+      );
       continue;
     }
     const portPath = portPaths.find((p) => p.every((part, i) => column.path[i] === part));
@@ -219,10 +230,18 @@ function readRow({ rowNumber, cells, delimiter }: RowContext): { item?: LockerIt
 }
 
 /** A schema issue as a report line: its column, and "A panel needs rated_w" for a value that is missing. */
-function describeIssue(zodIssue: z.core.$ZodIssue, kind: LockerItemKind, cells: Map<LockerCsvColumn, string>, row: number): LockerImportIssue {
+function describeIssue(
+  zodIssue: z.core.$ZodIssue,
+  kind: LockerItemKind,
+  cells: Map<LockerCsvColumn, string>,
+  row: number,
+): LockerImportIssue {
   const column = columnForPath(zodIssue.path);
   const name = column?.name ?? '';
-  const missing = column !== undefined && isBlank(cells.get(column)) && (zodIssue.code === 'invalid_type' || zodIssue.code === 'invalid_union' || zodIssue.code === 'invalid_value');
+  const missing =
+    column !== undefined &&
+    isBlank(cells.get(column)) &&
+    (zodIssue.code === 'invalid_type' || zodIssue.code === 'invalid_union' || zodIssue.code === 'invalid_value');
   if (missing) return { row, column: name, message: `${kindArticle[kind]} needs ${name}` };
   // An issue inside the ports cell: say which port.
   const portIndex = column?.type === 'output-ports' ? zodIssue.path[2] : undefined;
@@ -264,7 +283,8 @@ export function readLockerCsv(text: string, options: ReadLockerCsvOptions = {}):
   const report: LockerImportIssue[] = [];
   for (const error of parsed.errors) {
     // Field counts are checked below; a broken quote is reported here.
-    if (error.type === 'Quotes') report.push({ row: (error.row ?? 0) + 1, column: '', message: `Broken quotes: ${error.message}` });
+    if (error.type === 'Quotes')
+      report.push({ row: (error.row ?? 0) + 1, column: '', message: `Broken quotes: ${error.message}` });
   }
 
   // Header: every named column known, none twice, the required ones present.
@@ -303,7 +323,7 @@ export function readLockerCsv(text: string, options: ReadLockerCsvOptions = {}):
       rows: [],
       report: [
         {
-          row: (dataRecords[maxRows]?.rowNumber ?? maxRows + 2),
+          row: dataRecords[maxRows]?.rowNumber ?? maxRows + 2,
           column: '',
           message: `The file has ${rowCount.toLocaleString('en')} items; at most ${maxRows.toLocaleString('en')} can be imported at once`,
         },
@@ -314,7 +334,11 @@ export function readLockerCsv(text: string, options: ReadLockerCsvOptions = {}):
   const rows: LockerCsvRow[] = [];
   for (const { cells, rowNumber } of dataRecords) {
     if (cells.length > header.length) {
-      report.push({ row: rowNumber, column: '', message: `This row has ${cells.length} cells; the header has ${header.length}` });
+      report.push({
+        row: rowNumber,
+        column: '',
+        message: `This row has ${cells.length} cells; the header has ${header.length}`,
+      });
       continue;
     }
     const byColumn = new Map<LockerCsvColumn, string>();
@@ -330,7 +354,11 @@ export function readLockerCsv(text: string, options: ReadLockerCsvOptions = {}):
     report.length > maxLockerCsvIssues
       ? [
           ...report.slice(0, maxLockerCsvIssues),
-          { row: report[maxLockerCsvIssues]?.row ?? 0, column: '', message: `…and ${report.length - maxLockerCsvIssues} more problems` },
+          {
+            row: report[maxLockerCsvIssues]?.row ?? 0,
+            column: '',
+            message: `…and ${report.length - maxLockerCsvIssues} more problems`,
+          },
         ]
       : report;
   return { ok: capped.length === 0, delimiter, rowCount, rows, report: capped };

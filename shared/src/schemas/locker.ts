@@ -9,7 +9,9 @@ import { itemSpecSchema } from './kit.js';
 
 /** The item kinds the locker holds today, in power-role order (Collect, Store, Convert, Connect, Use). */
 export const lockerItemKinds = ['panel', 'bank', 'converter', 'lead', 'device'] as const;
-export const lockerItemKindSchema = z.enum(lockerItemKinds, { error: 'Kind must be panel, bank, converter, lead or device' });
+export const lockerItemKindSchema = z.enum(lockerItemKinds, {
+  error: 'Kind must be panel, bank, converter, lead or device',
+});
 export type LockerItemKind = z.infer<typeof lockerItemKindSchema>;
 
 /** Longest item name, in characters. */
@@ -113,7 +115,11 @@ export const lockerListQuerySchema = z.object({
   kind: z.preprocess(blankToUndefined, lockerItemKindSchema.optional()),
   q: z.preprocess(
     blankToUndefined,
-    z.string().trim().max(maxLockerItemNameLength, { error: `Search may have at most ${maxLockerItemNameLength} characters` }).optional(),
+    z
+      .string()
+      .trim()
+      .max(maxLockerItemNameLength, { error: `Search may have at most ${maxLockerItemNameLength} characters` })
+      .optional(),
   ),
   sort: z.preprocess(
     blankToUndefined,
@@ -135,7 +141,10 @@ export const lockerImportQuerySchema = z.object({
   mode: z.preprocess(blankToUndefined, z.enum(lockerImportModes, { error: 'Mode is add or replace' }).default('add')),
   commit: z.preprocess(
     blankToUndefined,
-    z.enum(['true', 'false'], { error: 'Commit is true or false' }).default('false').transform((v) => v === 'true'),
+    z
+      .enum(['true', 'false'], { error: 'Commit is true or false' })
+      .default('false')
+      .transform((v) => v === 'true'),
   ),
 });
 export type LockerImportQuery = z.infer<typeof lockerImportQuerySchema>;

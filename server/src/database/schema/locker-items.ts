@@ -25,7 +25,10 @@ export const lockerItems = pgTable(
     massG: integer('mass_g').notNull().default(0),
     ...timestamps,
   },
-  (t) => [index('locker_items_owner_kind_idx').on(t.ownerId, t.kind), index('locker_items_owner_name_idx').on(t.ownerId, t.name)],
+  (t) => [
+    index('locker_items_owner_kind_idx').on(t.ownerId, t.kind),
+    index('locker_items_owner_name_idx').on(t.ownerId, t.name),
+  ],
 );
 
 export type LockerItemRow = typeof lockerItems.$inferSelect;

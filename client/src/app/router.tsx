@@ -49,7 +49,10 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
           },
           { path: paths.app.locker.path, lazy: () => import('./routes/app/locker').then(convert(queryClient)) },
           { path: paths.app.catalogue.path, lazy: () => import('./routes/app/catalogue').then(convert(queryClient)) },
-          { path: paths.app.adminCatalogue.path, lazy: () => import('./routes/app/admin/catalogue').then(convert(queryClient)) },
+          {
+            path: paths.app.adminCatalogue.path,
+            lazy: () => import('./routes/app/admin/catalogue').then(convert(queryClient)),
+          },
           { path: paths.app.trips.path, lazy: () => import('./routes/app/trips').then(convert(queryClient)) },
           {
             path: paths.app.adminAccounts.path,

@@ -81,7 +81,9 @@ export const seedLockerItem = (ownerId: string, item: Partial<Omit<LockerItem, '
   return built;
 };
 
-export const seedCatalogueEntry = (entry: Partial<Omit<CatalogueEntry, 'kind'>> & { spec: ItemSpec }): CatalogueEntry => {
+export const seedCatalogueEntry = (
+  entry: Partial<Omit<CatalogueEntry, 'kind'>> & { spec: ItemSpec },
+): CatalogueEntry => {
   const n = nextItem++;
   const built: CatalogueEntry = {
     id: itemUuid(n),

@@ -38,7 +38,10 @@ export const lockerHandlers = [
     const me = sessionAccount();
     if (!me) return apiError(401, 'Sign in to continue');
     const items = lockerDb.items.filter((item) => item.ownerId === me.id);
-    const totalMassG = items.reduce((sum, item) => (item.kind === 'device' ? sum : sum + item.massG * item.countOwned), 0);
+    const totalMassG = items.reduce(
+      (sum, item) => (item.kind === 'device' ? sum : sum + item.massG * item.countOwned),
+      0,
+    );
     return HttpResponse.json({ items: items.map(view), totalMassG });
   }),
 
@@ -47,7 +50,12 @@ export const lockerHandlers = [
     if (!me) return apiError(401, 'Sign in to continue');
     const parsed = lockerItemInputSchema.safeParse(await request.json());
     if (!parsed.success) return validationError(parsed.error.issues);
-    const item = buildLockerItem(me.id, { ...parsed.data, massG: lockerItemMassG(parsed.data.spec), createdAt: now(), updatedAt: now() });
+    const item = buildLockerItem(me.id, {
+      ...parsed.data,
+      massG: lockerItemMassG(parsed.data.spec),
+      createdAt: now(),
+      updatedAt: now(),
+    });
     lockerDb.items.push(item);
     return HttpResponse.json({ item: view(item) }, { status: 201 });
   }),

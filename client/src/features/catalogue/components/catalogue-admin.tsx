@@ -63,7 +63,12 @@ export function CatalogueAdmin({ gear, Editor }: CatalogueAdminProps) {
         enableSorting: false,
         cell: ({ row: { original: entry } }) => (
           <div className="flex justify-end gap-1">
-            <Button variant="quiet" size="sm" onClick={() => setEditor({ open: true, entry })} aria-label={`Edit ${entry.name}`}>
+            <Button
+              variant="quiet"
+              size="sm"
+              onClick={() => setEditor({ open: true, entry })}
+              aria-label={`Edit ${entry.name}`}
+            >
               Edit
             </Button>
             <Button variant="quiet" size="sm" onClick={() => setToDelete(entry)} aria-label={`Delete ${entry.name}`}>
@@ -141,7 +146,11 @@ export function CatalogueAdmin({ gear, Editor }: CatalogueAdminProps) {
                         className={cn('px-4 py-3 font-semibold', header.column.id === 'massG' && 'text-right')}
                       >
                         {header.column.getCanSort() ? (
-                          <button type="button" onClick={header.column.getToggleSortingHandler()} className="hover:text-scree-950">
+                          <button
+                            type="button"
+                            onClick={header.column.getToggleSortingHandler()}
+                            className="hover:text-scree-950"
+                          >
                             {flexRender(header.column.columnDef.header, header.getContext())}
                             <span aria-hidden="true">{sorted === 'asc' ? ' ↑' : sorted === 'desc' ? ' ↓' : ''}</span>
                           </button>
@@ -163,7 +172,10 @@ export function CatalogueAdmin({ gear, Editor }: CatalogueAdminProps) {
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </th>
                     ) : (
-                      <td key={cell.id} className={cn('px-4 py-2.5', cell.column.id === 'massG' && 'text-right tabular-nums')}>
+                      <td
+                        key={cell.id}
+                        className={cn('px-4 py-2.5', cell.column.id === 'massG' && 'text-right tabular-nums')}
+                      >
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </td>
                     ),
@@ -201,7 +213,8 @@ export function CatalogueAdmin({ gear, Editor }: CatalogueAdminProps) {
                 setToDelete(null);
                 if (!entry) return;
                 remove.mutate(entry.id, {
-                  onSuccess: () => setOutcome({ tone: 'done', message: `${entry.name} was deleted from the catalogue.` }),
+                  onSuccess: () =>
+                    setOutcome({ tone: 'done', message: `${entry.name} was deleted from the catalogue.` }),
                   onError: (error) => setOutcome({ tone: 'error', message: error.message }),
                 });
               }}

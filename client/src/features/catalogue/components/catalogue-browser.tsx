@@ -37,7 +37,8 @@ function EntryCard({
       <div>
         <h3 className="font-semibold text-scree-950">{entry.name}</h3>
         <p className="text-xs text-scree-600">
-          {gear.kindLabel(entry.kind)} · {entry.kind === 'device' && entry.massG === 0 ? 'no mass given' : gear.formatGrams(entry.massG)}
+          {gear.kindLabel(entry.kind)} ·{' '}
+          {entry.kind === 'device' && entry.massG === 0 ? 'no mass given' : gear.formatGrams(entry.massG)}
         </p>
         <p className="mt-2 text-sm text-scree-800">{gear.specSummary(entry.spec)}</p>
         {entry.notes && <p className="mt-1 text-sm text-scree-600">{entry.notes}</p>}
@@ -51,7 +52,13 @@ function EntryCard({
             In your locker
           </p>
         ) : (
-          <Button variant="secondary" size="sm" isLoading={isAdding} onClick={onAdd} aria-label={`Add ${entry.name} to my locker`}>
+          <Button
+            variant="secondary"
+            size="sm"
+            isLoading={isAdding}
+            onClick={onAdd}
+            aria-label={`Add ${entry.name} to my locker`}
+          >
             Add to my locker
           </Button>
         )}
@@ -90,7 +97,11 @@ export function CatalogueBrowser({ gear, lockerHref, manageHref, onCopied }: Cat
       <EmptyState title="The catalogue is empty">
         <p>
           Admins keep generic example gear here.{' '}
-          {manageHref ? <TextLink to={manageHref}>Add the first entry</TextLink> : 'Ask one to add some, or add your own gear in the locker.'}
+          {manageHref ? (
+            <TextLink to={manageHref}>Add the first entry</TextLink>
+          ) : (
+            'Ask one to add some, or add your own gear in the locker.'
+          )}
         </p>
       </EmptyState>
     );
@@ -129,7 +140,11 @@ export function CatalogueBrowser({ gear, lockerHref, manageHref, onCopied }: Cat
           </Alert>
         )}
       </div>
-      {entries.length === 0 && <p role="status" className="text-scree-700">Nothing matches “{search.trim()}”.</p>}
+      {entries.length === 0 && (
+        <p role="status" className="text-scree-700">
+          Nothing matches “{search.trim()}”.
+        </p>
+      )}
       {gear.groupByPowerRole(entries).map((group) => (
         <section key={group.role} aria-labelledby={`catalogue-${group.role}`}>
           <h2 id={`catalogue-${group.role}`} className="text-lg font-semibold text-scree-950">

@@ -26,7 +26,7 @@ const isImportResult = (body: unknown): body is ImportResult =>
  */
 export const importLockerCsv = async ({ file, mode, commit }: ImportLockerCsvInput): Promise<ImportResult> => {
   const formData = new FormData();
-  formData.append('file', file);
+  formData.append('file', file, file.name);
   try {
     return await postFormData<ImportResult>(`/locker/import?mode=${mode}&commit=${commit}`, formData);
   } catch (error) {

@@ -26,7 +26,7 @@ export interface UploadLockerFileInput {
 export const uploadLockerFile = async ({ itemId, purpose, file }: UploadLockerFileInput): Promise<LockerFile> => {
   const formData = new FormData();
   formData.append('purpose', purpose);
-  formData.append('file', file);
+  formData.append('file', file, file.name);
   return (await postFormData<{ file: LockerFile }>(filesPath(itemId), formData)).file;
 };
 

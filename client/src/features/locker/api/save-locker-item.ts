@@ -12,10 +12,10 @@ export interface SaveLockerItemInput {
 /** `POST /api/locker/items` or `PUT /api/locker/items/:id`; a 400 carries field paths such as `spec.ratedW`. */
 export const saveLockerItem = async ({ itemId, body }: SaveLockerItemInput): Promise<LockerItem> =>
   (
-    await apiRequest<{ item: LockerItem }>(
-      itemId ? `/locker/items/${encodeURIComponent(itemId)}` : '/locker/items',
-      { method: itemId ? 'PUT' : 'POST', body: { ...body } },
-    )
+    await apiRequest<{ item: LockerItem }>(itemId ? `/locker/items/${encodeURIComponent(itemId)}` : '/locker/items', {
+      method: itemId ? 'PUT' : 'POST',
+      body: { ...body },
+    })
   ).item;
 
 export const useSaveLockerItem = () => {

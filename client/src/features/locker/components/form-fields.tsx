@@ -11,7 +11,8 @@ export type FieldName = Path<ItemFormValues>;
 /** The first message in an error subtree (a list field such as USB PD voltages may hold one per entry). */
 const firstMessage = (error: unknown): string | undefined => {
   if (!error || typeof error !== 'object') return undefined;
-  if (typeof (error as FieldError).message === 'string' && (error as FieldError).message) return (error as FieldError).message;
+  if (typeof (error as FieldError).message === 'string' && (error as FieldError).message)
+    return (error as FieldError).message;
   for (const value of Object.values(error as Record<string, unknown>)) {
     if (value && typeof value === 'object' && !(value instanceof Element)) {
       const message = firstMessage(value);
@@ -168,7 +169,13 @@ export function FieldGroup({ legend, children, hint }: { legend: string; childre
 }
 
 /** A port: its connector and whether a cable is fixed to it. */
-export function PortFields({ name, legend }: { name: 'spec.outputPort' | 'spec.inputPort' | 'spec.chargePort'; legend: string }) {
+export function PortFields({
+  name,
+  legend,
+}: {
+  name: 'spec.outputPort' | 'spec.inputPort' | 'spec.chargePort';
+  legend: string;
+}) {
   return (
     <FieldGroup legend={legend}>
       <div className="grid gap-4 sm:grid-cols-2">

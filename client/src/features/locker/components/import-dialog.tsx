@@ -49,17 +49,31 @@ function Report({ result }: { result: ImportResult }) {
   if (result.report.length === 0) return null;
   return (
     <div className="flex flex-col gap-2">
-      <Alert tone="error" title={`${result.report.length === 1 ? 'One problem' : `${result.report.length} problems`} in the file`}>
+      <Alert
+        tone="error"
+        title={`${result.report.length === 1 ? 'One problem' : `${result.report.length} problems`} in the file`}
+      >
         Nothing has been imported. Fix these rows and check the file again.
       </Alert>
-      <div tabIndex={0} role="region" aria-label="Problems by row" className="max-h-80 overflow-auto rounded-lg border-2 border-scree-200">
+      <div
+        tabIndex={0}
+        role="region"
+        aria-label="Problems by row"
+        className="max-h-80 overflow-auto rounded-lg border-2 border-scree-200"
+      >
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Problems found in the file, by row and column</caption>
           <thead className="sticky top-0 bg-firn-100 text-scree-700">
             <tr>
-              <th scope="col" className="px-3 py-2 font-semibold">Row</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Column</th>
-              <th scope="col" className="px-3 py-2 font-semibold">Problem</th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Row
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Column
+              </th>
+              <th scope="col" className="px-3 py-2 font-semibold">
+                Problem
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-firn-200">
@@ -80,23 +94,40 @@ function Report({ result }: { result: ImportResult }) {
 function Preview({ result }: { result: ImportResult }) {
   if (result.preview.length === 0) return null;
   return (
-    <div tabIndex={0} role="region" aria-label="Items in the file" className="max-h-80 overflow-auto rounded-lg border-2 border-scree-200">
+    <div
+      tabIndex={0}
+      role="region"
+      aria-label="Items in the file"
+      className="max-h-80 overflow-auto rounded-lg border-2 border-scree-200"
+    >
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">The items the file holds</caption>
         <thead className="sticky top-0 bg-firn-100 text-scree-700">
           <tr>
-            <th scope="col" className="px-3 py-2 font-semibold">Row</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Name</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Kind</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Owned</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Each</th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Row
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Name
+            </th>
+            <th scope="col" className="px-3 py-2 font-semibold">
+              Kind
+            </th>
+            <th scope="col" className="px-3 py-2 text-right font-semibold">
+              Owned
+            </th>
+            <th scope="col" className="px-3 py-2 text-right font-semibold">
+              Each
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-firn-200">
           {result.preview.map((row) => (
             <tr key={row.row}>
               <td className="px-3 py-2 tabular-nums">{row.row}</td>
-              <th scope="row" className="px-3 py-2 font-medium">{row.name}</th>
+              <th scope="row" className="px-3 py-2 font-medium">
+                {row.name}
+              </th>
               <td className="px-3 py-2">{kindLabels[row.kind]}</td>
               <td className="px-3 py-2 text-right tabular-nums">{row.countOwned}</td>
               <td className="px-3 py-2 text-right tabular-nums">{formatGrams(row.massG)}</td>
@@ -183,10 +214,17 @@ export function ImportDialog({ open, onClose, currentItemCount, onImported }: Im
           {(
             [
               ['add', 'Add to my locker', 'The rows join the gear you have.'],
-              ['replace', 'Replace my locker', `Your ${currentItemCount === 1 ? 'item goes' : `${currentItemCount} items go`}, with their photos and spec sheets; the file's rows take their place.`],
+              [
+                'replace',
+                'Replace my locker',
+                `Your ${currentItemCount === 1 ? 'item goes' : `${currentItemCount} items go`}, with their photos and spec sheets; the file's rows take their place.`,
+              ],
             ] as const
           ).map(([value, label, hint]) => (
-            <label key={value} className="flex items-start gap-3 rounded-lg border-2 border-scree-200 px-3 py-2.5 has-[:checked]:border-moss-700 has-[:checked]:bg-moss-50">
+            <label
+              key={value}
+              className="flex items-start gap-3 rounded-lg border-2 border-scree-200 px-3 py-2.5 has-[:checked]:border-moss-700 has-[:checked]:bg-moss-50"
+            >
               <input
                 type="radio"
                 name="import-mode"
@@ -213,12 +251,16 @@ export function ImportDialog({ open, onClose, currentItemCount, onImported }: Im
         {checked && (
           <div className="flex flex-col gap-3" aria-live="polite">
             {checked.report.length === 0 && checked.rowCount === 0 && (
-              <Alert tone="caution" title="No rows">The file has a header but no items.</Alert>
+              <Alert tone="caution" title="No rows">
+                The file has a header but no items.
+              </Alert>
             )}
             {canImport && (
               <Alert tone="done" title={`${count === 1 ? 'One item' : `${count} items`} ready`}>
                 Every row is good.{' '}
-                {mode === 'replace' ? 'Importing replaces everything in your locker.' : 'Importing adds them to your locker.'}
+                {mode === 'replace'
+                  ? 'Importing replaces everything in your locker.'
+                  : 'Importing adds them to your locker.'}
               </Alert>
             )}
             <Report result={checked} />
@@ -235,7 +277,9 @@ export function ImportDialog({ open, onClose, currentItemCount, onImported }: Im
               isLoading={importCsv.isPending}
               onClick={() => run(true)}
             >
-              {mode === 'replace' ? `Replace with ${count} item${count === 1 ? '' : 's'}` : `Import ${count} item${count === 1 ? '' : 's'}`}
+              {mode === 'replace'
+                ? `Replace with ${count} item${count === 1 ? '' : 's'}`
+                : `Import ${count} item${count === 1 ? '' : 's'}`}
             </Button>
           ) : (
             <Button isLoading={importCsv.isPending} onClick={() => run(false)} disabled={!file}>

@@ -39,10 +39,13 @@ function UploadButton({
     if (!file) return;
     onError(null);
     if (file.size > maxUploadBytes) {
-      onError(`${file.name} is ${formatBytes(file.size)}; a ${labels.noun} may be at most ${formatBytes(maxUploadBytes)}.`);
+      onError(`${file.name} is larger than ${formatBytes(maxUploadBytes)}, the most a ${labels.noun} may be.`);
       return;
     }
-    upload.mutate({ itemId: item.id, purpose, file }, { onError: (error) => onError(uploadErrorMessage(error, purpose)) });
+    upload.mutate(
+      { itemId: item.id, purpose, file },
+      { onError: (error) => onError(uploadErrorMessage(error, purpose)) },
+    );
   };
 
   return (

@@ -141,7 +141,13 @@ export function ItemForm<Body>({
             </div>
           </div>
         )}
-        <TextField label="Name" required autoComplete="off" error={formState.errors.name?.message} {...register('name')} />
+        <TextField
+          label="Name"
+          required
+          autoComplete="off"
+          error={formState.errors.name?.message}
+          {...register('name')}
+        />
         {showCount && (
           <TextField
             label="Count owned"

@@ -35,7 +35,9 @@ export function ItemPanel({ state, onClose, onSaved }: ItemPanelProps) {
         <ItemForm
           // A fresh form for every item opened.
           key={item?.id ?? `new-${state.mode === 'add' ? state.kind : ''}`}
-          initialValues={item ? itemToFormValues(item) : emptyItemFormValues(state.mode === 'add' ? state.kind : 'panel')}
+          initialValues={
+            item ? itemToFormValues(item) : emptyItemFormValues(state.mode === 'add' ? state.kind : 'panel')
+          }
           kindLocked={!!item}
           showCount
           bodySchema={lockerItemInputSchema}

@@ -15,7 +15,10 @@ export function ItemThumb({ files }: { files: readonly LockerFile[] }) {
       />
     );
   return (
-    <span aria-hidden="true" className="flex size-10 shrink-0 items-center justify-center rounded-md bg-firn-100 text-scree-300">
+    <span
+      aria-hidden="true"
+      className="flex size-10 shrink-0 items-center justify-center rounded-md bg-firn-100 text-scree-300"
+    >
       <svg viewBox="0 0 24 24" className="size-5" fill="none" stroke="currentColor" strokeWidth="1.8">
         <rect x="3.5" y="6" width="17" height="12" rx="2.5" />
         <path d="M8 6V4.5h8V6" strokeLinecap="round" />

@@ -22,7 +22,11 @@ function MassField({ optional = false }: { optional?: boolean }) {
       label="Mass"
       unit="g"
       required={!optional}
-      hint={optional ? 'Optional: a device is carried anyway, so its grams are not counted in kits.' : 'As packed, with any pouch.'}
+      hint={
+        optional
+          ? 'Optional: a device is carried anyway, so its grams are not counted in kits.'
+          : 'As packed, with any pouch.'
+      }
     />
   );
 }
@@ -90,7 +94,12 @@ function OutputPortsFields() {
               <div className="sm:pt-8">
                 <CheckboxField name={`spec.outputPorts.${index}.captiveCable`} label="Captive cable" />
               </div>
-              <NumberField name={`spec.outputPorts.${index}.volts`} label={`Port ${index + 1}: voltage`} unit="V" required />
+              <NumberField
+                name={`spec.outputPorts.${index}.volts`}
+                label={`Port ${index + 1}: voltage`}
+                unit="V"
+                required
+              />
               <NumberField
                 name={`spec.outputPorts.${index}.maxA`}
                 label={`Port ${index + 1}: maximum current`}
@@ -171,7 +180,13 @@ export function BankFields() {
         <MassField />
       </FieldGroup>
       <FieldGroup legend="Input">
-        <NumberField name="spec.inputMaxW" label="Input limit" unit="W" required hint="The most it takes while charging." />
+        <NumberField
+          name="spec.inputMaxW"
+          label="Input limit"
+          unit="W"
+          required
+          hint="The most it takes while charging."
+        />
       </FieldGroup>
       <PortFields name="spec.inputPort" legend="Input port" />
       <OutputPortsFields />
@@ -236,9 +251,9 @@ function UseProfileFields() {
       <SelectField name="spec.useProfile.basis" label="Measured as" options={basisOptions} />
       {basis === 'radio-hours' && (
         <div className="grid gap-4 sm:grid-cols-3">
-          <NumberField name="spec.useProfile.transmitMinutesPerDay" label="Transmitting" unit="min/day" required />
-          <NumberField name="spec.useProfile.receiveHoursPerDay" label="Receiving" unit="h/day" required />
-          <NumberField name="spec.useProfile.standbyHoursPerDay" label="Standby" unit="h/day" required />
+          <NumberField name="spec.useProfile.transmitMinutesPerDay" label="Transmit time" unit="min/day" required />
+          <NumberField name="spec.useProfile.receiveHoursPerDay" label="Receive time" unit="h/day" required />
+          <NumberField name="spec.useProfile.standbyHoursPerDay" label="Standby time" unit="h/day" required />
         </div>
       )}
       {basis === 'battery-share' && (
@@ -250,7 +265,9 @@ function UseProfileFields() {
           hint="60 means it uses 60 % of its own battery a day; above 100 means more than one full charge."
         />
       )}
-      {basis === 'energy' && <NumberField name="spec.useProfile.energyWhPerDay" label="Energy per day" unit="Wh" required />}
+      {basis === 'energy' && (
+        <NumberField name="spec.useProfile.energyWhPerDay" label="Energy per day" unit="Wh" required />
+      )}
     </FieldGroup>
   );
 }
@@ -295,7 +312,13 @@ export function DeviceFields() {
           {chargesVia === 'usb-pd' && (
             <NumberField name="spec.usbPdVolts" label="USB PD voltage it asks for" unit="V" hint="9 V if unsure." />
           )}
-          <NumberField name="spec.chargeEfficiency" label="Charge efficiency" unit="%" percent hint="About 85 % is common." />
+          <NumberField
+            name="spec.chargeEfficiency"
+            label="Charge efficiency"
+            unit="%"
+            percent
+            hint="About 85 % is common."
+          />
         </FieldRow>
       </FieldGroup>
       <PortFields name="spec.chargePort" legend="Charge port" />

@@ -33,7 +33,14 @@ const kindFilterOptions = [
 
 function ShelfIllustration() {
   return (
-    <svg viewBox="0 0 64 48" className="h-16 w-20" fill="none" stroke="currentColor" strokeWidth="2.5" strokeLinejoin="round">
+    <svg
+      viewBox="0 0 64 48"
+      className="h-16 w-20"
+      fill="none"
+      stroke="currentColor"
+      strokeWidth="2.5"
+      strokeLinejoin="round"
+    >
       <rect x="6" y="10" width="52" height="32" rx="5" />
       <path d="M22 10V6h20v4" />
       <path d="M6 22h52" strokeDasharray="4 4" />
@@ -75,7 +82,9 @@ export function LockerScreen({ catalogueHref, undoMs = undoWindowMs }: LockerScr
   );
   // The open item follows the list, so a new photo shows up in the panel as soon as it is stored.
   const panelState: ItemPanelState =
-    panel.mode === 'edit' ? { mode: 'edit', item: items.find((item) => item.id === panel.item.id) ?? panel.item } : panel;
+    panel.mode === 'edit'
+      ? { mode: 'edit', item: items.find((item) => item.id === panel.item.id) ?? panel.item }
+      : panel;
 
   const onEdit = useCallback((item: LockerItem) => setPanel({ mode: 'edit', item }), []);
   const onDelete = useCallback((item: LockerItem) => setToDelete(item), []);
@@ -147,8 +156,8 @@ export function LockerScreen({ catalogueHref, undoMs = undoWindowMs }: LockerScr
           }
         >
           <p>
-            Put in the panels, banks, converters, leads and devices you own, with their grams and ports. Gramwatt
-            plans every trip from this shelf. The catalogue has generic examples to copy and adjust.
+            Put in the panels, banks, converters, leads and devices you own, with their grams and ports. Gramwatt plans
+            every trip from this shelf. The catalogue has generic examples to copy and adjust.
           </p>
         </EmptyState>
       ) : (
@@ -156,12 +165,16 @@ export function LockerScreen({ catalogueHref, undoMs = undoWindowMs }: LockerScr
           <div className="flex flex-col gap-4 rounded-xl border-2 border-scree-200 bg-white p-4 shadow-card sm:flex-row sm:items-end sm:justify-between">
             <div>
               <p className="text-sm font-medium text-scree-600">Power gear, everything you own</p>
-              <p className="text-3xl font-semibold text-scree-950 tabular-nums" aria-label={`Locker total: ${formatGrams(totalG)}`}>
+              <p
+                className="text-3xl font-semibold text-scree-950 tabular-nums"
+                aria-label={`Locker total: ${formatGrams(totalG)}`}
+              >
                 {formatGrams(totalG)}
               </p>
               <p className="text-sm text-scree-600">
                 {items.length} item{items.length === 1 ? '' : 's'}
-                {deviceCount > 0 && `; the ${deviceCount} device${deviceCount === 1 ? ' is' : 's are'} carried anyway and not counted`}
+                {deviceCount > 0 &&
+                  `; the ${deviceCount} device${deviceCount === 1 ? ' is' : 's are'} carried anyway and not counted`}
               </p>
             </div>
             <div className="flex flex-col gap-3 sm:flex-row sm:items-end">

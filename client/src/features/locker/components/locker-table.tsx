@@ -43,9 +43,25 @@ const ariaSort = (sorted: false | 'asc' | 'desc') =>
 
 function SortIcon({ sorted }: { sorted: false | 'asc' | 'desc' }) {
   return (
-    <svg viewBox="0 0 12 16" className={cn('size-3.5', sorted ? 'text-scree-900' : 'text-scree-400')} aria-hidden="true">
-      <path d="m2 6 4-4 4 4" fill="none" stroke="currentColor" strokeWidth="1.6" opacity={sorted === 'desc' ? 0.3 : 1} />
-      <path d="m2 10 4 4 4-4" fill="none" stroke="currentColor" strokeWidth="1.6" opacity={sorted === 'asc' ? 0.3 : 1} />
+    <svg
+      viewBox="0 0 12 16"
+      className={cn('size-3.5', sorted ? 'text-scree-900' : 'text-scree-400')}
+      aria-hidden="true"
+    >
+      <path
+        d="m2 6 4-4 4 4"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth="1.6"
+        opacity={sorted === 'desc' ? 0.3 : 1}
+      />
+      <path
+        d="m2 10 4 4 4-4"
+        fill="none"
+        stroke="currentColor"
+        strokeWidth="1.6"
+        opacity={sorted === 'asc' ? 0.3 : 1}
+      />
     </svg>
   );
 }
@@ -206,7 +222,10 @@ export function LockerTable({ items, search, kind, onEdit, onDelete }: LockerTab
                       <button
                         type="button"
                         onClick={header.column.getToggleSortingHandler()}
-                        className={cn('inline-flex items-center gap-1.5 rounded hover:text-scree-950', numeric && 'flex-row-reverse')}
+                        className={cn(
+                          'inline-flex items-center gap-1.5 rounded hover:text-scree-950',
+                          numeric && 'flex-row-reverse',
+                        )}
                       >
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <SortIcon sorted={sorted} />

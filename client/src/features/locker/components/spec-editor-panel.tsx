@@ -19,7 +19,15 @@ export interface SpecEditorPanelProps<Body> {
  * The per-kind item form without counts or files, in a side panel: for gear records that are not locker items
  * (the reference catalogue).
  */
-export function SpecEditorPanel<Body>({ open, title, initial, bodySchema, submitLabel, onSubmit, onClose }: SpecEditorPanelProps<Body>) {
+export function SpecEditorPanel<Body>({
+  open,
+  title,
+  initial,
+  bodySchema,
+  submitLabel,
+  onSubmit,
+  onClose,
+}: SpecEditorPanelProps<Body>) {
   return (
     <SidePanel open={open} onClose={onClose} title={title} description="Figures with units; shares in percent.">
       {open && (

@@ -16,7 +16,11 @@ export const powerRoles: readonly PowerRoleInfo[] = [
   { role: 'store', label: 'Store', blurb: 'Banks that hold charge for the night and the cloudy days.' },
   { role: 'convert', label: 'Convert', blurb: 'Converters that change one voltage into another.' },
   { role: 'connect', label: 'Connect', blurb: 'Leads and adapters between two connectors.' },
-  { role: 'use', label: 'Use', blurb: 'Devices that use energy. They are carried anyway, so their grams are not in the total.' },
+  {
+    role: 'use',
+    label: 'Use',
+    blurb: 'Devices that use energy. They are carried anyway, so their grams are not in the total.',
+  },
 ];
 
 /** Each kind's group. Batteries join Store and controllers Convert when the 12 V path arrives. */

@@ -29,7 +29,10 @@ export const specSummary = (spec: ItemSpec): string => {
       return `${connectorLabels[spec.fromConnector]} → ${connectorLabels[spec.toConnector]} · ${n(spec.lengthM)} m`;
     case 'device': {
       const battery = `${n(spec.ownBatteryWh)} Wh battery`;
-      const supply = spec.deviceKind === 'radio' && spec.supplyVoltsNominal !== undefined ? ` · ${n(spec.supplyVoltsNominal)} V supply` : '';
+      const supply =
+        spec.deviceKind === 'radio' && spec.supplyVoltsNominal !== undefined
+          ? ` · ${n(spec.supplyVoltsNominal)} V supply`
+          : '';
       return `${deviceKindLabels[spec.deviceKind]} · ${battery}${supply} · charges by ${chargeInputLabels[spec.chargesVia]}`;
     }
   }

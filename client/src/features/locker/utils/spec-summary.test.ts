@@ -1,0 +1,48 @@
+import { describe, expect, it } from 'vitest';
+import { bankSpec, leadSpec, panelSpec, phoneSpec } from '@/testing/locker-data';
+import { groupByPowerRole, totalGramsOf } from './power-roles';
+import { specSummary } from './spec-summary';
+
+describe('specSummary', () => {
+  it('gives a panel its rated watts and its USB port', () => {
+    expect(specSummary(panelSpec({ ratedW: 10, portVolts: 5, portMaxA: 2 }))).toBe('10 W · 5 V 2 A');
+  });
+
+  it('gives a bank rated in mAh its Wh at the cell voltage (mAh × V / 1000)', () => {
+    // 10,000 mAh × 3.7 V / 1000 = 37 Wh — the airline figure; the arithmetic of the unit, nothing tuned.
+    expect(specSummary(bankSpec({ capacityMah: 10_000, cellVolts: 3.7 }))).toBe(
+      '10,000 mAh · 37 Wh · in 18 W · 1 output',
+    );
+  });
+
+  it('names a lead by its two ends in plain words', () => {
+    expect(specSummary(leadSpec({ fromConnector: 'usb-c', toConnector: 'barrel-5.5x2.1', lengthM: 0.5 }))).toBe(
+      'USB-C → DC barrel 5.5 × 2.1 mm · 0.5 m',
+    );
+  });
+
+  it('shows a device by what it is, its battery and how it charges', () => {
+    expect(specSummary(phoneSpec())).toBe('Phone · 15 Wh battery · charges by USB 5 V');
+  });
+});
+
+describe('groupByPowerRole and totalGramsOf', () => {
+  const items = [
+    { kind: 'lead' as const, massG: 30, countOwned: 3 },
+    { kind: 'device' as const, massG: 190, countOwned: 1 },
+    { kind: 'panel' as const, massG: 300, countOwned: 2 },
+    { kind: 'bank' as const, massG: 200, countOwned: 1 },
+  ];
+
+  it('orders the groups as energy flows and leaves out empty ones', () => {
+    expect(groupByPowerRole(items).map((group) => group.label)).toEqual(['Collect', 'Store', 'Connect', 'Use']);
+  });
+
+  it('sums grams × count over the power gear only (devices are carried anyway)', () => {
+    expect(totalGramsOf(items)).toBe(300 * 2 + 200 + 30 * 3);
+  });
+
+  it('is 0 for an empty locker', () => {
+    expect(totalGramsOf([])).toBe(0);
+  });
+});

@@ -78,12 +78,26 @@ describe('trips: create, read, replace, delete', () => {
     });
 
     t.clock.advanceS(60);
-    const sky = { clearShare: 0.6, cloudyPersistence: 0.6, cloudyTransmission: 0.2, canopyShade: 0.4, designLikelihood: 0.95 };
+    const sky = {
+      clearShare: 0.6,
+      cloudyPersistence: 0.6,
+      cloudyTransmission: 0.2,
+      canopyShade: 0.4,
+      designLikelihood: 0.95,
+    };
     const replaced = await t
       .http()
       .put(`/api/trips/${created.id}`)
       .set(fern.auth)
-      .send(tripBody({ name: 'Lakes traverse, long', nights: 9, sky, reserveShare: 0.3, campWindow: { start: '17:30', end: '07:00' } }))
+      .send(
+        tripBody({
+          name: 'Lakes traverse, long',
+          nights: 9,
+          sky,
+          reserveShare: 0.3,
+          campWindow: { start: '17:30', end: '07:00' },
+        }),
+      )
       .expect(200);
     expect(replaced.body.trip).toMatchObject({
       name: 'Lakes traverse, long',
@@ -97,7 +111,11 @@ describe('trips: create, read, replace, delete', () => {
       gramLimitG: null,
       walkingBearingsDeg: null,
     });
-    expect(replaced.body.trip.solarInput).toMatchObject({ nights: 9, sky, campWindow: { start: '17:30', end: '07:00' } });
+    expect(replaced.body.trip.solarInput).toMatchObject({
+      nights: 9,
+      sky,
+      campWindow: { start: '17:30', end: '07:00' },
+    });
     expect(Date.parse(replaced.body.trip.updatedAt)).toBeGreaterThan(Date.parse(replaced.body.trip.createdAt));
 
     await t.http().delete(`/api/trips/${created.id}`).set(fern.auth).expect(204);
@@ -128,18 +146,42 @@ describe('trips: create, read, replace, delete', () => {
       ['a negative reserve share', { reserveShare: -0.1 }, ['reserveShare']],
       [
         'a clear-day share above 1',
-        { sky: { clearShare: 1.2, cloudyPersistence: 0.5, cloudyTransmission: 0.2, canopyShade: 0, designLikelihood: 0.9 } },
+        {
+          sky: {
+            clearShare: 1.2,
+            cloudyPersistence: 0.5,
+            cloudyTransmission: 0.2,
+            canopyShade: 0,
+            designLikelihood: 0.9,
+          },
+        },
         ['sky.clearShare'],
       ],
       [
         'a canopy shade below 0',
-        { sky: { clearShare: 0.5, cloudyPersistence: 0.5, cloudyTransmission: 0.2, canopyShade: -0.2, designLikelihood: 0.9 } },
+        {
+          sky: {
+            clearShare: 0.5,
+            cloudyPersistence: 0.5,
+            cloudyTransmission: 0.2,
+            canopyShade: -0.2,
+            designLikelihood: 0.9,
+          },
+        },
         ['sky.canopyShade'],
       ],
       [
         // p = 0.2 needs q ≥ 1 − p/(1 − p) = 0.75 for the two-state chain to exist.
         'an impossible p/q pair',
-        { sky: { clearShare: 0.2, cloudyPersistence: 0.5, cloudyTransmission: 0.2, canopyShade: 0, designLikelihood: 0.9 } },
+        {
+          sky: {
+            clearShare: 0.2,
+            cloudyPersistence: 0.5,
+            cloudyTransmission: 0.2,
+            canopyShade: 0,
+            designLikelihood: 0.9,
+          },
+        },
         ['sky.cloudyPersistence'],
       ],
       ['an unknown sky preset', { skyPresetId: 'drizzle' }, ['skyPresetId']],
@@ -164,7 +206,12 @@ describe('trips: create, read, replace, delete', () => {
 
     it('refuses a bad replacement and leaves the trip as it was', async () => {
       const created = await createTrip(t, fern, { nights: 3 });
-      const response = await t.http().put(`/api/trips/${created.id}`).set(fern.auth).send(tripBody({ nights: 61 })).expect(400);
+      const response = await t
+        .http()
+        .put(`/api/trips/${created.id}`)
+        .set(fern.auth)
+        .send(tripBody({ nights: 61 }))
+        .expect(400);
       expect(errorPaths(response)).toEqual(['nights']);
       const read = await t.http().get(`/api/trips/${created.id}`).set(fern.auth).expect(200);
       expect(read.body.trip.nights).toBe(3);
@@ -186,7 +233,8 @@ describe('trips: list order', () => {
   it('lists ongoing and upcoming trips first (soonest first), then past ones (latest first), by the injected clock', async () => {
     const hiker = await signedInHiker(t);
     // The test clock starts at 2026-06-01T08:00Z: 10:00 on 1 June in Europe/Oslo.
-    const named = async (name: string, startDate: string, nights: number) => createTrip(t, hiker, { name, startDate, nights });
+    const named = async (name: string, startDate: string, nights: number) =>
+      createTrip(t, hiker, { name, startDate, nights });
     await named('past, long ago', '2025-08-01', 5);
     await named('upcoming, later', '2026-09-01', 3);
     await named('past, last month', '2026-05-01', 2);
@@ -201,8 +249,19 @@ describe('trips: list order', () => {
       'past, last month',
       'past, long ago',
     ]);
-    expect(listed.body.trips.map((trip: { phase: string }) => trip.phase)).toEqual(['ongoing', 'upcoming', 'upcoming', 'past', 'past']);
-    expect(listed.body.trips[0]).toMatchObject({ myRole: 'leader', memberCount: 1, deviceCount: 0, endDate: '2026-06-03' });
+    expect(listed.body.trips.map((trip: { phase: string }) => trip.phase)).toEqual([
+      'ongoing',
+      'upcoming',
+      'upcoming',
+      'past',
+      'past',
+    ]);
+    expect(listed.body.trips[0]).toMatchObject({
+      myRole: 'leader',
+      memberCount: 1,
+      deviceCount: 0,
+      endDate: '2026-06-03',
+    });
 
     // Three days on (4 June), the ongoing trip (last day 3 June) is past and "soon" (2–4 June) is ongoing.
     t.clock.advanceS(3 * 24 * 3600);
@@ -239,13 +298,29 @@ describe('trips: OpenAPI', () => {
   it('documents the trip routes and schemas with units in the field names', async () => {
     const response = await t.http().get('/api/docs-json').expect(200);
     const doc = JSON.stringify(response.body);
-    for (const path of ['/api/trips', '/api/trips/{id}', '/api/trips/{id}/members', '/api/trips/{id}/devices', '/api/trips/{id}/devices/{deviceId}']) {
+    for (const path of [
+      '/api/trips',
+      '/api/trips/{id}',
+      '/api/trips/{id}/members',
+      '/api/trips/{id}/devices',
+      '/api/trips/{id}/devices/{deviceId}',
+    ]) {
       expect(Object.keys(response.body.paths)).toContain(path);
     }
-    for (const field of ['latitudeDeg', 'longitudeDeg', 'reaimEveryH', 'gramLimitG', 'reserveShare', 'transmitMinutesPerDay', 'solarInput']) {
+    for (const field of [
+      'latitudeDeg',
+      'longitudeDeg',
+      'reaimEveryH',
+      'gramLimitG',
+      'reserveShare',
+      'transmitMinutesPerDay',
+      'solarInput',
+    ]) {
       expect(doc).toContain(`"${field}"`);
     }
     const schemas = Object.keys(response.body.components.schemas);
-    expect(schemas).toEqual(expect.arrayContaining(['TripInputDto', 'TripResponseDto_Output', 'TripDeviceAddDto', 'TripDeviceUpdateDto']));
+    expect(schemas).toEqual(
+      expect.arrayContaining(['TripInputDto', 'TripResponseDto_Output', 'TripDeviceAddDto', 'TripDeviceUpdateDto']),
+    );
   });
 });

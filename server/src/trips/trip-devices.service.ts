@@ -29,7 +29,10 @@ const deviceNotFoundMessage = 'This device is not on the trip';
 const carrierRoles = new Set(['leader', 'partner']);
 
 function badRequest(errors: ApiFieldError[]): BadRequestException {
-  return new BadRequestException({ message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention', errors });
+  return new BadRequestException({
+    message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention',
+    errors,
+  });
 }
 
 /**
@@ -45,7 +48,7 @@ export class TripDevicesService {
   ) {}
 
   /**
-   * The trip's devices with effective use profiles, oldest first. Items that are no longer devices in
+   * The trip's devices with effective use profiles, in the order they were added (then by name). Items that are no longer devices in
    * the locker (their kind was changed) are left out.
    */
   async list(tripId: string): Promise<TripDeviceDetail[]> {
@@ -54,7 +57,7 @@ export class TripDevicesService {
       .from(tripDevices)
       .innerJoin(lockerItems, eq(lockerItems.id, tripDevices.itemId))
       .where(eq(tripDevices.tripId, tripId))
-      .orderBy(asc(tripDevices.createdAt), asc(tripDevices.id));
+      .orderBy(asc(tripDevices.createdAt), asc(lockerItems.name), asc(tripDevices.id));
     const memberIds = await this.memberIds(tripId);
     return rows
       .filter((row): row is TripDeviceWithItem => isDeviceItem(row.item))
@@ -80,7 +83,9 @@ export class TripDevicesService {
       .where(and(eq(lockerItems.id, body.itemId), eq(lockerItems.ownerId, member.accountId)));
     if (!item) throw new NotFoundException('No such item in your locker');
     if (!isDeviceItem(item)) {
-      throw badRequest([{ path: 'itemId', message: 'Only devices go on the device list; the plan picks panels, banks and leads' }]);
+      throw badRequest([
+        { path: 'itemId', message: 'Only devices go on the device list; the plan picks panels, banks and leads' },
+      ]);
     }
     const errors = [
       ...this.overrideErrors(item.spec, body.useProfileOverride),
@@ -111,7 +116,12 @@ export class TripDevicesService {
   }
 
   /** Changes the override (null clears it) or the carrier. A partner may change only their own devices. */
-  async update(tripId: string, deviceId: string, member: TripMemberRow, body: TripDeviceUpdate): Promise<TripDeviceDetail> {
+  async update(
+    tripId: string,
+    deviceId: string,
+    member: TripMemberRow,
+    body: TripDeviceUpdate,
+  ): Promise<TripDeviceDetail> {
     const { item } = await this.findForChange(tripId, deviceId, member);
     const errors = [
       ...(body.useProfileOverride === undefined ? [] : this.overrideErrors(item.spec, body.useProfileOverride)),
@@ -164,7 +174,10 @@ export class TripDevicesService {
   private overrideErrors(spec: DeviceSpec, override: UseProfileOverride | null): ApiFieldError[] {
     const merge = mergeUseProfile(spec.useProfile, override, { deviceKind: spec.deviceKind });
     if (merge.ok) return [];
-    return merge.issues.map((issue) => ({ path: ['useProfileOverride', ...issue.path].join('.'), message: issue.message }));
+    return merge.issues.map((issue) => ({
+      path: ['useProfileOverride', ...issue.path].join('.'),
+      message: issue.message,
+    }));
   }
 
   private async carrierErrors(tripId: string, carrierAccountId: string | undefined): Promise<ApiFieldError[]> {
@@ -178,7 +191,10 @@ export class TripDevicesService {
   }
 
   private async memberIds(tripId: string): Promise<Set<string>> {
-    const rows = await this.db.select({ accountId: tripMembers.accountId }).from(tripMembers).where(eq(tripMembers.tripId, tripId));
+    const rows = await this.db
+      .select({ accountId: tripMembers.accountId })
+      .from(tripMembers)
+      .where(eq(tripMembers.tripId, tripId));
     return new Set(rows.map((row) => row.accountId));
   }
 }

@@ -74,7 +74,10 @@ export function toTripDeviceDetail(
     overriddenFields: merge.ok ? merge.overriddenFields : [],
     overrideIssues: merge.ok
       ? []
-      : merge.issues.map((issue) => ({ path: ['useProfileOverride', ...issue.path].join('.'), message: issue.message })),
+      : merge.issues.map((issue) => ({
+          path: ['useProfileOverride', ...issue.path].join('.'),
+          message: issue.message,
+        })),
     createdAt: device.createdAt.toISOString(),
     updatedAt: device.updatedAt.toISOString(),
   };

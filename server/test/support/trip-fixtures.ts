@@ -82,7 +82,12 @@ export async function signedInHiker(t: TestApp, role: 'member' | 'admin' = 'memb
 
 /** Creates a trip through the API and returns its body. */
 export async function createTrip(t: TestApp, hiker: Hiker, overrides: Record<string, unknown> = {}) {
-  const response: request.Response = await t.http().post('/api/trips').set(hiker.auth).send(tripBody(overrides)).expect(201);
+  const response: request.Response = await t
+    .http()
+    .post('/api/trips')
+    .set(hiker.auth)
+    .send(tripBody(overrides))
+    .expect(201);
   return response.body.trip as { id: string; [key: string]: unknown };
 }
 

@@ -49,7 +49,13 @@ describe('tripInputSchema', () => {
   it('refuses a cloud chain that cannot exist (q < 1 − p/(1 − p) for p < 0.5)', () => {
     // p = 0.2 needs q ≥ 1 − 0.2/0.8 = 0.75 (the two-state chain's stationary share p = (1 − q)/(2 − q − r)
     // with r ≥ 0; see the cloud-chain module).
-    const sky = { clearShare: 0.2, cloudyPersistence: 0.5, cloudyTransmission: 0.2, canopyShade: 0, designLikelihood: 0.9 };
+    const sky = {
+      clearShare: 0.2,
+      cloudyPersistence: 0.5,
+      cloudyTransmission: 0.2,
+      canopyShade: 0,
+      designLikelihood: 0.9,
+    };
     expect(paths({ ...minimal, sky })).toEqual(['sky.cloudyPersistence']);
     expect(paths({ ...minimal, sky: { ...sky, cloudyPersistence: 0.8 } })).toEqual([]);
   });
@@ -76,7 +82,13 @@ describe('buildTripSolarInput', () => {
   });
 
   it('keeps custom sky values with no preset', () => {
-    const sky = { clearShare: 0.7, cloudyPersistence: 0.4, cloudyTransmission: 0.2, canopyShade: 0.3, designLikelihood: 0.95 };
+    const sky = {
+      clearShare: 0.7,
+      cloudyPersistence: 0.4,
+      cloudyTransmission: 0.2,
+      canopyShade: 0.3,
+      designLikelihood: 0.95,
+    };
     const { solarInput, skyPresetId } = buildTripSolarInput(tripInputSchema.parse({ ...minimal, sky }), 'UTC');
     expect(skyPresetId).toBeNull();
     expect(solarInput.sky).toEqual(sky);

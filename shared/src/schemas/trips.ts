@@ -128,7 +128,9 @@ export type UseProfileBasis = (typeof useProfileBases)[number];
  */
 export const useProfileOverrideSchema = z.strictObject(
   {
-    basis: z.enum(useProfileBases, { error: 'Use profile basis must be radio-hours, battery-share or energy' }).optional(),
+    basis: z
+      .enum(useProfileBases, { error: 'Use profile basis must be radio-hours, battery-share or energy' })
+      .optional(),
     transmitMinutesPerDay: radioUseProfileSchema.shape.transmitMinutesPerDay.optional(),
     receiveHoursPerDay: radioUseProfileSchema.shape.receiveHoursPerDay.optional(),
     standbyHoursPerDay: radioUseProfileSchema.shape.standbyHoursPerDay.optional(),

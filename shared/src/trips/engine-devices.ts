@@ -7,5 +7,8 @@ import type { TripDeviceDetail } from '../schemas/trips.js';
  * @example toEngineTripDevices(trip.devices)[0] // { deviceId: '<item id>', spec: { kind: 'device', ..., useProfile: <effective> } }
  */
 export function toEngineTripDevices(devices: readonly TripDeviceDetail[]): TripDevice[] {
-  return devices.map((device) => ({ deviceId: device.itemId, spec: { ...device.spec, useProfile: device.useProfile } }));
+  return devices.map((device) => ({
+    deviceId: device.itemId,
+    spec: { ...device.spec, useProfile: device.useProfile },
+  }));
 }

@@ -23,7 +23,12 @@ describe('tripPhase', () => {
 });
 
 describe('compareTripsForList', () => {
-  const listed = (name: string, startDate: string, phase: ListedTrip['phase']): ListedTrip => ({ name, startDate, nights: 2, phase });
+  const listed = (name: string, startDate: string, phase: ListedTrip['phase']): ListedTrip => ({
+    name,
+    startDate,
+    nights: 2,
+    phase,
+  });
   it('puts ongoing and upcoming trips first, soonest first, then past trips, latest first', () => {
     const trips = [
       listed('old', '2025-01-01', 'past'),

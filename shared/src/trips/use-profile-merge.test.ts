@@ -34,16 +34,27 @@ describe('mergeUseProfile: normal cases', () => {
 
   it('a complete override of another basis replaces the default', () => {
     const result = mergeUseProfile(phoneDefault, { basis: 'energy', energyWhPerDay: 4.5 });
-    expect(result).toEqual({ ok: true, useProfile: { basis: 'energy', energyWhPerDay: 4.5 }, overriddenFields: ['basis', 'energyWhPerDay'] });
+    expect(result).toEqual({
+      ok: true,
+      useProfile: { basis: 'energy', energyWhPerDay: 4.5 },
+      overriddenFields: ['basis', 'energyWhPerDay'],
+    });
   });
 });
 
 describe('mergeUseProfile: overrides that do not fit', () => {
   it('another basis must be complete: missing fields are named', () => {
-    const result = mergeUseProfile(phoneDefault, { basis: 'radio-hours', transmitMinutesPerDay: 5 }, { deviceKind: 'radio' });
+    const result = mergeUseProfile(
+      phoneDefault,
+      { basis: 'radio-hours', transmitMinutesPerDay: 5 },
+      { deviceKind: 'radio' },
+    );
     expect(result.ok).toBe(false);
     if (result.ok) return;
-    expect(result.issues.map((issue) => issue.path.join('.')).sort()).toEqual(['receiveHoursPerDay', 'standbyHoursPerDay']);
+    expect(result.issues.map((issue) => issue.path.join('.')).sort()).toEqual([
+      'receiveHoursPerDay',
+      'standbyHoursPerDay',
+    ]);
   });
 
   it('a field of another basis is refused', () => {
@@ -62,7 +73,12 @@ describe('mergeUseProfile: overrides that do not fit', () => {
   });
 
   it('transmit hours are refused for a device that is not a radio', () => {
-    const override = { basis: 'radio-hours' as const, transmitMinutesPerDay: 5, receiveHoursPerDay: 1, standbyHoursPerDay: 1 };
+    const override = {
+      basis: 'radio-hours' as const,
+      transmitMinutesPerDay: 5,
+      receiveHoursPerDay: 1,
+      standbyHoursPerDay: 1,
+    };
     const result = mergeUseProfile(phoneDefault, override, { deviceKind: 'phone' });
     expect(result.ok).toBe(false);
     if (result.ok) return;

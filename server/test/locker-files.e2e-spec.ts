@@ -6,7 +6,7 @@ import { type ItemSpec, maxLockerFileBytes, maxLockerFilesPerItem } from '@gramw
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
-import { type AccountRow, lockerItemFiles, lockerItems } from '../src/database/schema';
+import { type AccountRow, accounts, lockerItemFiles, lockerItems, storedObjectDeletions } from '../src/database/schema';
 import { LockerFilesService } from '../src/locker-files/locker-files.service';
 import { MemoryObjectStore } from '../src/storage/memory-object-store';
 import { OBJECT_STORE } from '../src/storage/object-store';
@@ -228,7 +228,7 @@ describe('locker files (in-memory store)', () => {
     expect(Buffer.compare(still.body as Buffer, photo)).toBe(0);
   });
 
-  it('deletes a file with its thumbnail; a deleted item takes its file rows with it', async () => {
+  it('deletes a file with its thumbnail from the store', async () => {
     const itemId = await insertItem(t, alice, 'Short-lived');
     const before = store.keys();
     const { body } = await upload(aliceToken, itemId, await noisePhoto(16, 16, 'jpeg'), 'x.jpg', 'photo').expect(201);
@@ -236,16 +236,49 @@ describe('locker files (in-memory store)', () => {
     await t.http().delete(body.file.url).set(bearer(aliceToken)).expect(204);
     expect(store.keys()).toEqual(before);
     await t.http().get(body.file.url).set(bearer(aliceToken)).expect(404);
+    await t.http().delete(body.file.url).set(bearer(aliceToken)).expect(404);
+  });
 
-    const second = await upload(aliceToken, itemId, pdfBytes, 'y.pdf', 'spec-sheet').expect(201);
+  it('removes the stored objects of files whose item or account was deleted (cascades queue them)', async () => {
+    const before = store.keys();
     const files = t.app.get(LockerFilesService);
-    const keys = await files.objectKeysForItems(alice.id, [itemId]);
-    expect(keys).toHaveLength(1);
-    expect(await files.objectKeysForItems(bob.id, [itemId])).toEqual([]);
-    await t.db.delete(lockerItems).where(eqId(itemId));
-    await files.deleteObjects(keys);
+    const itemId = await insertItem(t, alice, 'Goes with its files');
+    await upload(aliceToken, itemId, await noisePhoto(16, 16, 'png'), 'x.png', 'photo').expect(201);
+    await upload(aliceToken, itemId, pdfBytes, 'y.pdf', 'spec-sheet').expect(201);
+    expect(store.keys()).toHaveLength(before.length + 3);
+    // Deleted the way the locker deletes an item: the file rows go by cascade.
+    await t.db.delete(lockerItems).where(eq(lockerItems.id, itemId));
+    expect(await files.drainDeletedObjects()).toBe(3);
     expect(store.keys()).toEqual(before);
-    await t.http().get(second.body.file.url).set(bearer(aliceToken)).expect(404);
+    expect(await t.db.select().from(storedObjectDeletions)).toEqual([]);
+
+    const carol = await insertAccount(t.db);
+    const carolToken = await signInToken(t, carol.email);
+    const carolItem = await insertItem(t, carol);
+    await upload(carolToken, carolItem, await noisePhoto(16, 16, 'webp'), 'z.webp', 'photo').expect(201);
+    await t.db.delete(accounts).where(eq(accounts.id, carol.id));
+    expect(await files.drainDeletedObjects()).toBe(2);
+    expect(store.keys()).toEqual(before);
+  });
+
+  it('puts a key back in the queue when the store fails to delete it, and removes it on a later drain', async () => {
+    const files = t.app.get(LockerFilesService);
+    const itemId = await insertItem(t, alice, 'Stubborn');
+    const before = store.keys();
+    await upload(aliceToken, itemId, pdfBytes, 'y.pdf', 'spec-sheet').expect(201);
+    const realDelete = store.delete.bind(store);
+    store.delete = async () => {
+      throw new Error('store is down');
+    };
+    try {
+      await t.db.delete(lockerItems).where(eq(lockerItems.id, itemId));
+      expect(await files.drainDeletedObjects()).toBe(0);
+      expect(await t.db.select().from(storedObjectDeletions)).toHaveLength(1);
+    } finally {
+      store.delete = realDelete;
+    }
+    expect(await files.drainDeletedObjects()).toBe(1);
+    expect(store.keys()).toEqual(before);
   });
 
   it('lists many items’ files at once for the locker, only the owner’s', async () => {
@@ -312,5 +345,3 @@ function sizesUnder(dir: string): number[] {
     .filter((entry) => entry.isFile())
     .map((entry) => statSync(join(entry.parentPath, entry.name)).size);
 }
-
-const eqId = (id: string) => eq(lockerItems.id, id);

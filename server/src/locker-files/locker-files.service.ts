@@ -1,18 +1,20 @@
 import { randomUUID } from 'node:crypto';
 import {
+  type BeforeApplicationShutdown,
+  ConflictException,
   HttpException,
   Inject,
   Injectable,
   Logger,
   NotFoundException,
-  ConflictException,
+  type OnApplicationBootstrap,
   PayloadTooLargeException,
 } from '@nestjs/common';
 import { type LockerFile, type LockerFilePurpose, maxLockerFileBytes, maxLockerFilesPerItem } from '@gramwatt/shared';
 import { and, asc, count, eq, inArray } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type LockerItemFileRow, lockerItemFiles, lockerItems } from '../database/schema';
+import { type LockerItemFileRow, lockerItemFiles, lockerItems, storedObjectDeletions } from '../database/schema';
 import { OBJECT_STORE, type ObjectStore, type StoredObject } from '../storage/object-store';
 import { checkFileContent, sniffFileType } from './file-content-check';
 import { cleanFileName } from './file-name';
@@ -35,6 +37,12 @@ export const itemNotFoundMessage = 'No such item in your locker';
 export const fileNotFoundMessage = 'No such file on this item';
 export const tooLargeMessage = `The file is larger than ${maxLockerFileBytes / (1024 * 1024)} MB; send a smaller photo or spec sheet`;
 
+/** How often queued object deletions are drained, in milliseconds (also once at start and after each delete). */
+export const deletionDrainIntervalMs = 60_000;
+
+/** Queued deletions claimed per round trip. */
+const deletionBatchSize = 100;
+
 /** Where an item's file lives in the bucket: one folder per owner and item, so keys never collide. */
 function objectKeyFor(ownerId: string, itemId: string, fileId: string, variant: 'original' | 'thumb'): string {
   return `owners/${ownerId}/items/${itemId}/${fileId}/${variant}`;
@@ -43,11 +51,14 @@ function objectKeyFor(ownerId: string, itemId: string, fileId: string, variant: 
 /**
  * Photos and spec sheets of locker items: checks the content by its bytes, stores it (and a photo's
  * thumbnail) in the object store, and serves it back only to the item's owner. Everyone else gets 404,
- * as for the item itself.
+ * as for the item itself. Objects of deleted file rows (however deleted: a database trigger queues them)
+ * are removed from the store by {@link LockerFilesService.drainDeletedObjects}.
  */
 @Injectable()
-export class LockerFilesService {
+export class LockerFilesService implements OnApplicationBootstrap, BeforeApplicationShutdown {
   private readonly logger = new Logger('LockerFiles');
+  private drainTimer: NodeJS.Timeout | undefined;
+  private draining: Promise<number> | undefined;
 
   constructor(
     @Inject(DRIZZLE) private readonly db: Database,
@@ -100,7 +111,7 @@ export class LockerFilesService {
       return toLockerFile(row);
     } catch (error) {
       // Nothing may point at half-stored bytes: take them back out, then report the failure.
-      await this.deleteObjects([objectKey, ...(thumbKey ? [thumbKey] : [])]);
+      await Promise.allSettled([objectKey, ...(thumbKey ? [thumbKey] : [])].map((key) => this.store.delete(key)));
       throw error;
     }
   }
@@ -148,30 +159,69 @@ export class LockerFilesService {
   async remove(ownerId: string, itemId: string, fileId: string): Promise<void> {
     const file = await this.findOwned(ownerId, itemId, fileId);
     await this.db.delete(lockerItemFiles).where(and(eq(lockerItemFiles.id, file.id), eq(lockerItemFiles.ownerId, ownerId)));
-    await this.deleteObjects(keysOf([file]));
+    await this.drainDeletedObjects();
   }
 
   /**
-   * The object keys behind the owner's items' files. The locker calls this before deleting items (the
-   * rows go by cascade) and hands the keys to {@link deleteObjects} once the delete has committed.
+   * Removes from the store the objects whose file rows were deleted (queued by the database trigger on
+   * `locker_item_files`), batch by batch; a key the store fails to delete goes back in the queue. Concurrent
+   * calls share one run. Returns how many objects were removed.
    */
-  async objectKeysForItems(ownerId: string, itemIds: readonly string[]): Promise<string[]> {
-    if (itemIds.length === 0) return [];
-    const rows = await this.db
-      .select({ objectKey: lockerItemFiles.objectKey, thumbKey: lockerItemFiles.thumbKey })
-      .from(lockerItemFiles)
-      .where(and(eq(lockerItemFiles.ownerId, ownerId), inArray(lockerItemFiles.itemId, [...itemIds])));
-    return keysOf(rows);
+  drainDeletedObjects(): Promise<number> {
+    this.draining ??= this.drainQueue().finally(() => {
+      this.draining = undefined;
+    });
+    return this.draining;
   }
 
-  /** Removes stored objects, best effort: a failure is logged, never thrown (the rows are already gone). */
-  async deleteObjects(keys: readonly string[]): Promise<void> {
-    for (const key of keys) {
-      try {
-        await this.store.delete(key);
-      } catch (error) {
-        this.logger.warn(`Could not delete stored object ${key}: ${error instanceof Error ? error.message : String(error)}`);
+  /** Drains once at start (deletions queued while the app was down), then every {@link deletionDrainIntervalMs}. */
+  async onApplicationBootstrap(): Promise<void> {
+    await this.drainQuietly();
+    this.drainTimer = setInterval(() => void this.drainQuietly(), deletionDrainIntervalMs);
+    this.drainTimer.unref();
+  }
+
+  async beforeApplicationShutdown(): Promise<void> {
+    clearInterval(this.drainTimer);
+    await this.draining?.catch(() => undefined);
+  }
+
+  private async drainQuietly(): Promise<void> {
+    try {
+      await this.drainDeletedObjects();
+    } catch (error) {
+      this.logger.warn(`Could not drain deleted objects: ${error instanceof Error ? error.message : String(error)}`);
+    }
+  }
+
+  private async drainQueue(): Promise<number> {
+    let removed = 0;
+    for (;;) {
+      const batch = this.db
+        .select({ id: storedObjectDeletions.id })
+        .from(storedObjectDeletions)
+        .orderBy(asc(storedObjectDeletions.id))
+        .limit(deletionBatchSize)
+        .for('update', { skipLocked: true });
+      const claimed = await this.db
+        .delete(storedObjectDeletions)
+        .where(inArray(storedObjectDeletions.id, batch))
+        .returning({ objectKey: storedObjectDeletions.objectKey });
+      const failed: string[] = [];
+      for (const { objectKey } of claimed) {
+        try {
+          await this.store.delete(objectKey);
+          removed += 1;
+        } catch (error) {
+          failed.push(objectKey);
+          this.logger.warn(`Could not delete stored object ${objectKey}: ${error instanceof Error ? error.message : String(error)}`);
+        }
       }
+      if (failed.length > 0) {
+        await this.db.insert(storedObjectDeletions).values(failed.map((objectKey) => ({ objectKey })));
+        return removed;
+      }
+      if (claimed.length < deletionBatchSize) return removed;
     }
   }
 
@@ -212,8 +262,4 @@ export class LockerFilesService {
     }
     return object;
   }
-}
-
-function keysOf(rows: ReadonlyArray<{ objectKey: string; thumbKey: string | null }>): string[] {
-  return rows.flatMap((row) => (row.thumbKey ? [row.objectKey, row.thumbKey] : [row.objectKey]));
 }

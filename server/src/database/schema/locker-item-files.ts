@@ -1,6 +1,6 @@
 import type { LockerFileContentType, LockerFilePurpose } from '@gramwatt/shared';
 import { sql } from 'drizzle-orm';
-import { check, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { bigint, check, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { lockerItems } from './locker-items';
 
@@ -38,3 +38,17 @@ export const lockerItemFiles = pgTable(
 
 export type LockerItemFileRow = typeof lockerItemFiles.$inferSelect;
 export type NewLockerItemFileRow = typeof lockerItemFiles.$inferInsert;
+
+/**
+ * Stored objects whose file rows are gone, waiting to be removed from the object store. A trigger
+ * (migration `queue-deleted-file-objects`) adds the keys of every deleted `locker_item_files` row, however
+ * it went: one file deleted, its item deleted, a locker replaced by an import, an account deleted. The
+ * files service drains the queue, so a deleted photo does not linger in the bucket.
+ */
+export const storedObjectDeletions = pgTable('stored_object_deletions', {
+  id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
+  objectKey: text('object_key').notNull(),
+  queuedAt: timestamp('queued_at', { withTimezone: true, mode: 'date' }).notNull().defaultNow(),
+});
+
+export type StoredObjectDeletionRow = typeof storedObjectDeletions.$inferSelect;

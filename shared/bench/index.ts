@@ -1,0 +1,4 @@
+// `npm run bench`: every benchmark of the shared engine and solver, printing median and p95 per case.
+import { benchEngine } from './engine.js';
+
+benchEngine();

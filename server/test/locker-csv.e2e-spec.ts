@@ -187,6 +187,17 @@ describe('locker CSV import and export', () => {
       expect(lead).toMatchObject({ kind: 'lead', countOwned: 2, massG: 15, spec: { kind: 'lead', lengthM: 0.3 } });
     });
 
+    it('takes a file of exactly 2,000 rows, written in one transaction', async () => {
+      const lines = [header, ...Array.from({ length: 2000 }, (_, i) => leadLine(`Lead ${i + 1}`))];
+      const response = await upload('?commit=true', lines.join('\n')).expect(200);
+      expect(response.body).toMatchObject({ ok: true, committed: true, rowCount: 2000 });
+      const rows = await rowsOf();
+      expect(rows).toHaveLength(2000);
+      expect(new Set(rows.map((r) => r.name)).size).toBe(2000);
+      const list = await t.http().get('/api/locker/items').set(bearer(token)).expect(200);
+      expect(list.body.totalMassG).toBe(2000 * 15 * 2);
+    });
+
     it('replaces the locker with the file', async () => {
       const before = await seedExisting();
       await upload('?mode=replace&commit=true', goodCsv).expect(200);

@@ -1,7 +1,7 @@
 import type { LockerItem, LockerItemInputRaw } from '@gramwatt/shared';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { accounts, lockerItems } from '../src/database/schema';
+import { accounts, lockerItemFiles, lockerItems } from '../src/database/schema';
 import { type TestApp, insertAccount, signInToken, startTestApp } from './support/test-app';
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
@@ -245,6 +245,54 @@ describe('locker items', () => {
       ]);
       const [row] = await t.db.select().from(lockerItems).where(eq(lockerItems.id, lead.id));
       expect(row?.kind).toBe('lead');
+    });
+  });
+
+  describe('files on an item', () => {
+    it("lists the item's file records with owner-checked paths, and none of another member's", async () => {
+      const item = await create(samples.panel);
+      const other = await insertAccount(t.db);
+      const otherToken = await signInToken(t, other.email);
+      const otherItem = await create(samples.panel, otherToken);
+      const [photo] = await t.db
+        .insert(lockerItemFiles)
+        .values({
+          itemId: item.id,
+          ownerId,
+          purpose: 'photo',
+          contentType: 'image/jpeg',
+          sizeBytes: 1234,
+          fileName: 'panel.jpg',
+          objectKey: `test/${item.id}/photo`,
+          thumbKey: `test/${item.id}/thumb`,
+          createdAt: t.clock.now(),
+        })
+        .returning();
+      await t.db.insert(lockerItemFiles).values({
+        itemId: otherItem.id,
+        ownerId: other.id,
+        purpose: 'spec-sheet',
+        contentType: 'application/pdf',
+        sizeBytes: 99,
+        fileName: 'sheet.pdf',
+        objectKey: `test/${otherItem.id}/sheet`,
+      });
+      const expected = {
+        id: photo?.id,
+        purpose: 'photo',
+        contentType: 'image/jpeg',
+        sizeBytes: 1234,
+        fileName: 'panel.jpg',
+        createdAt: t.clock.now().toISOString(),
+        url: `/api/locker/items/${item.id}/files/${photo?.id}`,
+        thumbUrl: `/api/locker/items/${item.id}/files/${photo?.id}/thumb`,
+      };
+      const read = await t.http().get(`/api/locker/items/${item.id}`).set(bearer(token)).expect(200);
+      expect(read.body.item.files).toEqual([expected]);
+      const list = await t.http().get('/api/locker/items').set(bearer(token)).expect(200);
+      expect(list.body.items.map((i: LockerItem) => i.files)).toEqual([[expected]]);
+      const theirs = await t.http().get('/api/locker/items').set(bearer(otherToken)).expect(200);
+      expect(theirs.body.items[0].files).toEqual([expect.objectContaining({ fileName: 'sheet.pdf', thumbUrl: null })]);
     });
   });
 

@@ -10,13 +10,8 @@ import {
 import { type SQL, and, asc, desc, eq, ilike, inArray, sql } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import {
-  type LockerItemFileRow,
-  type LockerItemRow,
-  type NewLockerItemRow,
-  lockerItemFiles,
-  lockerItems,
-} from '../database/schema';
+import { type LockerItemRow, type NewLockerItemRow, lockerItemFiles, lockerItems } from '../database/schema';
+import { toLockerFile } from '../locker-files/file-view';
 
 export const itemNotFoundMessage = 'No such item in your locker';
 export const kindChangeMessage = "An item's kind cannot change; add a new item instead";
@@ -42,21 +37,6 @@ const sortColumns: Record<LockerSortKey, SQL> = {
 /** `%`, `_` and `\` match literally in a search (PostgreSQL LIKE's default escape is `\`). */
 function likeContains(text: string): string {
   return `%${text.replace(/[\\%_]/g, (ch) => `\\${ch}`)}%`;
-}
-
-/** The owner-checked download paths of a stored file. */
-function toFile(row: LockerItemFileRow): LockerFile {
-  const url = `/api/locker/items/${row.itemId}/files/${row.id}`;
-  return {
-    id: row.id,
-    purpose: row.purpose,
-    contentType: row.contentType,
-    sizeBytes: row.sizeBytes,
-    fileName: row.fileName,
-    createdAt: row.createdAt.toISOString(),
-    url,
-    thumbUrl: row.thumbKey ? `${url}/thumb` : null,
-  };
 }
 
 /** The row values of a validated item for its owner. */
@@ -173,7 +153,7 @@ export class LockerService {
       .orderBy(asc(lockerItemFiles.createdAt), asc(lockerItemFiles.id));
     for (const row of rows) {
       const list = byItem.get(row.itemId) ?? [];
-      list.push(toFile(row));
+      list.push(toLockerFile(row));
       byItem.set(row.itemId, list);
     }
     return byItem;

@@ -327,6 +327,16 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
     ]);
   });
 
+  it('the row limit is inclusive: 2,000 rows are read, 2,001 are refused', () => {
+    const rows = (n: number) => csvOf(Array.from({ length: n }, (_, i) => ({ ...leadRow, name: `Lead ${i}` })));
+    const atLimit = readLockerCsv(rows(2000));
+    expect(atLimit.ok).toBe(true);
+    expect(atLimit.rows).toHaveLength(2000);
+    const over = readLockerCsv(rows(2001));
+    expect(over.ok).toBe(false);
+    expect(over.report[0]?.row).toBe(2002);
+  });
+
   it('caps a long report and says how many problems are left out', () => {
     const text = csvOf(Array.from({ length: 600 }, (_, i) => ({ ...leadRow, name: `Lead ${i}`, length_m: 'x' })));
     const result = readLockerCsv(text);

@@ -4,12 +4,14 @@ import { demoAccounts, demoPassword } from './demo-accounts';
 import { seedAccounts } from './seeders/accounts.seeder';
 import { seedCatalogue } from './seeders/catalogue.seeder';
 import { seedLockers } from './seeders/locker.seeder';
+import { seedTrips } from './seeders/trips.seeder';
 
 /** Loads the whole invented demo scenario, seeder by seeder in dependency order. Idempotent. */
 export async function seedDemo(db: Database): Promise<void> {
   await seedAccounts(db);
   await seedCatalogue(db);
   await seedLockers(db);
+  await seedTrips(db);
 }
 
 /** Seeds the demo only into a database with no accounts at all; true when it did. */

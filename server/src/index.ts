@@ -27,3 +27,4 @@ export {
   migrationsFolder,
   schema,
 } from './database';
+export { tripRowValues } from './trips/trip-values';

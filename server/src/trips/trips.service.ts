@@ -1,41 +1,13 @@
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
-import {
-  buildTripSolarInput,
-  compareTripsForList,
-  type Trip,
-  type TripInput,
-  type TripMember,
-  type TripSummary,
-} from '@gramwatt/shared';
+import { compareTripsForList, type Trip, type TripInput, type TripMember, type TripSummary } from '@gramwatt/shared';
 import { asc, eq, inArray } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type NewTripRow, type TripMemberRow, accounts, tripMembers, trips } from '../database/schema';
-import { lookupTimeZone } from './time-zone-lookup';
+import { type TripMemberRow, accounts, tripMembers, trips } from '../database/schema';
 import { TripDevicesService } from './trip-devices.service';
 import { tripNotFoundMessage } from './trip-access.service';
 import { type TripMemberWithAccount, toTrip, toTripMember, toTripSummary } from './trip-view';
-
-/** The columns a trip body sets (the same on create and on a full replace). */
-function tripValues(input: TripInput): Omit<NewTripRow, 'id' | 'createdAt' | 'updatedAt'> {
-  const timeZoneDerived = input.timeZone === undefined;
-  const timeZone = input.timeZone ?? lookupTimeZone(input.latitudeDeg, input.longitudeDeg);
-  const { solarInput, skyPresetId } = buildTripSolarInput(input, timeZone);
-  return {
-    name: input.name,
-    notes: input.notes,
-    startDate: solarInput.startDate,
-    nights: solarInput.nights,
-    latitudeDeg: solarInput.latitudeDeg,
-    longitudeDeg: solarInput.longitudeDeg,
-    timeZone,
-    timeZoneDerived,
-    skyPresetId,
-    reserveShare: input.reserveShare,
-    gramLimitG: input.gramLimitG,
-    solarInput,
-  };
-}
+import { tripRowValues } from './trip-values';
 
 /**
  * Trips and their members. Every method that takes a membership row is called after the trip-access
@@ -92,7 +64,7 @@ export class TripsService {
     const membership = await this.db.transaction(async (tx) => {
       const [trip] = await tx
         .insert(trips)
-        .values({ ...tripValues(input), createdAt: now, updatedAt: now })
+        .values({ ...tripRowValues(input), createdAt: now, updatedAt: now })
         .returning({ id: trips.id });
       if (!trip) throw new Error('insert returned no row');
       const [leader] = await tx
@@ -109,7 +81,7 @@ export class TripsService {
   async replace(member: TripMemberRow, input: TripInput): Promise<Trip> {
     await this.db
       .update(trips)
-      .set({ ...tripValues(input), updatedAt: this.clock.now() })
+      .set({ ...tripRowValues(input), updatedAt: this.clock.now() })
       .where(eq(trips.id, member.tripId));
     return this.get(member);
   }

@@ -235,7 +235,8 @@ export function runSky(
     }
 
     // 3. Camp top-ups of the devices that need charging, from stores in merit order, down to each store's reserve.
-    //    The device's step is shared between stores; within a store it may be switched between paths (the hull).
+    //    The device's own charge power is shared between stores (it may be moved from store to store within a
+    //    step); within a store it may be switched between paths (the hull).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       for (let d = 0; d < D; d++) {
         if (k.deviceTopsUp[d] !== 1) continue;
@@ -243,18 +244,19 @@ export function runSky(
         let want = cap - (devE[d] ?? 0);
         if (want <= tiny) continue;
         const etaDev = k.deviceChargeEff[d] ?? 1;
-        let timeShare = 1;
-        for (let s = 0; s < S && want > tiny && timeShare > 1e-12; s++) {
+        let budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
+        for (let s = 0; s < S && want > tiny && budgetInWh > tiny; s++) {
           const idx = s * D + d;
           const n = k.hullCount[idx] ?? 0;
           if (n === 0) continue;
           const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
           if (avail <= tiny) continue;
           const off = k.hullOffset[idx] ?? 0;
-          const span = timeShare * dt;
-          // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want, then by what the store holds.
+          const span = dt;
+          // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want and the device's remaining
+          // charge power, then by what the store holds.
           const maxGainW = k.hullGainW[off + n - 1] ?? 0;
-          let x = Math.min(want / span, maxGainW);
+          let x = Math.min(want / span, maxGainW, (budgetInWh * etaDev) / span);
           if (hullDrawAt(k, off, n, x) * span > avail) x = hullGainAtDraw(k, off, n, avail / span);
           if (!(x > 0)) continue;
           // Split the rate between the two hull points around x, each with its own efficiencies.
@@ -274,7 +276,7 @@ export function runSky(
           E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
           devE[d] = (devE[d] ?? 0) + gain;
           want -= gain;
-          timeShare = seg > 0 ? 0 : timeShare * (1 - f1);
+          budgetInWh -= gain / etaDev;
           if (ledger) {
             ledger[row + C.converterLossWh] =
               (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);

@@ -231,4 +231,82 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(feasibleBase).toBeGreaterThan(10);
     expect(broken).toEqual([]);
   }, 60_000);
+  it('a more efficient bank behind a slightly weaker port does not slow the radio (found by a soak)', () => {
+    // With the device's hour shared between stores, the added bank (first in merit order) held the radio to its port's
+    // 0.5 A where the old banks gave 0.50025 A, and a kit that just lasted ran dry. No sun, 1 night, −10 °C.
+    const lead = testLead('usb-a', 'usb-c');
+    const boost = testBoostConverter({
+      inputVolts: 5,
+      outputVolts: 12.5,
+      maxOutputA: 0.2,
+      efficiency: 0.7,
+      inputPort: { connector: 'usb-c', captiveCable: false },
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+    });
+    const oldBank = testBank({
+      capacityMah: 6837,
+      chargeEfficiency: 0.6,
+      outputEfficiency: 0.93888,
+      inputMaxW: 3,
+      outputPorts: [{ ...port('usb-a'), maxA: 0.50025 }],
+    });
+    const newBank = testBank({
+      capacityMah: 12195,
+      chargeEfficiency: 0.6,
+      outputEfficiency: 0.99992,
+      inputMaxW: 3,
+      outputPorts: [{ ...port('usb-a'), maxA: 0.5 }],
+    });
+    const solar = syntheticTripSolar({
+      nights: 1,
+      peakWm2: 0,
+      lowC: -10,
+      highC: -10,
+      walkStartHour: 5,
+      walkEndHour: 10,
+    });
+    const kit: KitEntry[] = [
+      { itemId: 'boost', count: 1, spec: boost },
+      { itemId: 'old-bank', count: 2, spec: oldBank },
+      { itemId: 'lead', count: 1, spec: lead },
+    ];
+    const bigger: KitEntry[] = [{ itemId: 'new-bank', count: 1, spec: newBank }, ...kit];
+    const devicesWith = (batteryWh: number) => [
+      {
+        deviceId: 'radio',
+        spec: testRadio({
+          ownBatteryWh: batteryWh,
+          chargeCurrentA: 0.2,
+          transmitCurrentA: 0.8,
+          receiveCurrentA: 0.35976,
+          standbyCurrentA: 0.040834,
+          chargePort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+          useProfile: {
+            basis: 'radio-hours',
+            transmitMinutesPerDay: 54.066,
+            receiveHoursPerDay: 3.4272,
+            standbyHoursPerDay: 8.982,
+          },
+        }),
+      },
+    ];
+    // The smallest radio battery with which the old kit lasts (bisection), then batteries just above it.
+    let lo = 1;
+    let hi = 30;
+    for (let i = 0; i < 50; i++) {
+      const mid = (lo + hi) / 2;
+      if (isKitFeasible({ solar, kit, devices: devicesWith(mid), reserveShare: 0 })) hi = mid;
+      else lo = mid;
+    }
+    let feasibleBase = 0;
+    const broken: number[] = [];
+    for (const aboveWh of [1e-6, 1e-4, 1e-3, 3e-3, 1e-2, 3e-2, 0.1]) {
+      const devices = devicesWith(hi + aboveWh);
+      if (!isKitFeasible({ solar, kit, devices, reserveShare: 0 })) continue;
+      feasibleBase++;
+      if (!isKitFeasible({ solar, kit: bigger, devices, reserveShare: 0 })) broken.push(aboveWh);
+    }
+    expect(feasibleBase).toBe(7);
+    expect(broken).toEqual([]);
+  });
 });

@@ -96,9 +96,9 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 
 /**
  * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
- * none below 0 °C),
- * then each device uses its demand for the step from its own battery, then — in the camp window — devices are
- * topped up from stores (merit order, down to each store's reserve, within path and device charge power).
+ * none below 0 °C), then each device uses its demand for the step from its own battery, then — in the camp window —
+ * the devices that need charging are topped up from stores (merit order, down to each store's reserve, over the
+ * paths' hull, within the device's charge power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(

@@ -20,6 +20,8 @@ export interface CompiledKit {
   stepDurationH: Float64Array;
   stepDay: Int32Array;
   stepCamp: Uint8Array;
+  /** Hours from a camp step's start to the end of its camp window (0 outside camp). */
+  stepCampLeftH: Float64Array;
   stepFrozen: Uint8Array;
   /** Panels (kit lines), each series already × count: [sky][panel]. */
   panelCount: number;
@@ -97,6 +99,11 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     stepCamp[i] = s.window === 'camp' ? 1 : 0;
     stepFrozen[i] = s.airTempC < lithiumMinChargeTemperatureC ? 1 : 0;
   });
+  const stepCampLeftH = new Float64Array(stepCount);
+  for (let i = stepCount - 1, left = 0; i >= 0; i--) {
+    left = stepCamp[i] === 1 ? left + (stepDurationH[i] ?? 0) : 0;
+    stepCampLeftH[i] = left;
+  }
 
   const leads: KitLead[] = [];
   const converters: KitConverter[] = [];
@@ -214,6 +221,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     stepDurationH,
     stepDay,
     stepCamp,
+    stepCampLeftH,
     stepFrozen,
     panelCount,
     panelItemIds: panels.map((p) => p.itemId),
@@ -266,13 +274,16 @@ function lowerHull(
     .sort((a, b) => a.gainW - b.gainW || a.drawW - b.drawW);
   const hull: { gainW: number; drawW: number; path: ChargePath }[] = [];
   for (const p of points) {
+    // Same rate as the last point but no cheaper (sorted by draw within a rate): dominated.
+    const last = hull[hull.length - 1];
+    if (last && last.gainW === p.gainW) continue;
     // Drop hull points that lie on or above the segment from their predecessor (or the origin) to p.
     while (hull.length > 0) {
       const b = hull[hull.length - 1];
       const a = hull.length > 1 ? hull[hull.length - 2] : { gainW: 0, drawW: 0 };
       if (!b || !a) break;
       const cross = (b.gainW - a.gainW) * (p.drawW - a.drawW) - (b.drawW - a.drawW) * (p.gainW - a.gainW);
-      if (cross <= 0 || b.gainW === p.gainW) hull.pop();
+      if (cross <= 0) hull.pop();
       else break;
     }
     hull.push(p);

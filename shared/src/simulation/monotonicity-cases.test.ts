@@ -309,4 +309,87 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(feasibleBase).toBe(7);
     expect(broken).toEqual([]);
   });
+  it('an equally fast but less efficient converter is never preferred (found by a soak)', () => {
+    const portMaxA = 2;
+    // Charging the radio flat out through the faster, lossier converter wasted the bank's last watt-hours on a trip the
+    // efficient one just covered. No sun, 1 night, −10 °C; the bank offers 12 V USB PD on one port.
+    const bank = testBank({
+      capacityMah: 12634,
+      chargeEfficiency: 0.6,
+      outputEfficiency: 0.73332,
+      inputMaxW: 3,
+      outputPorts: [
+        { ...port('usb-a'), captiveCable: true },
+        { ...port('usb-a'), usbPdVolts: [12] },
+      ],
+    });
+    const efficient = testBoostConverter({
+      inputVolts: 5,
+      outputVolts: 12.5,
+      maxOutputA: 0.2,
+      efficiency: 0.70005,
+      inputPort: { connector: 'usb-a', captiveCable: false },
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+    });
+    const faster = testBoostConverter({
+      inputVolts: 12,
+      outputVolts: 12.5,
+      maxOutputA: 0.2,
+      efficiency: 0.7,
+      inputPort: { connector: 'usb-a', captiveCable: true },
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+    });
+    const solar = syntheticTripSolar({
+      nights: 1,
+      peakWm2: 0,
+      lowC: -10,
+      highC: -10,
+      walkStartHour: 5,
+      walkEndHour: 10,
+    });
+    const kit: KitEntry[] = [
+      { itemId: 'efficient', count: 1, spec: efficient },
+      { itemId: 'bank', count: 1, spec: bank },
+      { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
+    ];
+    const bigger: KitEntry[] = [{ itemId: 'faster', count: 1, spec: faster }, ...kit];
+    const devicesWith = (batteryWh: number) => [
+      {
+        deviceId: 'radio',
+        spec: testRadio({
+          ownBatteryWh: batteryWh,
+          chargeCurrentA: 0.2,
+          chargeEfficiency: 0.722125,
+          transmitCurrentA: 0.94028,
+          receiveCurrentA: 0.3702,
+          standbyCurrentA: 0.039097,
+          chargePort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+          useProfile: {
+            basis: 'radio-hours',
+            transmitMinutesPerDay: 48.414,
+            receiveHoursPerDay: 1.2328,
+            standbyHoursPerDay: 11.0604,
+          },
+        }),
+      },
+    ];
+    const reserveShare = 0.04197;
+    let lo = 1;
+    let hi = 30;
+    for (let i = 0; i < 50; i++) {
+      const mid = (lo + hi) / 2;
+      if (isKitFeasible({ solar, kit, devices: devicesWith(mid), reserveShare })) hi = mid;
+      else lo = mid;
+    }
+    let feasibleBase = 0;
+    const broken: number[] = [];
+    for (const aboveWh of [1e-6, 1e-4, 1e-3, 1e-2, 0.1, 0.5, 1, 2, 2.94, 4]) {
+      const devices = devicesWith(hi + aboveWh);
+      if (!isKitFeasible({ solar, kit, devices, reserveShare })) continue;
+      feasibleBase++;
+      if (!isKitFeasible({ solar, kit: bigger, devices, reserveShare })) broken.push(aboveWh);
+    }
+    expect(feasibleBase).toBe(10);
+    expect(broken).toEqual([]);
+  });
 });

@@ -236,7 +236,8 @@ export function runSky(
 
     // 3. Camp top-ups of the devices that need charging, from stores in merit order, down to each store's reserve.
     //    The device's own charge power is shared between stores (it may be moved from store to store within a
-    //    step); within a store it may be switched between paths (the hull).
+    //    step); within a store it may be switched between paths (the hull), going faster than the most efficient
+    //    path only as far as needed to be full by the end of the camp window.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       for (let d = 0; d < D; d++) {
         if (k.deviceTopsUp[d] !== 1) continue;
@@ -256,7 +257,9 @@ export function runSky(
           // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want and the device's remaining
           // charge power, then by what the store holds.
           const maxGainW = k.hullGainW[off + n - 1] ?? 0;
-          let x = Math.min(want / span, maxGainW, (budgetInWh * etaDev) / span);
+          // Pace: the most efficient path's full rate, or faster only as far as needed to be full when camp ends.
+          const paceW = Math.max(want / (k.stepCampLeftH[i] || dt), k.hullGainW[off] ?? 0);
+          let x = Math.min(want / span, maxGainW, paceW, (budgetInWh * etaDev) / span);
           if (hullDrawAt(k, off, n, x) * span > avail) x = hullGainAtDraw(k, off, n, avail / span);
           if (!(x > 0)) continue;
           // Split the rate between the two hull points around x, each with its own efficiencies.

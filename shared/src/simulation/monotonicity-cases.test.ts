@@ -310,7 +310,6 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(broken).toEqual([]);
   });
   it('an equally fast but less efficient converter is never preferred (found by a soak)', () => {
-    const portMaxA = 2;
     // Charging the radio flat out through the faster, lossier converter wasted the bank's last watt-hours on a trip the
     // efficient one just covered. No sun, 1 night, −10 °C; the bank offers 12 V USB PD on one port.
     const bank = testBank({

@@ -310,7 +310,8 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(broken).toEqual([]);
   });
   it('an equally fast but less efficient converter is never preferred (found by a soak)', () => {
-    // Charging the radio flat out through the faster, lossier converter wasted the bank's last watt-hours on a trip the
+    // Both converters give the radio the same 2.5 W here (2 A bank ports, 0.2 A converter outputs); a hull that kept
+    // the later of two equal-rate paths used the lossier one and wasted the bank's last watt-hours on a trip the
     // efficient one just covered. No sun, 1 night, −10 °C; the bank offers 12 V USB PD on one port.
     const bank = testBank({
       capacityMah: 12634,

@@ -44,6 +44,9 @@ function presetValues(id: string) {
 
 const mixedSky = presetValues('mixed');
 
+const isShare = (value: unknown): value is number =>
+  typeof value === 'number' && Number.isFinite(value) && value >= 0 && value <= 1;
+
 /** The trip's sky: the two-state cloud chain, what a cloudy day lets through, canopy shade, design likelihood. */
 export const tripSkySchema = z
   .object({
@@ -53,14 +56,20 @@ export const tripSkySchema = z
     canopyShade: share('Canopy shade'),
     designLikelihood: share('Design likelihood'),
   })
-  .refine((sky) => isValidCloudChain(sky.clearShare, sky.cloudyPersistence), {
-    path: ['cloudyPersistence'],
-    error: (issue) => {
-      const sky = issue.input as { clearShare?: number } | undefined;
-      const min = minCloudyPersistence(sky?.clearShare ?? 0);
-      return `With this clear-day share, cloudy persistence must be at least ${min.toFixed(3)}`;
+  // A share outside 0–1 already has its own error; the chain bound speaks only about valid shares.
+  .refine(
+    (sky) =>
+      !(isShare(sky.clearShare) && isShare(sky.cloudyPersistence)) ||
+      isValidCloudChain(sky.clearShare, sky.cloudyPersistence),
+    {
+      path: ['cloudyPersistence'],
+      error: (issue) => {
+        const sky = issue.input as { clearShare?: number } | undefined;
+        const min = minCloudyPersistence(sky?.clearShare ?? 0);
+        return `With this clear-day share, cloudy persistence must be at least ${min.toFixed(3)}`;
+      },
     },
-  });
+  );
 
 const dailyTempSchema = z.union([
   finiteNumber('Temperature', -70, 60, ' °C'),

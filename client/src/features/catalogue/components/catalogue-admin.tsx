@@ -121,7 +121,7 @@ export function CatalogueAdmin({ gear, Editor }: CatalogueAdminProps) {
           tabIndex={0}
           role="region"
           aria-label="Catalogue table"
-          className="overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card"
+          className="relative overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card"
         >
           <table className="w-full min-w-[40rem] border-collapse text-left text-sm">
             <caption className="sr-only">Catalogue entries; column headers sort the table</caption>

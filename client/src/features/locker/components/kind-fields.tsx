@@ -53,7 +53,7 @@ export function PanelFields() {
           <NumberField
             name="spec.tempCoeffPctPerC"
             label="Temperature coefficient of power"
-            unit="%/°C"
+            unit={'%\u2060/\u2060°C'}
             hint="Negative: power falls as the cells warm. About −0.4 for crystalline silicon."
           />
         </FieldRow>

@@ -86,9 +86,14 @@ export function LockerTable({ items, search, kind, onEdit, onDelete }: LockerTab
             <div className="flex items-center gap-3">
               <ItemThumb files={item.files} />
               <div className="min-w-0">
-                <span className="block font-medium text-scree-950">{item.name}</span>
+                <span className="block min-w-32 font-medium text-scree-950">{item.name}</span>
                 <span className="block text-xs text-scree-600">
                   {kindLabels[item.kind]}
+                  {/* On a phone the gram columns are off to the side: a short copy here (the cells say it to screen readers). */}
+                  <span aria-hidden="true" className="sm:hidden">
+                    {' · '}
+                    {item.countOwned > 1 ? `${item.countOwned} × ${formatGrams(item.massG)}` : formatGrams(item.massG)}
+                  </span>
                   {specSheet && (
                     <>
                       {' · '}
@@ -195,7 +200,7 @@ export function LockerTable({ items, search, kind, onEdit, onDelete }: LockerTab
       tabIndex={0}
       role="region"
       aria-label="Locker table"
-      className="overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card focus-visible:outline-2 focus-visible:outline-tarn-600"
+      className="relative overflow-x-auto rounded-xl border-2 border-scree-200 bg-white shadow-card focus-visible:outline-2 focus-visible:outline-tarn-600"
     >
       <table className="w-full min-w-[46rem] border-collapse text-left text-sm">
         <caption className="sr-only">
@@ -276,7 +281,11 @@ export function LockerTable({ items, search, kind, onEdit, onDelete }: LockerTab
                     ) : (
                       <td
                         key={cell.id}
-                        className={cn('px-4 py-2.5', numeric && 'text-right whitespace-nowrap tabular-nums')}
+                        className={cn(
+                          'px-4 py-2.5',
+                          numeric && 'text-right whitespace-nowrap tabular-nums',
+                          cell.column.id === 'spec' && 'min-w-52',
+                        )}
                       >
                         {content}
                       </td>

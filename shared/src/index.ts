@@ -16,3 +16,4 @@ export * from './cautions/index.js';
 export * from './schemas/index.js';
 export * from './trips/index.js';
 export * from './locker-csv/index.js';
+export * from './gpx/index.js';

@@ -1,4 +1,5 @@
-import { demoAccounts, demoPassword } from '@gramwatt/seed';
+// The demo accounts' source module, read directly: the built seed package would load shared's sources natively.
+import { demoAccounts, demoPassword } from '../seed/src/demo-accounts';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { appUrl, browserMissing, launchBrowser, newContext, saveScreenshot, signIn } from './browser';
@@ -49,7 +50,7 @@ describe.skipIf(browserMissing)('signing in to the built app', () => {
     const page = await context.newPage();
     await signIn(page, admin.email, demoPassword);
     await expect.poll(() => new URL(page.url()).pathname).not.toBe('/sign-in');
-    await page.goto(appUrl('/admin'));
+    await page.goto(appUrl('/admin/accounts'));
     await expect.poll(() => page.getByText(member.email).first().isVisible()).toBe(true);
     await saveScreenshot(page, 'admin-phone');
     await context.close();

@@ -19,6 +19,7 @@ import { OBJECT_STORE, type ObjectStore, type StoredObject } from '../storage/ob
 import { checkFileContent, sniffFileType } from './file-content-check';
 import { cleanFileName } from './file-name';
 import { toLockerFile } from './file-view';
+import { listFilesByItem } from './files-by-item';
 import { makeThumbnail, maxPhotoPixels, thumbnailContentType } from './thumbnail';
 
 /** An uploaded file as the HTTP layer hands it over: the bytes and the name the browser gave. */
@@ -127,19 +128,7 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
    * Items without files, and ids that are not the owner's, map to nothing.
    */
   async listForItems(ownerId: string, itemIds: readonly string[]): Promise<Map<string, LockerFile[]>> {
-    const byItem = new Map<string, LockerFile[]>();
-    if (itemIds.length === 0) return byItem;
-    const rows = await this.db
-      .select()
-      .from(lockerItemFiles)
-      .where(and(eq(lockerItemFiles.ownerId, ownerId), inArray(lockerItemFiles.itemId, [...itemIds])))
-      .orderBy(asc(lockerItemFiles.createdAt), asc(lockerItemFiles.id));
-    for (const row of rows) {
-      const list = byItem.get(row.itemId) ?? [];
-      list.push(toLockerFile(row));
-      byItem.set(row.itemId, list);
-    }
-    return byItem;
+    return listFilesByItem(this.db, ownerId, itemIds);
   }
 
   /** The original bytes of the owner's file; 404 when it is not theirs or not there. */

@@ -7,11 +7,11 @@ import {
   lockerItemKinds,
   lockerItemMassG,
 } from '@gramwatt/shared';
-import { type SQL, and, asc, desc, eq, ilike, inArray, sql } from 'drizzle-orm';
+import { type SQL, and, asc, desc, eq, ilike, sql } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type LockerItemRow, type NewLockerItemRow, lockerItemFiles, lockerItems } from '../database/schema';
-import { toLockerFile } from '../locker-files/file-view';
+import { type LockerItemRow, type NewLockerItemRow, lockerItems } from '../database/schema';
+import { listFilesByItem } from '../locker-files/files-by-item';
 
 export const itemNotFoundMessage = 'No such item in your locker';
 export const kindChangeMessage = "An item's kind cannot change; add a new item instead";
@@ -144,18 +144,6 @@ export class LockerService {
 
   /** The files of the owner's items, by item id, oldest first. */
   async filesByItem(ownerId: string, itemIds: readonly string[]): Promise<Map<string, LockerFile[]>> {
-    const byItem = new Map<string, LockerFile[]>();
-    if (itemIds.length === 0) return byItem;
-    const rows = await this.db
-      .select()
-      .from(lockerItemFiles)
-      .where(and(eq(lockerItemFiles.ownerId, ownerId), inArray(lockerItemFiles.itemId, [...itemIds])))
-      .orderBy(asc(lockerItemFiles.createdAt), asc(lockerItemFiles.id));
-    for (const row of rows) {
-      const list = byItem.get(row.itemId) ?? [];
-      list.push(toLockerFile(row));
-      byItem.set(row.itemId, list);
-    }
-    return byItem;
+    return listFilesByItem(this.db, ownerId, itemIds);
   }
 }

@@ -5,3 +5,6 @@ export * from './catalogue-entries';
 export * from './trips';
 export * from './trip-members';
 export * from './trip-devices';
+export * from './mail-messages';
+export * from './trip-invites';
+export * from './trip-share-links';

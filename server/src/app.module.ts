@@ -19,6 +19,9 @@ import type { Database } from './database/database.types';
 import { HealthModule } from './health/health.module';
 import { LockerFilesModule } from './locker-files/locker-files.module';
 import { LockerModule } from './locker/locker.module';
+import { mailConfig } from './mail/mail.config';
+import { MailModule } from './mail/mail.module';
+import { OutboxModule } from './outbox/outbox.module';
 import { TripsModule } from './trips/trips.module';
 import { UsersModule } from './users/users.module';
 
@@ -49,7 +52,7 @@ export class AppModule {
           cache: true,
           ignoreEnvFile: true,
           ignoreEnvVars: true,
-          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env)],
+          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env), mailConfig(env)],
         }),
         ClockModule.forRoot(options.clock),
         DatabaseModule.forRoot({ database: options.database }),
@@ -72,6 +75,8 @@ export class AppModule {
         CatalogueModule,
         LockerModule,
         TripsModule,
+        MailModule,
+        OutboxModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

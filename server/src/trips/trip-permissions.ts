@@ -15,6 +15,14 @@ export const tripPermissions = {
   addDevice: ['leader', 'partner'],
   /** Changes or removes a device: a partner only their own (checked by the devices service), the leader any. */
   changeDevice: ['leader', 'partner'],
+  /** Changes a member's role or gram limit, or removes them. */
+  manageMembers: ['leader'],
+  /** Invites by e-mail, lists and withdraws invites. */
+  manageInvites: ['leader'],
+  /** Makes, shows and revokes the read-only share link. */
+  manageShareLink: ['leader'],
+  /** E-mails the trip summary and share link to the viewers. */
+  sendHome: ['leader'],
 } as const satisfies Record<string, readonly TripRole[]>;
 
 /** An action on a trip, as named in {@link tripPermissions}. */

@@ -1,3 +1,5 @@
+import { dayBoundsOf, type BoundVector } from './day-bounds.js';
+import type { EnergyCut } from './energy-cuts.js';
 import type { LinearModel, LinearRow } from './linear-model.js';
 import type { PresolvedProblem } from './presolve.js';
 import type { KitCounts } from './types.js';
@@ -10,8 +12,18 @@ import type { KitCounts } from './types.js';
  *   Σ_{i: K_i > 0} Σ_{k ≥ K_i} y_{i,k} ≤ |{i: K_i > 0}| − 1.
  */
 export interface KitCut {
-  kind: 'no-larger-than' | 'no-superset-of';
+  /** `not-exactly`: exclude this one kit (for the tie-break among kits of equal grams). */
+  kind: 'no-larger-than' | 'no-superset-of' | 'not-exactly';
   counts: KitCounts;
+}
+
+/**
+ * The master problem of the decomposed search: the same count, path, dominance and cut rows, but the sky-day energy
+ * rows replaced by the daily model's feasibility cuts found so far (`evaluateDailyModel`), plus an optional gram cap.
+ */
+export interface MasterRows {
+  energyCuts: readonly EnergyCut[];
+  maxMassG?: number;
 }
 
 /** How the model is solved in one phase. */
@@ -27,6 +39,7 @@ export const yColumn = (item: number, k: number): string => `y${item}_${k}`;
 const zColumn = (need: number, alt: number): string => `z${need}_${alt}`;
 const wColumn = (group: number, alt: number): string => `w${group}_${alt}`;
 const nColumn = (group: number, sky: number, day: number): string => `n${group}_${sky}_${day}`;
+const earlyColumn = (sky: number, day: number): string => `e${sky}_${day}`;
 const marginColumn = 'm';
 
 /** Scale factors: energies are divided by `energyWh`, grams by `massG`, so coefficients sit near 1–100. */
@@ -42,7 +55,11 @@ export interface ModelScale {
 export function modelScale(pre: PresolvedProblem): ModelScale {
   const c = pre.problem.coefficients;
   let energy = 0;
-  for (const row of c.demandWh) energy = Math.max(energy, row.reduce((a, b) => a + b, 0));
+  for (const row of c.demandWh)
+    energy = Math.max(
+      energy,
+      row.reduce((a, b) => a + b, 0),
+    );
   for (const it of pre.items) {
     if (it.store) energy = Math.max(energy, it.store.usableWh);
     if (it.panel) for (const row of it.panel.harvestWh) for (const v of row) energy = Math.max(energy, v);
@@ -76,7 +93,13 @@ function cumulative(row: readonly number[]): number[] {
  * (H. P. Williams, Model Building in Mathematical Programming, 5th ed., Wiley 2013, ch. 9).
  * @example buildDailyModel(pre, [], { phase: 'min-grams' }).sense // 'min'
  */
-export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], phase: ModelPhase, scale = modelScale(pre)): LinearModel {
+export function buildDailyModel(
+  pre: PresolvedProblem,
+  cuts: readonly KitCut[],
+  phase: ModelPhase,
+  scale = modelScale(pre),
+  master?: MasterRows,
+): LinearModel {
   const c = pre.problem.coefficients;
   const skyCount = c.skyIds.length;
   const dayCount = c.dayCount;
@@ -95,7 +118,11 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
       binaries.add(yColumn(i, k));
     }
     if (it.candidate.ownedCount >= 2) {
-      rows.push({ name: `one${i}`, terms: range(1, it.candidate.ownedCount).map((k) => [yColumn(i, k), 1] as const), upper: 1 });
+      rows.push({
+        name: `one${i}`,
+        terms: range(1, it.candidate.ownedCount).map((k) => [yColumn(i, k), 1] as const),
+        upper: 1,
+      });
     }
   });
   /** Terms for Σ_{k≥from} y_{i,k} (presence of at least `from` units), times `factor`. */
@@ -103,13 +130,16 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
     range(Math.max(1, from), pre.items[i]?.candidate.ownedCount ?? 0).map((k) => [yColumn(i, k), factor] as const);
   /** Terms for factor × n_i. */
   const countTerms = (i: number, factor: number): (readonly [string, number])[] =>
-    factor === 0 ? [] : range(1, pre.items[i]?.candidate.ownedCount ?? 0).map((k) => [yColumn(i, k), factor * k] as const);
+    factor === 0
+      ? []
+      : range(1, pre.items[i]?.candidate.ownedCount ?? 0).map((k) => [yColumn(i, k), factor * k] as const);
 
   // Paths for devices.
   pre.needs.forEach((need, d) => {
     need.alternatives.forEach((alt, a) => {
       columns.push(zColumn(d, a));
-      for (const [item, n] of alt) rows.push({ name: `zp${d}_${a}_${item}`, terms: [[zColumn(d, a), 1], ...atLeast(item, n, -1)], upper: 0 });
+      for (const [item, n] of alt)
+        rows.push({ name: `zp${d}_${a}_${item}`, terms: [[zColumn(d, a), 1], ...atLeast(item, n, -1)], upper: 0 });
     });
     rows.push({ name: `need${d}`, terms: need.alternatives.map((_, a) => [zColumn(d, a), 1] as const), lower: 1 });
   });
@@ -118,11 +148,15 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
     g.requiresAnyOf.forEach((alt, a) => {
       columns.push(wColumn(gi, a));
       upperBounds[wColumn(gi, a)] = 1;
-      for (const [item, n] of alt) rows.push({ name: `wp${gi}_${a}_${item}`, terms: [[wColumn(gi, a), 1], ...atLeast(item, n, -1)], upper: 0 });
+      for (const [item, n] of alt)
+        rows.push({ name: `wp${gi}_${a}_${item}`, terms: [[wColumn(gi, a), 1], ...atLeast(item, n, -1)], upper: 0 });
     });
   });
 
-  const eta = pre.bestChargeEfficiency;
+  const boundsOf = dayBoundsOf(pre);
+  /** Terms −e·v·n of a bound vector (for "harvest − bound ≤ 0" rows). */
+  const negTerms = (v: BoundVector): (readonly [string, number])[] =>
+    pre.items.flatMap((_, i) => countTerms(i, -(v[i] ?? 0) * e));
   const withMargin = phase.phase === 'max-margin';
   if (withMargin) {
     columns.push(marginColumn);
@@ -130,43 +164,92 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
     upperBounds[marginColumn] = Math.max(0, (1 - c.reserveShare) * ownedCapacityWh * e);
     objective[marginColumn] = 1;
   }
-  const capacityTerms = pre.items.flatMap((it, i) => (it.store ? countTerms(i, (1 - c.reserveShare) * it.store.usableWh * e) : []));
+  const capacityTerms = pre.items.flatMap((it, i) =>
+    it.store ? countTerms(i, (1 - c.reserveShare) * it.store.usableWh * e) : [],
+  );
 
-  for (let s = 0; s < skyCount; s++) {
+  // The master problem carries the energy cuts found so far instead of the sky-day rows (see `MasterRows`).
+  for (let s = 0; s < (master ? 0 : skyCount); s++) {
     const demand = c.demandWh[s] ?? [];
     const cumDemand = cumulative(demand);
     const harvested: string[] = [];
     for (let t = 0; t < dayCount; t++) {
       const dayColumns: string[] = [];
+      const bounds = boundsOf(s, t);
       pre.groups.forEach((g, gi) => {
-        const harvestTerms = g.panelIndices.flatMap((p) => countTerms(p, eta * (pre.items[p]?.panel?.harvestWh[s]?.[t] ?? 0) * e));
-        if (harvestTerms.length === 0 || (g.hasRequirement && g.requiresAnyOf.length === 0)) return;
+        const harvest = bounds.groupHarvest[gi];
+        if (!harvest || (g.hasRequirement && g.requiresAnyOf.length === 0)) return;
         const col = nColumn(gi, s, t);
         columns.push(col);
         dayColumns.push(col);
-        rows.push({ name: `hv${gi}_${s}_${t}`, terms: [[col, 1], ...harvestTerms.map(([k, v]) => [k, -v] as const)], upper: 0 });
+        rows.push({ name: `hv${gi}_${s}_${t}`, terms: [[col, 1], ...negTerms(harvest)], upper: 0 });
         if (g.hasRequirement) {
-          // The most this group can store that day: every panel owned, packed.
-          const bigM = g.panelIndices.reduce((sum, p) => sum + eta * (pre.items[p]?.panel?.harvestWh[s]?.[t] ?? 0) * e * (pre.items[p]?.candidate.ownedCount ?? 0), 0);
-          rows.push({ name: `hg${gi}_${s}_${t}`, terms: [[col, 1], ...g.requiresAnyOf.map((_, a) => [wColumn(gi, a), -bigM] as const)], upper: 0 });
+          rows.push({
+            name: `hg${gi}_${s}_${t}`,
+            terms: [
+              [col, 1],
+              ...g.requiresAnyOf.map((_, a) => [wColumn(gi, a), -groupBigM(pre, harvest) * e] as const),
+            ],
+            upper: 0,
+          });
         }
       });
       if (dayColumns.length > 0) {
-        const acceptTerms = pre.items.flatMap((it, b) => (it.store ? countTerms(b, -(it.store.chargeEfficiency * (it.store.acceptWh[s]?.[t] ?? 0)) * e) : []));
-        rows.push({ name: `ac${s}_${t}`, terms: [...dayColumns.map((col) => [col, 1] as const), ...acceptTerms], upper: 0 });
+        const dayTerms = dayColumns.map((col) => [col, 1] as const);
+        rows.push({ name: `ac${s}_${t}`, terms: [...dayTerms, ...negTerms(bounds.accept)], upper: 0 });
+        bounds.steps.forEach((v, j) =>
+          rows.push({ name: `st${s}_${t}_${j}`, terms: [...dayTerms, ...negTerms(v)], upper: 0 }),
+        );
+        if (bounds.split) {
+          // E: the day's stored harvest before its first top-up; it must fit in the room left the day before.
+          const early = earlyColumn(s, t);
+          columns.push(early);
+          bounds.split.early.forEach((v, j) =>
+            rows.push({ name: `eb${s}_${t}_${j}`, terms: [[early, 1], ...negTerms(v)], upper: 0 }),
+          );
+          bounds.split.late.forEach((v, j) =>
+            rows.push({ name: `lb${s}_${t}_${j}`, terms: [...dayTerms, [early, -1], ...negTerms(v)], upper: 0 }),
+          );
+          rows.push({ name: `el${s}_${t}`, terms: [...dayTerms, [early, -1]], lower: 0 });
+          rows.push({
+            name: `er${s}_${t}`,
+            terms: [...harvested.map((col) => [col, 1] as const), [early, 1]],
+            upper: (t > 0 ? (cumDemand[t - 1] ?? 0) : 0) * e,
+          });
+        }
         harvested.push(...dayColumns);
       }
       const roomWh = timing === 'overlapping' ? (cumDemand[t] ?? 0) : t > 0 ? (cumDemand[t - 1] ?? 0) : 0;
-      if (harvested.length > 0) rows.push({ name: `rm${s}_${t}`, terms: harvested.map((col) => [col, 1] as const), upper: roomWh * e });
+      if (harvested.length > 0)
+        rows.push({ name: `rm${s}_${t}`, terms: harvested.map((col) => [col, 1] as const), upper: roomWh * e });
       if ((demand[t] ?? 0) > 0) {
         rows.push({
           name: `rs${s}_${t}`,
-          terms: [...capacityTerms, ...harvested.map((col) => [col, 1] as const), ...(withMargin ? [[marginColumn, -1] as const] : [])],
+          terms: [
+            ...capacityTerms,
+            ...harvested.map((col) => [col, 1] as const),
+            ...(withMargin ? [[marginColumn, -1] as const] : []),
+          ],
           lower: (cumDemand[t] ?? 0) * e,
         });
       }
     }
   }
+
+  master?.energyCuts.forEach((cut, ci) => {
+    const terms = pre.items.flatMap((_, i) => countTerms(i, (cut.itemWh[i] ?? 0) * e));
+    pre.groups.forEach((g, gi) => {
+      const wh = cut.groupWh[gi] ?? 0;
+      if (wh !== 0) g.requiresAnyOf.forEach((_, a) => terms.push([wColumn(gi, a), wh * e]));
+    });
+    rows.push({ name: `ec${ci}`, terms, lower: cut.lowerWh * e });
+  });
+  if (master?.maxMassG !== undefined)
+    rows.push({
+      name: 'gramcap',
+      terms: pre.items.flatMap((it, i) => countTerms(i, it.candidate.massG / scale.massG)),
+      upper: (master.maxMassG + 0.5) / scale.massG,
+    });
 
   // A device with no usable path: no kit is feasible.
   if (pre.missingNeeds.length > 0) rows.push({ name: 'missing', terms: [], lower: 1 });
@@ -180,10 +263,27 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
     if (cut.kind === 'no-larger-than') {
       const terms = pre.items.flatMap((it, i) => atLeast(i, (cut.counts.get(it.candidate.itemId) ?? 0) + 1));
       rows.push({ name: `cl${ci}`, terms, lower: 1 });
+    } else if (cut.kind === 'not-exactly') {
+      // Σ_{i: K_i = 0} Σ_k y_{i,k} + Σ_{i: K_i > 0} (Σ_{k ≠ K_i} y_{i,k} − y_{i,K_i}) ≥ 1 − |{i: K_i > 0}|.
+      let packed = 0;
+      const terms: (readonly [string, number])[] = [];
+      pre.items.forEach((it, i) => {
+        const kept = Math.min(cut.counts.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount);
+        if (kept > 0) packed++;
+        for (let k = 1; k <= it.candidate.ownedCount; k++) terms.push([yColumn(i, k), k === kept ? -1 : 1]);
+      });
+      rows.push({ name: `cx${ci}`, terms, lower: 1 - packed });
     } else {
       const present = [...cut.counts].filter(([, n]) => n > 0);
       // A kit holding an item the model cannot pack can never be exceeded: nothing to exclude.
-      if (present.some(([id, n]) => !pre.itemIndexById.has(id) || n > (pre.items[pre.itemIndexById.get(id) as number]?.candidate.ownedCount ?? 0))) return;
+      if (
+        present.some(
+          ([id, n]) =>
+            !pre.itemIndexById.has(id) ||
+            n > (pre.items[pre.itemIndexById.get(id) as number]?.candidate.ownedCount ?? 0),
+        )
+      )
+        return;
       const terms = present.flatMap(([id, n]) => atLeast(pre.itemIndexById.get(id) as number, n));
       rows.push({ name: `cs${ci}`, terms, upper: present.length - 1 });
     }
@@ -191,14 +291,26 @@ export function buildDailyModel(pre: PresolvedProblem, cuts: readonly KitCut[], 
 
   const gramTerms = pre.items.flatMap((it, i) => countTerms(i, it.candidate.massG / scale.massG));
   if (phase.phase === 'min-grams') for (const [col, v] of gramTerms) objective[col] = v;
-  if (phase.phase === 'max-margin') rows.push({ name: 'grams', terms: gramTerms, upper: (phase.maxMassG + 0.5) / scale.massG });
+  if (phase.phase === 'max-margin')
+    rows.push({ name: 'grams', terms: gramTerms, upper: (phase.maxMassG + 0.5) / scale.massG });
   if (phase.phase === 'fixed-kit') {
     pre.items.forEach((it, i) => {
       const n = Math.min(phase.counts.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount);
-      for (let k = 1; k <= it.candidate.ownedCount; k++) rows.push({ name: `fx${i}_${k}`, terms: [[yColumn(i, k), 1]], lower: k === n ? 1 : 0, upper: k === n ? 1 : 0 });
+      for (let k = 1; k <= it.candidate.ownedCount; k++)
+        rows.push({ name: `fx${i}_${k}`, terms: [[yColumn(i, k), 1]], lower: k === n ? 1 : 0, upper: k === n ? 1 : 0 });
     });
   }
   return { sense: phase.phase === 'max-margin' ? 'max' : 'min', objective, columns, binaries, upperBounds, rows };
+}
+
+/**
+ * The most a group can store in a day with every panel owned packed: the big-M of "no controller, no harvest".
+ * @example groupBigM(pre, harvest) // Σ_p harvest[p] × owned_p
+ */
+export function groupBigM(pre: PresolvedProblem, harvest: BoundVector): number {
+  let wh = 0;
+  pre.items.forEach((it, i) => (wh += (harvest[i] ?? 0) * it.candidate.ownedCount));
+  return wh;
 }
 
 /** Integers from `from` to `to` inclusive. */
@@ -215,7 +327,8 @@ function range(from: number, to: number): number[] {
 export function kitFromValues(pre: PresolvedProblem, values: ReadonlyMap<string, number>): Map<string, number> {
   const counts = new Map<string, number>();
   pre.items.forEach((it, i) => {
-    for (let k = 1; k <= it.candidate.ownedCount; k++) if ((values.get(yColumn(i, k)) ?? 0) > 0.5) counts.set(it.candidate.itemId, k);
+    for (let k = 1; k <= it.candidate.ownedCount; k++)
+      if ((values.get(yColumn(i, k)) ?? 0) > 0.5) counts.set(it.candidate.itemId, k);
   });
   return counts;
 }

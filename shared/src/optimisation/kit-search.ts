@@ -1,4 +1,5 @@
 import { buildDailyModel, kitFromValues, modelScale, type KitCut, type ModelScale } from './daily-model.js';
+import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { solveWithJsLp } from './js-lp-backend.js';
 import { kitKey, kitMassG, kitNoLarger } from './kit.js';
 import type { LinearSolver } from './linear-model.js';
@@ -7,6 +8,8 @@ import type { JudgeVerdict, KitCounts, KitJudge, OptimisationProblem, OptimiseOp
 
 /** Default verify-and-repair rounds per search. */
 export const defaultMaxRounds = 400;
+/** Kits of equal grams the tie-break looks at beyond the first (each a master solve and a judge call). */
+export const tieBreakCandidates = 3;
 /** Default timeout of one MILP solve, ms. */
 export const defaultSolverTimeoutMs = 10_000;
 
@@ -30,7 +33,7 @@ export interface KitSearch {
   /** The judge, with a cache (kits are judged once). */
   judge(counts: KitCounts): JudgeVerdict;
   readonly now: () => number;
-  readonly stats: { rounds: number; judgedKits: number };
+  readonly stats: { rounds: number; judgedKits: number; dailyRejected: number };
   /** The earliest dry finding among rejected kits (for reports). */
   readonly lastRunsDry: RunsDry | undefined;
 }
@@ -49,7 +52,11 @@ const stillClock = (): number => 0;
  * judge is monotone), and the model is solved again. Only kits the judge accepted are returned.
  * @example createKitSearch(problem, judge).next(Infinity).kind // 'found'
  */
-export function createKitSearch(problem: OptimisationProblem, judgeKit: KitJudge, options: KitSearchOptions = {}): KitSearch {
+export function createKitSearch(
+  problem: OptimisationProblem,
+  judgeKit: KitJudge,
+  options: KitSearchOptions = {},
+): KitSearch {
   const presolved = presolve(problem);
   const scale: ModelScale = modelScale(presolved);
   const now = options.now ?? stillClock;
@@ -60,7 +67,8 @@ export function createKitSearch(problem: OptimisationProblem, judgeKit: KitJudge
   const cuts: KitCut[] = [];
   const cache = new Map<string, JudgeVerdict>();
   const rejected: KitCounts[] = [];
-  const stats = { rounds: 0, judgedKits: 0 };
+  const stats = { rounds: 0, judgedKits: 0, dailyRejected: 0 };
+  const energyCuts: EnergyCut[] = [];
   let lastRunsDry: RunsDry | undefined;
   let roundsThisSearch = 0;
 
@@ -74,12 +82,129 @@ export function createKitSearch(problem: OptimisationProblem, judgeKit: KitJudge
     return verdict;
   };
 
-  const reject = (counts: KitCounts, verdict: JudgeVerdict): void => {
-    rejected.push(counts);
-    cuts.push({ kind: 'no-larger-than', counts });
-    if (verdict.runsDry && (!lastRunsDry || verdict.runsDry.dayIndex < lastRunsDry.dayIndex)) lastRunsDry = verdict.runsDry;
+  /** The judge rejects a kit; the daily model's forward pass answers first when it already rejects it (a relaxation). */
+  const judgeRejects = (trial: KitCounts): boolean =>
+    evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 || !judge(trial).feasible;
+
+  // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.
+  const liftOrder = [...presolved.items].sort(
+    (a, b) => a.candidate.massG - b.candidate.massG || (a.candidate.itemId < b.candidate.itemId ? -1 : 1),
+  );
+
+  /**
+   * Grows a rejected kit to a maximal rejected kit: each item, lightest first, is raised to the most units that still
+   * leave the kit rejected. Every kit no larger than the grown kit is rejected too (the judge is monotone), so its cut
+   * removes a whole down-set at once instead of one kit plus every kit with a useless extra (a controller with no
+   * 12 V panel, a lead no path uses). Costs at most Σ owned judge calls, each far cheaper than a model solve.
+   * Source: lifting no-good cuts to maximal infeasible sets is the "combinatorial Benders" idea (G. Codato and
+   * M. Fischetti, Combinatorial Benders' cuts for mixed-integer linear programming, Operations Research 54(4), 2006).
+   */
+  const lift = (
+    counts: KitCounts,
+    deadlineMs: number,
+    rejects: (trial: KitCounts) => boolean = judgeRejects,
+  ): Map<string, number> => {
+    const grown = new Map(counts);
+    for (const it of liftOrder) {
+      if (now() >= deadlineMs) break;
+      const id = it.candidate.itemId;
+      const current = grown.get(id) ?? 0;
+      for (let k = it.candidate.ownedCount; k > current; k--) {
+        const trial = new Map(grown);
+        trial.set(id, k);
+        if (rejects(trial)) {
+          grown.set(id, k);
+          break;
+        }
+      }
+    }
+    return grown;
   };
 
+  const reject = (counts: KitCounts, verdict: JudgeVerdict, deadlineMs: number): void => {
+    const grown = lift(counts, deadlineMs);
+    rejected.push(grown);
+    cuts.push({ kind: 'no-larger-than', counts: grown });
+    if (verdict.runsDry && (!lastRunsDry || verdict.runsDry.dayIndex < lastRunsDry.dayIndex))
+      lastRunsDry = verdict.runsDry;
+  };
+
+  /** Whether the daily model rejects a kit, adding its feasibility cuts to the master when it does. */
+  const dailyRejects = (counts: KitCounts): boolean => {
+    const evaluation = evaluateDailyModel(presolved, counts);
+    if (evaluation.cuts.length === 0) return false;
+    stats.dailyRejected++;
+    energyCuts.push(...evaluation.cuts);
+    {
+      // The cut at a maximal short kit (grown from this one) holds the master off a larger region near the boundary.
+      const grown = lift(
+        counts,
+        Infinity,
+        (trial) => evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0,
+      );
+      energyCuts.push(...evaluateDailyModel(presolved, grown).cuts);
+    }
+    // A cut the kit breaks only by float noise could let the master propose it again: exclude its down-set as well.
+    if (!evaluation.cuts.some((cut) => clearlyBroken(presolved, cut, counts))) {
+      const grown = lift(
+        counts,
+        Infinity,
+        (trial) => evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0,
+      );
+      rejected.push(grown);
+      cuts.push({ kind: 'no-larger-than', counts: grown });
+    }
+    return true;
+  };
+
+  /** The lightest kit the master allows (with `extra` cuts and a gram cap for the tie-break). */
+  const propose = (timeoutMs: number, extra: readonly KitCut[] = [], maxMassG?: number) =>
+    solve(
+      buildDailyModel(presolved, [...cuts, ...extra], { phase: 'min-grams' }, scale, {
+        energyCuts,
+        ...(maxMassG !== undefined ? { maxMassG } : {}),
+      }),
+      { timeoutMs, now },
+    );
+
+  /**
+   * Among kits of the same grams as `found`, the one the judge gives the most worst-day margin: a few more master
+   * solves with the kits seen so far excluded and the grams capped.
+   */
+  const tieBreakAmong = (
+    found: Map<string, number>,
+    massG: number,
+    verdict: JudgeVerdict,
+    deadlineMs: number,
+  ): { counts: Map<string, number>; verdict: JudgeVerdict } => {
+    let best = { counts: found, verdict };
+    const seen: KitCut[] = [{ kind: 'not-exactly', counts: found }];
+    for (let k = 0; k < tieBreakCandidates; k++) {
+      const left = Math.min(solverTimeoutMs, deadlineMs - now());
+      if (left <= 0) break;
+      const answer = propose(left, seen, massG);
+      if (answer.status !== 'optimal') break;
+      const tied = kitFromValues(presolved, answer.values);
+      if (kitMassG(tied, problem.candidates) !== massG) break;
+      seen.push({ kind: 'not-exactly', counts: tied });
+      if (dailyRejects(tied)) continue;
+      const tiedVerdict = judge(tied);
+      if (!tiedVerdict.feasible) {
+        reject(tied, tiedVerdict, deadlineMs);
+        continue;
+      }
+      if ((tiedVerdict.margin ?? -Infinity) > (best.verdict.margin ?? -Infinity))
+        best = { counts: tied, verdict: tiedVerdict };
+    }
+    return best;
+  };
+
+  /**
+   * The decomposed search: the master (counts, paths, cuts, no energy rows) proposes the lightest kit; the daily
+   * model's forward pass checks it and, when it runs short, adds its Benders cuts; a kit that passes goes to the judge,
+   * whose rejection is cut off with its lifted down-set. The master's optimum is a lower bound on grams, so the first
+   * kit the judge accepts is the lightest.
+   */
   const next = (deadlineMs: number): SearchStep => {
     let lowerBoundG = 0;
     roundsThisSearch = 0;
@@ -90,30 +215,25 @@ export function createKitSearch(problem: OptimisationProblem, judgeKit: KitJudge
       const timeoutMs = Math.min(solverTimeoutMs, remainingMs);
       roundsThisSearch++;
       stats.rounds++;
-      const first = solve(buildDailyModel(presolved, cuts, { phase: 'min-grams' }, scale), { timeoutMs, now });
+      const first = propose(timeoutMs);
       if (first.status === 'infeasible') return { kind: 'exhausted' };
-      if (first.status === 'failed') return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: first.reason };
-      let counts = kitFromValues(presolved, first.values);
+      if (first.status === 'failed')
+        return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: first.reason };
+      const counts = kitFromValues(presolved, first.values);
       const massG = kitMassG(counts, problem.candidates);
-      let proven = first.proven;
+      const proven = first.proven;
       if (proven) lowerBoundG = massG;
-      if (tieBreak) {
-        const left = Math.min(solverTimeoutMs, deadlineMs - now());
-        if (left > 0) {
-          const second = solve(buildDailyModel(presolved, cuts, { phase: 'max-margin', maxMassG: massG }, scale), { timeoutMs: left, now });
-          if (second.status === 'optimal') {
-            const tied = kitFromValues(presolved, second.values);
-            // Keep the tie-break only if it truly weighs the same (the grams row has half a gram of slack).
-            if (kitMassG(tied, problem.candidates) === massG) counts = tied;
-            proven = proven && second.proven;
-          }
-        }
-      }
       // A kit no larger than one already rejected is cut off by the model; meeting one means the solver erred.
-      if (rejected.some((r) => kitNoLarger(counts, r))) return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
+      if (rejected.some((r) => kitNoLarger(counts, r)))
+        return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
+      if (dailyRejects(counts)) continue;
       const verdict = judge(counts);
-      if (verdict.feasible) return { kind: 'found', counts, massG, verdict, proven };
-      reject(counts, verdict);
+      if (!verdict.feasible) {
+        reject(counts, verdict, deadlineMs);
+        continue;
+      }
+      const chosen = tieBreak ? tieBreakAmong(counts, massG, verdict, deadlineMs) : { counts, verdict };
+      return { kind: 'found', counts: chosen.counts, massG, verdict: chosen.verdict, proven };
     }
   };
 

@@ -69,7 +69,8 @@ function assertGrid(name: string, grid: readonly (readonly number[])[], skyCount
   if (grid.length !== skyCount) throw new Error(`${name}: expected ${skyCount} skies, got ${grid.length}`);
   for (const row of grid) {
     if (row.length !== dayCount) throw new Error(`${name}: expected ${dayCount} days, got ${row.length}`);
-    for (const v of row) if (!Number.isFinite(v) || v < 0) throw new Error(`${name}: every value must be a finite number ≥ 0`);
+    for (const v of row)
+      if (!Number.isFinite(v) || v < 0) throw new Error(`${name}: every value must be a finite number ≥ 0`);
   }
 }
 
@@ -81,21 +82,34 @@ export function validateProblem(problem: OptimisationProblem): void {
   const c = problem.coefficients;
   const skyCount = c.skyIds.length;
   if (skyCount < 1) throw new Error('coefficients: at least one sky');
-  if (!Number.isInteger(c.dayCount) || c.dayCount < 1) throw new Error('coefficients: dayCount must be a whole number ≥ 1');
+  if (!Number.isInteger(c.dayCount) || c.dayCount < 1)
+    throw new Error('coefficients: dayCount must be a whole number ≥ 1');
   if (!(c.reserveShare >= 0 && c.reserveShare < 1)) throw new Error('coefficients: reserveShare must be in [0, 1)');
   assertGrid('demandWh', c.demandWh, skyCount, c.dayCount);
   const ids = new Set<string>();
   for (const cand of problem.candidates) {
     if (ids.has(cand.itemId)) throw new Error(`candidates: duplicate item id ${cand.itemId}`);
     ids.add(cand.itemId);
-    if (!Number.isInteger(cand.massG) || cand.massG < 0) throw new Error(`candidates: ${cand.itemId} massG must be a whole number ≥ 0`);
-    if (!Number.isInteger(cand.ownedCount) || cand.ownedCount < 0) throw new Error(`candidates: ${cand.itemId} ownedCount must be a whole number ≥ 0`);
+    if (!Number.isInteger(cand.massG) || cand.massG < 0)
+      throw new Error(`candidates: ${cand.itemId} massG must be a whole number ≥ 0`);
+    if (!Number.isInteger(cand.ownedCount) || cand.ownedCount < 0)
+      throw new Error(`candidates: ${cand.itemId} ownedCount must be a whole number ≥ 0`);
   }
   for (const p of c.panels) assertGrid(`panel ${p.itemId} harvestWh`, p.harvestWh, skyCount, c.dayCount);
   for (const s of c.stores) {
     assertGrid(`store ${s.itemId} acceptWh`, s.acceptWh, skyCount, c.dayCount);
     if (!(s.usableWh >= 0) || !Number.isFinite(s.usableWh)) throw new Error(`store ${s.itemId}: usableWh must be ≥ 0`);
-    if (!(s.chargeEfficiency >= 0 && s.chargeEfficiency <= 1)) throw new Error(`store ${s.itemId}: chargeEfficiency must be in [0, 1]`);
+    if (!(s.chargeEfficiency >= 0 && s.chargeEfficiency <= 1))
+      throw new Error(`store ${s.itemId}: chargeEfficiency must be in [0, 1]`);
+  }
+  if (c.dayFirstStep) {
+    const steps = c.dayFirstStep[c.dayCount];
+    if (c.dayFirstStep.length !== c.dayCount + 1 || steps === undefined)
+      throw new Error('coefficients: dayFirstStep needs dayCount + 1 entries');
+    for (const p of c.panels)
+      if (p.harvestWhByStep) assertGrid(`panel ${p.itemId} harvestWhByStep`, p.harvestWhByStep, skyCount, steps);
+    for (const s of c.stores)
+      if (s.acceptWhByStep) assertGrid(`store ${s.itemId} acceptWhByStep`, s.acceptWhByStep, skyCount, steps);
   }
   if (problem.gramLimitG !== undefined && !(problem.gramLimitG >= 0)) throw new Error('gramLimitG must be ≥ 0');
 }
@@ -131,7 +145,9 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
   }
 
   const usableAlternatives = (alternatives: readonly PathAlternative[]): PathAlternative[] =>
-    alternatives.filter((a) => [...countIds(a.itemIds)].every(([id, n]) => alive.has(id) && (candidateById.get(id)?.ownedCount ?? 0) >= n));
+    alternatives.filter((a) =>
+      [...countIds(a.itemIds)].every(([id, n]) => alive.has(id) && (candidateById.get(id)?.ownedCount ?? 0) >= n),
+    );
 
   const groupIdOf = (p: PanelCoefficients): string => p.groupId ?? '';
   let changed = true;
@@ -152,12 +168,15 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
       const s = storeById.get(id);
       if (s && s.usableWh > 0) role.add(id);
     }
-    const groupsWithPanels = new Set([...role].flatMap((id) => (panelById.has(id) ? [groupIdOf(panelById.get(id) as PanelCoefficients)] : [])));
+    const groupsWithPanels = new Set(
+      [...role].flatMap((id) => (panelById.has(id) ? [groupIdOf(panelById.get(id) as PanelCoefficients)] : [])),
+    );
     const pathSets = [
       ...c.needs.map((n) => n.alternatives),
       ...[...groupSpecs.values()].filter((g) => groupsWithPanels.has(g.groupId)).map((g) => g.requiresAnyOf ?? []),
     ];
-    for (const alternatives of pathSets) for (const a of usableAlternatives(alternatives)) for (const id of a.itemIds) role.add(id);
+    for (const alternatives of pathSets)
+      for (const a of usableAlternatives(alternatives)) for (const id of a.itemIds) role.add(id);
     for (const id of [...alive]) {
       if (!role.has(id)) {
         alive.delete(id);
@@ -192,7 +211,12 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
       const req = groupSpecs.get(g)?.requiresAnyOf ?? [];
       gi = groups.length;
       groupIndexById.set(g, gi);
-      groups.push({ groupId: g, panelIndices: [], requiresAnyOf: usableAlternatives(req).map(index), hasRequirement: req.length > 0 });
+      groups.push({
+        groupId: g,
+        panelIndices: [],
+        requiresAnyOf: usableAlternatives(req).map(index),
+        hasRequirement: req.length > 0,
+      });
     }
     groups[gi]?.panelIndices.push(i);
     item.groupIndex = gi;
@@ -236,8 +260,15 @@ function contains(big: Map<number, number>, small: IndexedAlternative): boolean 
   return small.every(([item, n]) => (big.get(item) ?? 0) >= n);
 }
 
-function findDominance(items: readonly ActiveItem[], groups: readonly ActiveGroup[], needs: readonly ActiveNeed[]): (readonly [number, number])[] {
-  const pathLists: IndexedAlternative[][] = [...needs.map((n) => n.alternatives), ...groups.map((g) => g.requiresAnyOf)];
+function findDominance(
+  items: readonly ActiveItem[],
+  groups: readonly ActiveGroup[],
+  needs: readonly ActiveNeed[],
+): (readonly [number, number])[] {
+  const pathLists: IndexedAlternative[][] = [
+    ...needs.map((n) => n.alternatives),
+    ...groups.map((g) => g.requiresAnyOf),
+  ];
   const attrs = items.map((it) => attributesMap(it.candidate.dominanceAttributes));
 
   /** -1: j does not dominate i; 0: equal in every number; 1: strictly better somewhere. */
@@ -259,9 +290,13 @@ function findDominance(items: readonly ActiveItem[], groups: readonly ActiveGrou
     }
     if (a.panel) {
       if (!b.panel || b.groupIndex !== a.groupIndex) return -1;
-      const r = gridCompare(b.panel.harvestWh, a.panel.harvestWh);
-      if (r < 0) return -1;
-      if (r > 0) strict = 1;
+      for (const r of [
+        gridCompare(b.panel.harvestWh, a.panel.harvestWh),
+        gridCompare(b.panel.harvestWhByStep ?? [], a.panel.harvestWhByStep ?? []),
+      ]) {
+        if (r < 0) return -1;
+        if (r > 0) strict = 1;
+      }
     }
     if (a.store) {
       if (!b.store) return -1;
@@ -269,6 +304,7 @@ function findDominance(items: readonly ActiveItem[], groups: readonly ActiveGrou
         compare(b.store.usableWh, a.store.usableWh, 'higher'),
         compare(b.store.chargeEfficiency, a.store.chargeEfficiency, 'higher'),
         gridCompare(b.store.acceptWh, a.store.acceptWh),
+        gridCompare(b.store.acceptWhByStep ?? [], a.store.acceptWhByStep ?? []),
       ]) {
         if (r < 0) return -1;
         if (r > 0) strict = 1;

@@ -97,7 +97,8 @@ function present(kit: KitCounts, alternative: readonly string[]): boolean {
   return [...need].every(([id, n]) => (kit.get(id) ?? 0) >= n);
 }
 
-const controllerIds = (world: SyntheticWorld): string[] => world.pathItems.filter((p) => p.kind === 'controller').map((p) => p.itemId);
+const controllerIds = (world: SyntheticWorld): string[] =>
+  world.pathItems.filter((p) => p.kind === 'controller').map((p) => p.itemId);
 
 /**
  * The judge: hour by hour in every sky, panels feed one pooled store (capacity Σ usable Wh, input limit Σ input W,
@@ -115,12 +116,17 @@ export function syntheticJudge(world: SyntheticWorld): KitJudge {
       if (d.demandWh <= 0) continue;
       let best = 0;
       for (const alt of d.alternatives) if (present(kit, alt)) best = Math.max(best, pathEfficiency(world, alt));
-      if (best === 0) return { feasible: false, runsDry: { dayIndex: 0, deviceId: d.deviceId, reason: 'no-charging-path' } };
+      if (best === 0)
+        return { feasible: false, runsDry: { dayIndex: 0, deviceId: d.deviceId, reason: 'no-charging-path' } };
       dailyDemandWh += (d.demandWh * world.demandScale) / best;
     }
-    const controllerEff = Math.max(0, ...controllers.filter((id) => (kit.get(id) ?? 0) > 0).map((id) => ctrlEff.get(id) ?? 0));
+    const controllerEff = Math.max(
+      0,
+      ...controllers.filter((id) => (kit.get(id) ?? 0) > 0).map((id) => ctrlEff.get(id) ?? 0),
+    );
     let peakW = 0;
-    for (const p of world.panels) peakW += (kit.get(p.itemId) ?? 0) * p.peakW * (p.group === '12v' ? controllerEff : 1) * world.sunScale;
+    for (const p of world.panels)
+      peakW += (kit.get(p.itemId) ?? 0) * p.peakW * (p.group === '12v' ? controllerEff : 1) * world.sunScale;
     let capacityWh = 0;
     let inputW = 0;
     for (const b of world.banks) {
@@ -161,7 +167,10 @@ export function syntheticJudge(world: SyntheticWorld): KitJudge {
  */
 export function syntheticProblem(world: SyntheticWorld, gramLimitG?: number): OptimisationProblem {
   const skies = world.skyShare.length;
-  const bestController = Math.max(0, ...world.pathItems.filter((p) => p.kind === 'controller' && p.ownedCount > 0).map((p) => p.efficiency));
+  const bestController = Math.max(
+    0,
+    ...world.pathItems.filter((p) => p.kind === 'controller' && p.ownedCount > 0).map((p) => p.efficiency),
+  );
   const sunHours = (t: number): number[] => {
     const out: number[] = [];
     for (let h = world.frozenUntilHour[t] ?? 0; h < syntheticHoursPerDay; h++) if (sunShare(h) > 0) out.push(h);
@@ -169,25 +178,48 @@ export function syntheticProblem(world: SyntheticWorld, gramLimitG?: number): Op
   };
   const grid = (f: (s: number, t: number) => number): number[][] =>
     Array.from({ length: skies }, (_, s) => Array.from({ length: world.dayCount }, (_, t) => f(s, t)));
+  /** `[sky][step]` over every hour of the trip. */
+  const steps = (f: (s: number, t: number, h: number) => number): number[][] =>
+    Array.from({ length: skies }, (_, s) =>
+      Array.from({ length: world.dayCount * syntheticHoursPerDay }, (_, i) =>
+        f(s, Math.floor(i / syntheticHoursPerDay), i % syntheticHoursPerDay),
+      ),
+    );
   let dailyDemandWh = 0;
   const needs: PathNeed[] = [];
   for (const d of world.devices) {
     if (d.demandWh <= 0) continue;
     const best = Math.max(0, ...d.alternatives.map((a) => pathEfficiency(world, a)));
     if (best > 0) dailyDemandWh += (d.demandWh * world.demandScale) / best;
-    needs.push({ needId: d.deviceId, label: d.deviceId, alternatives: d.alternatives.map((a): PathAlternative => ({ itemIds: a })) });
+    needs.push({
+      needId: d.deviceId,
+      label: d.deviceId,
+      alternatives: d.alternatives.map((a): PathAlternative => ({ itemIds: a })),
+    });
   }
   const candidates: KitCandidate[] = [
     ...world.panels.map((p): KitCandidate => ({
-      itemId: p.itemId, kind: 'panel', massG: p.massG, ownedCount: p.ownedCount,
+      itemId: p.itemId,
+      kind: 'panel',
+      massG: p.massG,
+      ownedCount: p.ownedCount,
       dominanceAttributes: [{ name: 'peakW', value: p.peakW, better: 'higher' }],
     })),
     ...world.banks.map((b): KitCandidate => ({
-      itemId: b.itemId, kind: 'bank', massG: b.massG, ownedCount: b.ownedCount,
-      dominanceAttributes: [{ name: 'usableWh', value: b.usableWh, better: 'higher' }, { name: 'inputW', value: b.inputW, better: 'higher' }],
+      itemId: b.itemId,
+      kind: 'bank',
+      massG: b.massG,
+      ownedCount: b.ownedCount,
+      dominanceAttributes: [
+        { name: 'usableWh', value: b.usableWh, better: 'higher' },
+        { name: 'inputW', value: b.inputW, better: 'higher' },
+      ],
     })),
     ...world.pathItems.map((p): KitCandidate => ({
-      itemId: p.itemId, kind: p.kind, massG: p.massG, ownedCount: p.ownedCount,
+      itemId: p.itemId,
+      kind: p.kind,
+      massG: p.massG,
+      ownedCount: p.ownedCount,
       dominanceAttributes: [{ name: 'efficiency', value: p.efficiency, better: 'higher' }],
     })),
   ];
@@ -200,16 +232,31 @@ export function syntheticProblem(world: SyntheticWorld, gramLimitG?: number): Op
       demandWh: grid(() => dailyDemandWh),
       reserveShare: world.reserveShare,
       timing: Math.min(...world.demandHours) >= sunsetHour ? 'after-harvest' : 'overlapping',
-      panels: world.panels.map((p) => ({
-        itemId: p.itemId,
-        groupId: p.group,
-        harvestWh: grid((s, t) => sunHours(t).reduce((sum, h) => sum + p.peakW * (p.group === '12v' ? bestController : 1) * world.sunScale * (world.skyShare[s]?.[t] ?? 0) * sunShare(h), 0)),
-      })),
+      dayFirstStep: Array.from({ length: world.dayCount + 1 }, (_, t) => t * syntheticHoursPerDay),
+      firstTopUpStep: Array.from(
+        { length: world.dayCount },
+        (_, t) => t * syntheticHoursPerDay + Math.min(...world.demandHours),
+      ),
+      panels: world.panels.map((p) => {
+        const wh = (s: number, t: number, h: number): number =>
+          p.peakW *
+          (p.group === '12v' ? bestController : 1) *
+          world.sunScale *
+          (world.skyShare[s]?.[t] ?? 0) *
+          sunShare(h);
+        return {
+          itemId: p.itemId,
+          groupId: p.group,
+          harvestWh: grid((s, t) => sunHours(t).reduce((sum, h) => sum + wh(s, t, h), 0)),
+          harvestWhByStep: steps((s, t, h) => (sunHours(t).includes(h) ? wh(s, t, h) : 0)),
+        };
+      }),
       stores: world.banks.map((b) => ({
         itemId: b.itemId,
         usableWh: b.usableWh,
         chargeEfficiency: world.chargeEfficiency,
         acceptWh: grid((_, t) => b.inputW * sunHours(t).length),
+        acceptWhByStep: steps((_, t, h) => (sunHours(t).includes(h) ? b.inputW : 0)),
       })),
       harvestGroups: [{ groupId: '12v', requiresAnyOf: controllerIds(world).map((id) => ({ itemIds: [id] })) }],
       needs,
@@ -244,16 +291,34 @@ export function randomSyntheticWorld(random: () => number, shape: SyntheticShape
   const pathCount = Math.max(0, types - bankCount - panelCount);
   const banks: SyntheticBank[] = Array.from({ length: bankCount }, (_, i) => {
     const usableWh = Math.round(between(random, 8, 45));
-    return { itemId: `bank-${i}`, massG: grams(random, 60, 110) + Math.round(usableWh * between(random, 3, 6)), ownedCount: owned(), usableWh, inputW: Math.round(between(random, 5, 18)) };
+    return {
+      itemId: `bank-${i}`,
+      massG: grams(random, 60, 110) + Math.round(usableWh * between(random, 3, 6)),
+      ownedCount: owned(),
+      usableWh,
+      inputW: Math.round(between(random, 5, 18)),
+    };
   });
   const pathItems: SyntheticPathItem[] = Array.from({ length: pathCount }, (_, i) => {
     const kind = pick(random, ['lead', 'lead', 'converter', 'controller'] as const);
-    return { itemId: `${kind}-${i}`, kind, massG: grams(random, 15, 120), ownedCount: owned(), efficiency: Math.round(between(random, 0.75, 0.97) * 100) / 100 };
+    return {
+      itemId: `${kind}-${i}`,
+      kind,
+      massG: grams(random, 15, 120),
+      ownedCount: owned(),
+      efficiency: Math.round(between(random, 0.75, 0.97) * 100) / 100,
+    };
   });
   const hasController = pathItems.some((p) => p.kind === 'controller');
   const panels: SyntheticPanel[] = Array.from({ length: panelCount }, (_, i) => {
     const peakW = Math.round(between(random, 2, 14));
-    return { itemId: `panel-${i}`, massG: grams(random, 80, 150) + peakW * grams(random, 15, 30), ownedCount: owned(), peakW, group: hasController && random() < 0.4 ? '12v' : 'usb' };
+    return {
+      itemId: `panel-${i}`,
+      massG: grams(random, 80, 150) + peakW * grams(random, 15, 30),
+      ownedCount: owned(),
+      peakW,
+      group: hasController && random() < 0.4 ? '12v' : 'usb',
+    };
   });
   const nonControllers = pathItems.filter((p) => p.kind !== 'controller').map((p) => p.itemId);
   const deviceCount = shape.deviceCount ?? 1 + Math.floor(random() * 2);

@@ -75,6 +75,12 @@ export interface PanelCoefficients {
   harvestWh: readonly (readonly number[])[];
   /** A `HarvestGroup.groupId`; default: a group with no requirement. */
   groupId?: string;
+  /**
+   * Optional `[sky][step]` detail of `harvestWh` (steps of every day in order, see `DailyCoefficients.dayFirstStep`):
+   * an upper bound on the Wh one unit delivers at a store input in that step. With the stores' step detail it lets the
+   * model see that hourly input limits cap a day's harvest (still a relaxation).
+   */
+  harvestWhByStep?: readonly (readonly number[])[];
 }
 
 /** Per unit of one store (bank or battery). */
@@ -89,6 +95,8 @@ export interface StoreCoefficients {
    * can feed it, frozen hours excluded).
    */
   acceptWh: readonly (readonly number[])[];
+  /** Optional `[sky][step]` detail of `acceptWh`: Wh one unit can take in that step (0 in frozen steps). */
+  acceptWhByStep?: readonly (readonly number[])[];
 }
 
 /**
@@ -121,6 +129,17 @@ export interface DailyCoefficients {
   needs: readonly PathNeed[];
   /** Default `overlapping`. */
   timing?: DayTiming;
+  /**
+   * With step detail on every panel and store: the first step of each day, plus the step count at the end
+   * (length `dayCount + 1`). Absent: the model uses daily totals only.
+   */
+  dayFirstStep?: readonly number[];
+  /**
+   * With step detail: per day, the first (absolute) step in which stores may give energy to devices (the camp
+   * window's start); the day's stored harvest before it must fit in the room left at the previous day's end, so a full
+   * bank spills the morning's sun. Every later step of the day counts as overlapping the top-ups.
+   */
+  firstTopUpStep?: readonly number[];
 }
 
 /** The problem: candidates, daily model, optional gram limit. */

@@ -1,0 +1,145 @@
+import type { PresolvedProblem } from './presolve.js';
+
+/**
+ * One upper bound on a sky-day's stored harvest, linear in the item counts: Σ_i coefficientWh[i] · n_i (Wh, already
+ * multiplied by the charge efficiency the bound assumes). Indexed by active item.
+ */
+export type BoundVector = Float64Array;
+
+/**
+ * Every bound on one sky-day's stored harvest N that the daily model uses, as vectors in the item counts, so the MILP
+ * builder and the direct evaluator read the same numbers.
+ */
+export interface DayBounds {
+  /** Per harvest group (index as `PresolvedProblem.groups`): η* Σ_{p∈g} h_{p,s,t} n_p; null when the group has no panel harvest that day. */
+  groupHarvest: (BoundVector | null)[];
+  /** Σ_b η_b acc_{b,s,t} n_b: what the stores can take in that day. */
+  accept: BoundVector;
+  /** Step threshold bounds (hourly input limits), each valid alone. */
+  steps: BoundVector[];
+  /** Bounds on the harvest before the day's first top-up (panels', stores'), and from it on; absent without the detail. */
+  split?: { early: BoundVector[]; late: BoundVector[] };
+}
+
+/** Most threshold rows per sky-day (the sunniest steps first; any subset of thresholds stays a relaxation). */
+export const maxStepBoundsPerDay = 12;
+
+function hasStepDetail(pre: PresolvedProblem): boolean {
+  const c = pre.problem.coefficients;
+  return (
+    !!c.dayFirstStep &&
+    pre.items.every((it) => (!it.panel || it.panel.harvestWhByStep) && (!it.store || it.store.acceptWhByStep))
+  );
+}
+
+/**
+ * A function giving the bounds of each sky-day of a presolved problem (memoised: each sky-day is built once).
+ *
+ * Step bounds: in each step the harvest into stores is at most min(P_h, I_h) with P_h = Σ_p x_{p,h} n_p (panels' output)
+ * and I_h = Σ_b a_{b,h} n_b (stores' input), so for ANY set S of the day's steps: harvest ≤ Σ_{h∉S} P_h + Σ_{h∈S} I_h,
+ * linear in the counts. S runs over the day's j sunniest steps (j = 1…), where input limits bind.
+ * Split bounds (with `firstTopUpStep`): the same panel and store sums over the steps before the first top-up and from it.
+ * @example dayBoundsOf(pre)(0, 0).accept.length // pre.items.length
+ */
+export function dayBoundsOf(pre: PresolvedProblem): (s: number, t: number) => DayBounds {
+  let hit = boundsCache.get(pre);
+  if (!hit) {
+    hit = buildDayBounds(pre);
+    boundsCache.set(pre, hit);
+  }
+  return hit;
+}
+
+/** One bounds function per presolved problem: every evaluation of a search reads the same memo. */
+const boundsCache = new WeakMap<PresolvedProblem, (s: number, t: number) => DayBounds>();
+
+function buildDayBounds(pre: PresolvedProblem): (s: number, t: number) => DayBounds {
+  const c = pre.problem.coefficients;
+  const n = pre.items.length;
+  const eta = pre.bestChargeEfficiency;
+  const detailed = hasStepDetail(pre);
+  const first = c.dayFirstStep;
+  const memo = new Map<number, DayBounds>();
+  const sumSteps = (row: readonly number[] | undefined, steps: Iterable<number>): number => {
+    let wh = 0;
+    for (const h of steps) wh += row?.[h] ?? 0;
+    return wh;
+  };
+  const range = (from: number, to: number): number[] =>
+    Array.from({ length: Math.max(0, to - from) }, (_, k) => from + k);
+  /** η* × (panels' Wh over `panelSteps` + stores' Wh over `storeSteps`) per unit. */
+  const vector = (s: number, panelSteps: readonly number[], storeSteps: readonly number[]): BoundVector => {
+    const v = new Float64Array(n);
+    pre.items.forEach((it, i) => {
+      if (it.panel) v[i] = (v[i] ?? 0) + eta * sumSteps(it.panel.harvestWhByStep?.[s], panelSteps);
+      if (it.store) v[i] = (v[i] ?? 0) + eta * sumSteps(it.store.acceptWhByStep?.[s], storeSteps);
+    });
+    return v;
+  };
+
+  const build = (s: number, t: number): DayBounds => {
+    const groupHarvest = pre.groups.map((g) => {
+      const v = new Float64Array(n);
+      let any = false;
+      for (const p of g.panelIndices) {
+        const wh = eta * (pre.items[p]?.panel?.harvestWh[s]?.[t] ?? 0);
+        if (wh > 0) any = true;
+        v[p] = wh;
+      }
+      return any ? v : null;
+    });
+    const accept = new Float64Array(n);
+    pre.items.forEach((it, b) => {
+      if (it.store) accept[b] = it.store.chargeEfficiency * (it.store.acceptWh[s]?.[t] ?? 0);
+    });
+    const bounds: DayBounds = { groupHarvest, accept, steps: [] };
+    if (!detailed || !first) return bounds;
+    const from = first[t] ?? 0;
+    const to = first[t + 1] ?? from;
+    const sunny: { h: number; potentialWh: number }[] = [];
+    for (let h = from; h < to; h++) {
+      let potentialWh = 0;
+      for (const it of pre.items)
+        if (it.panel) potentialWh += (it.panel.harvestWhByStep?.[s]?.[h] ?? 0) * it.candidate.ownedCount;
+      if (potentialWh > 0) sunny.push({ h, potentialWh });
+    }
+    sunny.sort((a, b) => b.potentialWh - a.potentialWh || a.h - b.h);
+    const stride = Math.max(1, Math.ceil(sunny.length / maxStepBoundsPerDay));
+    for (let j = 1; j < sunny.length; j += stride) {
+      const inS = sunny.slice(0, j).map((x) => x.h);
+      const outS = sunny.slice(j).map((x) => x.h);
+      bounds.steps.push(vector(s, outS, inS));
+    }
+    const topUp = c.firstTopUpStep;
+    if (topUp) {
+      const cut = Math.min(to, Math.max(from, topUp[t] ?? to));
+      const early = range(from, cut);
+      const late = range(cut, to);
+      bounds.split = {
+        early: [vector(s, early, []), vector(s, [], early)],
+        late: [vector(s, late, []), vector(s, [], late)],
+      };
+    }
+    return bounds;
+  };
+
+  return (s, t) => {
+    const key = s * (c.dayCount + 1) + t;
+    let hit = memo.get(key);
+    if (!hit) {
+      hit = build(s, t);
+      memo.set(key, hit);
+    }
+    return hit;
+  };
+}
+
+/**
+ * Σ_i v[i] · n_i for a kit's counts by active index.
+ * @example dot(new Float64Array([2, 3]), [1, 2]) // 8
+ */
+export function dot(v: BoundVector, counts: ArrayLike<number>): number {
+  let sum = 0;
+  for (let i = 0; i < v.length; i++) sum += (v[i] ?? 0) * (counts[i] ?? 0);
+  return sum;
+}

@@ -1,0 +1,227 @@
+import { dayBoundsOf, dot, type BoundVector } from './day-bounds.js';
+import { groupBigM } from './daily-model.js';
+import type { PresolvedProblem } from './presolve.js';
+import type { EnergyShortfall, KitCounts } from './types.js';
+
+/** Wh a reserve row may miss by and still count as met (float noise of the forward pass). */
+const reserveToleranceWh = 1e-9;
+
+/**
+ * A linear cut on kits from the daily model: Σ_i itemWh[i]·n_i + Σ_g groupWh[g]·W_g ≥ lowerWh, where n_i is the count
+ * of active item i and W_g the number of a harvest group's requirement alternatives switched on. Valid for EVERY kit
+ * the daily model accepts, so adding it never cuts off a kit the judge could accept.
+ */
+export interface EnergyCut {
+  skyIndex: number;
+  dayIndex: number;
+  itemWh: Float64Array;
+  groupWh: Float64Array;
+  lowerWh: number;
+}
+
+/** The daily model's answer for one fixed kit, with a cut per sky that runs short. */
+export interface DailyEvaluation {
+  /** Per sky, the first day that ends below the reserve and by how many Wh. */
+  shortfalls: EnergyShortfall[];
+  /** Smallest end-of-day Wh above the reserve over every sky-day with demand (negative when short). */
+  worstMarginWh: number;
+  /** One cut per short sky, at its first short day; the kit breaks each. */
+  cuts: EnergyCut[];
+}
+
+/** Which bound was smallest on a day: the panels' harvest, a linear bound, the morning/afternoon split, or the room. */
+type Pick =
+  | { kind: 'harvest' }
+  | { kind: 'vector'; v: BoundVector }
+  | { kind: 'split'; early: BoundVector | null; roomWh: number; late: BoundVector }
+  | { kind: 'room'; capWh: number };
+
+/** An upper bound on the cumulative stored harvest, valid for every kit: a constant plus linear terms. */
+interface CumulativeBound {
+  constWh: number;
+  itemWh: Float64Array;
+  groupWh: Float64Array;
+}
+
+const zeroBound = (items: number, groups: number, constWh = 0): CumulativeBound => ({
+  constWh,
+  itemWh: new Float64Array(items),
+  groupWh: new Float64Array(groups),
+});
+
+function plus(base: CumulativeBound, item: BoundVector | null, groups?: Float64Array): CumulativeBound {
+  const itemWh = Float64Array.from(base.itemWh);
+  if (item) for (let i = 0; i < itemWh.length; i++) itemWh[i] = (itemWh[i] ?? 0) + (item[i] ?? 0);
+  const groupWh = Float64Array.from(base.groupWh);
+  if (groups) for (let g = 0; g < groupWh.length; g++) groupWh[g] = (groupWh[g] ?? 0) + (groups[g] ?? 0);
+  return { constWh: base.constWh, itemWh, groupWh };
+}
+
+/**
+ * Evaluates the daily model (the rows of `buildDailyModel`) for one fixed kit without a solver. With the kit fixed,
+ * storing as much as the rows allow each day is optimal, because every row caps the cumulative stored harvest from
+ * above and the reserve rows want it large; so a forward pass that takes each day's smallest bound gives the model's
+ * answer.
+ *
+ * When a sky runs short on day t, the pass also records WHICH bound was the smallest each day. Each bound holds for
+ * every kit (a room limit is a constant; a harvest, acceptance or step bound is linear in the counts), so chaining the
+ * chosen bounds gives an upper bound U_t(n) on the cumulative harvest of ANY kit, and the reserve row gives the cut
+ * (1 − r)·C(n) + U_t(n) ≥ D_{≤t}, which this kit breaks. It is the Benders feasibility cut of the daily model (the
+ * dual of the forward pass), found without solving an LP.
+ * Source: J. F. Benders, Partitioning procedures for solving mixed-variables programming problems, Numerische
+ * Mathematik 4 (1962); the forward-pass dual is ours.
+ * @example evaluateDailyModel(pre, kit).cuts.length // 0 when the kit passes the daily model
+ */
+export function evaluateDailyModel(
+  pre: PresolvedProblem,
+  kit: KitCounts,
+  options: { withCuts?: boolean } = {},
+): DailyEvaluation {
+  const c = pre.problem.coefficients;
+  const itemCount = pre.items.length;
+  const groupCount = pre.groups.length;
+  const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
+  // Kits hold few of the locker's items: dot products run over the packed ones only.
+  const packed = counts.flatMap((n, i) => (n > 0 ? [i] : []));
+  const value = (v: BoundVector): number => {
+    let sum = 0;
+    for (const i of packed) sum += (v[i] ?? 0) * (counts[i] ?? 0);
+    return sum;
+  };
+  const present = (alt: readonly (readonly [number, number])[]): boolean =>
+    alt.every(([i, n]) => (counts[i] ?? 0) >= n);
+  const groupOn = pre.groups.map((g) => !g.hasRequirement || g.requiresAnyOf.some(present));
+  const capacity = new Float64Array(itemCount);
+  pre.items.forEach((it, i) => {
+    if (it.store) capacity[i] = (1 - c.reserveShare) * it.store.usableWh;
+  });
+  const spareCapacityWh = value(capacity);
+  const timing = c.timing ?? 'overlapping';
+  const boundsOf = dayBoundsOf(pre);
+  const shortfalls: EnergyShortfall[] = [];
+  const cuts: EnergyCut[] = [];
+  let worstMarginWh = Infinity;
+
+  /** One sky's forward pass; with `track`, the chain of smallest bounds for the cut. Returns the cut when short. */
+  const runSky = (s: number, track: boolean): EnergyCut | null => {
+    const skyId = c.skyIds[s] ?? '';
+    const demand = c.demandWh[s] ?? [];
+    let cumDemandWh = 0;
+    let cumWh = 0;
+    let bound = zeroBound(itemCount, groupCount);
+    let short = false;
+    for (let t = 0; t < c.dayCount; t++) {
+      const previousDemandWh = cumDemandWh;
+      cumDemandWh += demand[t] ?? 0;
+      const b = boundsOf(s, t);
+      let anyColumn = false;
+      let harvestWh = 0;
+      pre.groups.forEach((g, gi) => {
+        const v = b.groupHarvest[gi];
+        if (!v || (g.hasRequirement && g.requiresAnyOf.length === 0)) return;
+        anyColumn = true;
+        if (groupOn[gi]) harvestWh += value(v);
+      });
+      if (anyColumn) {
+        // The day's stored harvest is the smallest of its bounds; `pick` names it for the cut.
+        let bestWh = harvestWh;
+        let pick: Pick = { kind: 'harvest' };
+        const consider = (wh: number, p: Pick): void => {
+          if (wh < bestWh) {
+            bestWh = wh;
+            pick = p;
+          }
+        };
+        consider(value(b.accept), { kind: 'vector', v: b.accept });
+        for (const v of b.steps) consider(value(v), { kind: 'vector', v });
+        if (b.split) {
+          const lateValues = b.split.late.map(value);
+          const late = b.split.late[argMin(lateValues)] as BoundVector;
+          const earlyValues = b.split.early.map(value);
+          const earlyIdx = argMin(earlyValues);
+          const earlyRoomWh = previousDemandWh - cumWh;
+          const earlyBoundWh = earlyValues[earlyIdx] ?? 0;
+          // When the room left the day before caps the morning: cum_t ≤ D_{<t} + late bound.
+          consider(Math.min(earlyBoundWh, earlyRoomWh) + Math.min(...lateValues), {
+            kind: 'split',
+            early: earlyBoundWh <= earlyRoomWh ? (b.split.early[earlyIdx] as BoundVector) : null,
+            roomWh: previousDemandWh,
+            late,
+          });
+        }
+        const roomCapWh = timing === 'overlapping' ? cumDemandWh : previousDemandWh;
+        consider(roomCapWh - cumWh, { kind: 'room', capWh: roomCapWh });
+        cumWh += Math.max(0, bestWh);
+        // Even a bound worth nothing for this kit must be chained: other kits may harvest that day.
+        if (track) bound = chain(bound, pick, b);
+      }
+      if ((demand[t] ?? 0) > 0) {
+        const marginWh = spareCapacityWh + cumWh - cumDemandWh;
+        if (!track) worstMarginWh = Math.min(worstMarginWh, marginWh);
+        if (marginWh < -reserveToleranceWh && !short) {
+          short = true;
+          if (track)
+            return {
+              skyIndex: s,
+              dayIndex: t,
+              itemWh: plus(bound, capacity).itemWh,
+              groupWh: bound.groupWh,
+              lowerWh: cumDemandWh - bound.constWh,
+            };
+          shortfalls.push({ skyId, dayIndex: t, shortWh: -marginWh });
+        }
+      }
+    }
+    return null;
+  };
+
+  /** The running bound after one day, from the bound that was smallest. */
+  const chain = (base: CumulativeBound, pick: Pick, b: ReturnType<typeof boundsOf>): CumulativeBound => {
+    if (pick.kind === 'room') return zeroBound(itemCount, groupCount, pick.capWh);
+    if (pick.kind === 'vector') return plus(base, pick.v);
+    if (pick.kind === 'split')
+      return pick.early
+        ? plus(plus(base, pick.early), pick.late)
+        : plus(zeroBound(itemCount, groupCount, pick.roomWh), pick.late);
+    const items = new Float64Array(itemCount);
+    const groups = new Float64Array(groupCount);
+    pre.groups.forEach((g, gi) => {
+      const v = b.groupHarvest[gi];
+      if (!v || (g.hasRequirement && g.requiresAnyOf.length === 0)) return;
+      // Off for lack of a controller: the active bound is big-M × (alternatives switched on), zero for this kit.
+      if (groupOn[gi]) for (let i = 0; i < itemCount; i++) items[i] = (items[i] ?? 0) + (v[i] ?? 0);
+      else groups[gi] = groupBigM(pre, v);
+    });
+    return plus(base, items, groups);
+  };
+
+  for (let s = 0; s < c.skyIds.length; s++) {
+    runSky(s, false);
+  }
+  if (options.withCuts !== false) {
+    for (const short of shortfalls) {
+      const cut = runSky(c.skyIds.indexOf(short.skyId), true);
+      if (cut) cuts.push(cut);
+    }
+  }
+  return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
+}
+
+function argMin(values: readonly number[]): number {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if ((values[i] ?? Infinity) < (values[best] ?? Infinity)) best = i;
+  return best;
+}
+
+/**
+ * Whether a kit breaks a cut by more than float noise (1e-6 relative), so the master cannot propose it again.
+ * @example clearlyBroken(pre, evaluation.cuts[0], kit) // true
+ */
+export function clearlyBroken(pre: PresolvedProblem, cut: EnergyCut, kit: KitCounts): boolean {
+  const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
+  const on = pre.groups.map(
+    (g) => g.requiresAnyOf.filter((alt) => alt.every(([i, n]) => (counts[i] ?? 0) >= n)).length,
+  );
+  const lhsWh = dot(cut.itemWh, counts) + dot(cut.groupWh, on);
+  return cut.lowerWh - lhsWh > 1e-6 * Math.max(1, Math.abs(cut.lowerWh));
+}

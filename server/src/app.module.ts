@@ -17,6 +17,8 @@ import { type AuthConfig, type Env, appConfig, authConfig, databaseConfig, stora
 import { DatabaseModule } from './database/database.module';
 import type { Database } from './database/database.types';
 import { HealthModule } from './health/health.module';
+import { invitesConfig } from './invites/invites.config';
+import { InvitesModule } from './invites/invites.module';
 import { LockerFilesModule } from './locker-files/locker-files.module';
 import { LockerModule } from './locker/locker.module';
 import { mailConfig } from './mail/mail.config';
@@ -52,7 +54,7 @@ export class AppModule {
           cache: true,
           ignoreEnvFile: true,
           ignoreEnvVars: true,
-          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env), mailConfig(env)],
+          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env), mailConfig(env), invitesConfig(env)],
         }),
         ClockModule.forRoot(options.clock),
         DatabaseModule.forRoot({ database: options.database }),
@@ -77,6 +79,7 @@ export class AppModule {
         TripsModule,
         MailModule,
         OutboxModule,
+        InvitesModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

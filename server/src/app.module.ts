@@ -24,6 +24,8 @@ import { LockerModule } from './locker/locker.module';
 import { mailConfig } from './mail/mail.config';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { shareConfig } from './share/share.config';
+import { ShareModule } from './share/share.module';
 import { TripsModule } from './trips/trips.module';
 import { UsersModule } from './users/users.module';
 
@@ -54,7 +56,15 @@ export class AppModule {
           cache: true,
           ignoreEnvFile: true,
           ignoreEnvVars: true,
-          load: [appConfig(env), authConfig(env), databaseConfig(env), storageConfig(env), mailConfig(env), invitesConfig(env)],
+          load: [
+            appConfig(env),
+            authConfig(env),
+            databaseConfig(env),
+            storageConfig(env),
+            mailConfig(env),
+            invitesConfig(env),
+            shareConfig(env),
+          ],
         }),
         ClockModule.forRoot(options.clock),
         DatabaseModule.forRoot({ database: options.database }),
@@ -80,6 +90,7 @@ export class AppModule {
         MailModule,
         OutboxModule,
         InvitesModule,
+        ShareModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

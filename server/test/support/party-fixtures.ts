@@ -1,3 +1,4 @@
+import type { Provider } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Test } from '@nestjs/testing';
 import request from 'supertest';
@@ -56,16 +57,24 @@ export class FlakyTransport implements MailTransport {
   close(): void {}
 }
 
-/** The app with `MAIL_TRANSPORT` replaced (Test.createTestingModule), otherwise as {@link startTestApp}. */
-export async function startTestAppWithTransport(transport: MailTransport, env: Env = {}): Promise<TestApp> {
+/**
+ * The app through Test.createTestingModule with `MAIL_TRANSPORT` replaced (unless null) and extra root
+ * providers, otherwise as {@link startTestApp}.
+ */
+export async function startTestAppWithTransport(
+  transport: MailTransport | null,
+  env: Env = {},
+  providers: Provider[] = [],
+): Promise<TestApp> {
   const database = await createDatabase({ inMemory: true });
   const clock = new TestClock();
-  const moduleRef = await Test.createTestingModule({
+  const builder = Test.createTestingModule({
     imports: [AppModule.forRoot({ env: { ...testEnv, ...env }, database: database.db, clock, serveClient: false })],
-  })
-    .overrideProvider(MAIL_TRANSPORT)
-    .useValue(transport)
-    .compile();
+    providers,
+  });
+  const moduleRef = await (
+    transport ? builder.overrideProvider(MAIL_TRANSPORT).useValue(transport) : builder
+  ).compile();
   const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: false });
   configureApp(app);
   await app.init();

@@ -9,3 +9,4 @@ export * from './locker.js';
 export * from './locker-files.js';
 export * from './catalogue.js';
 export * from './trips.js';
+export * from './plans.js';

@@ -172,6 +172,7 @@ export function buildDailyModel(
   for (let s = 0; s < (master ? 0 : skyCount); s++) {
     const demand = c.demandWh[s] ?? [];
     const cumDemand = cumulative(demand);
+    const cumRoom = cumulative(c.roomDemandWh?.[s] ?? demand);
     const harvested: string[] = [];
     for (let t = 0; t < dayCount; t++) {
       const dayColumns: string[] = [];
@@ -214,12 +215,12 @@ export function buildDailyModel(
           rows.push({
             name: `er${s}_${t}`,
             terms: [...harvested.map((col) => [col, 1] as const), [early, 1]],
-            upper: (t > 0 ? (cumDemand[t - 1] ?? 0) : 0) * e,
+            upper: (t > 0 ? (cumRoom[t - 1] ?? 0) : 0) * e,
           });
         }
         harvested.push(...dayColumns);
       }
-      const roomWh = timing === 'overlapping' ? (cumDemand[t] ?? 0) : t > 0 ? (cumDemand[t - 1] ?? 0) : 0;
+      const roomWh = timing === 'overlapping' ? (cumRoom[t] ?? 0) : t > 0 ? (cumRoom[t - 1] ?? 0) : 0;
       if (harvested.length > 0)
         rows.push({ name: `rm${s}_${t}`, terms: harvested.map((col) => [col, 1] as const), upper: roomWh * e });
       if ((demand[t] ?? 0) > 0) {

@@ -106,13 +106,16 @@ export function evaluateDailyModel(
   const runSky = (s: number, track: boolean): EnergyCut | null => {
     const skyId = c.skyIds[s] ?? '';
     const demand = c.demandWh[s] ?? [];
+    const room = c.roomDemandWh?.[s] ?? demand;
     let cumDemandWh = 0;
+    let cumRoomWh = 0;
     let cumWh = 0;
     let bound = zeroBound(itemCount, groupCount);
     let short = false;
     for (let t = 0; t < c.dayCount; t++) {
-      const previousDemandWh = cumDemandWh;
+      const previousRoomWh = cumRoomWh;
       cumDemandWh += demand[t] ?? 0;
+      cumRoomWh += room[t] ?? 0;
       const b = boundsOf(s, t);
       let anyColumn = false;
       let harvestWh = 0;
@@ -139,17 +142,17 @@ export function evaluateDailyModel(
           const late = b.split.late[argMin(lateValues)] as BoundVector;
           const earlyValues = b.split.early.map(value);
           const earlyIdx = argMin(earlyValues);
-          const earlyRoomWh = previousDemandWh - cumWh;
+          const earlyRoomWh = previousRoomWh - cumWh;
           const earlyBoundWh = earlyValues[earlyIdx] ?? 0;
           // When the room left the day before caps the morning: cum_t ≤ D_{<t} + late bound.
           consider(Math.min(earlyBoundWh, earlyRoomWh) + Math.min(...lateValues), {
             kind: 'split',
             early: earlyBoundWh <= earlyRoomWh ? (b.split.early[earlyIdx] as BoundVector) : null,
-            roomWh: previousDemandWh,
+            roomWh: previousRoomWh,
             late,
           });
         }
-        const roomCapWh = timing === 'overlapping' ? cumDemandWh : previousDemandWh;
+        const roomCapWh = timing === 'overlapping' ? cumRoomWh : previousRoomWh;
         consider(roomCapWh - cumWh, { kind: 'room', capWh: roomCapWh });
         cumWh += Math.max(0, bestWh);
         // Even a bound worth nothing for this kit must be chained: other kits may harvest that day.

@@ -86,6 +86,7 @@ export function validateProblem(problem: OptimisationProblem): void {
     throw new Error('coefficients: dayCount must be a whole number ≥ 1');
   if (!(c.reserveShare >= 0 && c.reserveShare < 1)) throw new Error('coefficients: reserveShare must be in [0, 1)');
   assertGrid('demandWh', c.demandWh, skyCount, c.dayCount);
+  if (c.roomDemandWh) assertGrid('roomDemandWh', c.roomDemandWh, skyCount, c.dayCount);
   const ids = new Set<string>();
   for (const cand of problem.candidates) {
     if (ids.has(cand.itemId)) throw new Error(`candidates: duplicate item id ${cand.itemId}`);

@@ -121,6 +121,12 @@ export interface DailyCoefficients {
    * most favourable charging path's losses). Energy must leave stores by the end of that day.
    */
   demandWh: readonly (readonly number[])[];
+  /**
+   * Optional `[sky][day]`: the MOST Wh the devices could draw from stores that day (the worst path's losses, device
+   * batteries topped up to full), for the room rows: stores emptied faster have more room for harvest. Default
+   * `demandWh`. Using the least draw for the reserve rows and the most for the room rows keeps the model a relaxation.
+   */
+  roomDemandWh?: readonly (readonly number[])[];
   /** Share of every store never to go below, 0–1. */
   reserveShare: number;
   panels: readonly PanelCoefficients[];

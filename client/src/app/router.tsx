@@ -54,6 +54,9 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
             lazy: () => import('./routes/app/admin/catalogue').then(convert(queryClient)),
           },
           { path: paths.app.trips.path, lazy: () => import('./routes/app/trips').then(convert(queryClient)) },
+          { path: paths.app.newTrip.path, lazy: () => import('./routes/app/trip-new').then(convert(queryClient)) },
+          { path: paths.app.trip.path, lazy: () => import('./routes/app/trip-detail').then(convert(queryClient)) },
+          { path: paths.app.editTrip.path, lazy: () => import('./routes/app/trip-edit').then(convert(queryClient)) },
           {
             path: paths.app.adminAccounts.path,
             lazy: () => import('./routes/app/admin/accounts').then(convert(queryClient)),

@@ -34,6 +34,18 @@ export const paths = {
       path: '/trips',
       getHref: () => '/trips',
     },
+    newTrip: {
+      path: '/trips/new',
+      getHref: () => '/trips/new',
+    },
+    trip: {
+      path: '/trips/:tripId',
+      getHref: (tripId: string) => `/trips/${encodeURIComponent(tripId)}`,
+    },
+    editTrip: {
+      path: '/trips/:tripId/edit',
+      getHref: (tripId: string) => `/trips/${encodeURIComponent(tripId)}/edit`,
+    },
     adminAccounts: {
       path: '/admin/accounts',
       getHref: () => '/admin/accounts',

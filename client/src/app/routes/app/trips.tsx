@@ -1,24 +1,19 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/layouts/app-layout';
 import { PageTitle } from '@/components/seo/page-title';
-import { EmptyState } from '@/components/ui/empty-state';
+import { paths } from '@/config/paths';
+import { getTripsQueryOptions } from '@/features/trips/api/get-trips';
+import { TripsList } from '@/features/trips/components/trips-list';
+import { requireAccount } from '@/lib/auth';
 
-function TripsIllustration() {
-  return (
-    <svg
-      viewBox="0 0 64 48"
-      className="h-16 w-20"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth="2.5"
-      strokeLinecap="round"
-      strokeLinejoin="round"
-    >
-      <path d="M4 40 20 18l9 11 8-9 23 20Z" />
-      <circle cx="46" cy="12" r="5" />
-      <path d="M10 44h44" strokeDasharray="3 5" />
-    </svg>
-  );
-}
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireAccount(queryClient, request);
+    void queryClient.prefetchQuery(getTripsQueryOptions());
+    return null;
+  };
 
 export default function TripsRoute() {
   return (
@@ -27,13 +22,7 @@ export default function TripsRoute() {
       <PageHeader title="Trips">
         Where you are going, for how long, under what sky — and the kit that carries you through.
       </PageHeader>
-      <EmptyState title="No trips planned yet" illustration={<TripsIllustration />}>
-        <p>
-          Planning a trip comes after the locker: you will give the place, the dates and your devices, and Gramwatt will
-          work out the lightest kit from your own gear, day by day. That part is still being built, so this list stays
-          empty for now.
-        </p>
-      </EmptyState>
+      <TripsList newTripHref={paths.app.newTrip.getHref()} tripHref={paths.app.trip.getHref} />
     </>
   );
 }

@@ -1,6 +1,17 @@
 import { deriveGpxRoute, gpxSizeError, type GpxRoute, type WalkingDay } from '@gramwatt/shared';
 import { useId, useState } from 'react';
 
+/** A file's text; FileReader where `Blob.text()` is missing (older browsers, jsdom). */
+const readText = (file: File): Promise<string> =>
+  typeof file.text === 'function'
+    ? file.text()
+    : new Promise((resolve, reject) => {
+        const reader = new FileReader();
+        reader.onload = () => resolve(String(reader.result));
+        reader.onerror = () => reject(reader.error ?? new Error('The file could not be read.'));
+        reader.readAsText(file);
+      });
+
 export interface GpxUploadProps {
   nights: number;
   /** Called with the route read from a good file; a bad file leaves the trip as it was. */
@@ -21,7 +32,13 @@ export function GpxUpload({ nights, onRoute, serverError }: GpxUploadProps) {
       setError(tooLarge.message);
       return;
     }
-    const text = await file.text();
+    let text: string;
+    try {
+      text = await readText(file);
+    } catch {
+      setError('The file could not be read.');
+      return;
+    }
     const result = deriveGpxRoute(text, Number.isInteger(nights) && nights > 0 ? nights : 1);
     if (!result.ok) {
       setError(result.error.message);

@@ -86,7 +86,7 @@ export function GpxRouteSummary({ route }: { route: GpxRoute }) {
         {route.start.latDeg.toFixed(4)}°, {route.start.lonDeg.toFixed(4)}°.
         {route.splitNote ? ` ${route.splitNote}` : ''}
       </p>
-      <table className="mt-2 w-full text-left">
+      <table className="mt-2 w-full text-left [&_td]:py-0.5 [&_td]:pr-3 [&_th]:pb-1 [&_th]:pr-3 [&_th]:align-bottom">
         <caption className="sr-only">Walking days from the GPX file</caption>
         <thead>
           <tr>

@@ -149,7 +149,10 @@ export function TripForm({ trip, onSaved, onCancel }: TripFormProps) {
         <legend className="mb-2 text-lg font-semibold text-scree-900">Sky</legend>
         <div className="grid gap-2 sm:grid-cols-2" role="radiogroup" aria-label="Sky">
           {skyPresets.map((preset) => (
-            <label key={preset.id} className="flex gap-2 rounded-lg border-2 border-scree-200 p-3">
+            <label
+              key={preset.id}
+              className="flex gap-2 rounded-lg border-2 border-scree-200 bg-white p-3 has-[:checked]:border-tarn-600"
+            >
               <input type="radio" value={preset.id} {...register('sky')} className="mt-1" />
               <span>
                 <span className="font-medium text-scree-900">{preset.label}</span>
@@ -157,7 +160,7 @@ export function TripForm({ trip, onSaved, onCancel }: TripFormProps) {
               </span>
             </label>
           ))}
-          <label className="flex gap-2 rounded-lg border-2 border-scree-200 p-3">
+          <label className="flex gap-2 rounded-lg border-2 border-scree-200 bg-white p-3 has-[:checked]:border-tarn-600">
             <input type="radio" value="custom" {...register('sky')} className="mt-1" />
             <span>
               <span className="font-medium text-scree-900">My own values</span>

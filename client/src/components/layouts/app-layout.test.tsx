@@ -1,6 +1,8 @@
 import { screen, within } from '@testing-library/react';
+import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { seedAccount } from '@/testing/mocks/db';
+import { server } from '@/testing/mocks/server';
 import { renderApp } from '@/testing/test-utils';
 
 const mainNav = () => screen.getByRole('navigation', { name: 'Main' });
@@ -25,6 +27,7 @@ describe('AppLayout', () => {
 
   it('has the landmarks and title a screen-reader user relies on', async () => {
     seedAccount({}, { signedIn: true });
+    server.use(http.get('*/api/trips', () => HttpResponse.json({ trips: [] })));
     await renderApp('/trips');
 
     expect(screen.getByRole('banner')).toBeInTheDocument();
@@ -33,7 +36,7 @@ describe('AppLayout', () => {
     expect(screen.getByRole('link', { name: 'Skip to content' })).toHaveAttribute('href', '#main');
     expect(screen.getByRole('heading', { level: 1, name: 'Trips' })).toBeInTheDocument();
     expect(document.title).toBe('Trips · Gramwatt');
-    expect(screen.getByRole('region', { name: 'No trips planned yet' })).toBeInTheDocument();
+    expect(await screen.findByRole('region', { name: 'No trips yet' })).toBeInTheDocument();
   });
 
   it('opens the phone menu with the same sections, and closes it on choosing one', async () => {

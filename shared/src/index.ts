@@ -17,3 +17,4 @@ export * from './schemas/index.js';
 export * from './trips/index.js';
 export * from './locker-csv/index.js';
 export * from './gpx/index.js';
+export * from './planning/index.js';

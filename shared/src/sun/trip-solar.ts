@@ -31,6 +31,12 @@ function dailyValue(value: number | number[], day: number): number {
   return value[clamped] ?? 0;
 }
 
+/** Options beyond the trip's own input. */
+export interface TripSolarOptions {
+  /** Cloudy days added to the design run (the gram price of "one more cloudy day"); default 0. */
+  extraCloudyRunDays?: number;
+}
+
 /** Plane orientation of one step, or null when nothing faces the sky (stowed, outside both windows). */
 type StepPlane = PlaneOrientation | 'all-headings' | null;
 
@@ -42,7 +48,7 @@ type StepPlane = PlaneOrientation | 'all-headings' | null;
  * @param input a value returned by `tripSolarInputSchema.parse` (ranges and the cloud chain are checked there)
  * @example computeTripSolar(tripSolarInputSchema.parse({ latitudeDeg: 46.5, longitudeDeg: 8, timeZone: 'Europe/Zurich', startDate: '2026-07-01', nights: 4, temperatures: { lowC: 5, highC: 18 } })).days.length // 5
  */
-export function computeTripSolar(input: TripSolarInput): TripSolarSeries {
+export function computeTripSolar(input: TripSolarInput, options: TripSolarOptions = {}): TripSolarSeries {
   const timeline = buildTripTimeline(input);
   const dayCount = timeline.days.length;
   const { latitudeDeg, longitudeDeg } = input;
@@ -136,7 +142,10 @@ export function computeTripSolar(input: TripSolarInput): TripSolarSeries {
     };
   }
 
-  const k = cloudyRunDays(input.sky.clearShare, input.sky.cloudyPersistence, dayCount, input.sky.designLikelihood);
+  const k = Math.min(
+    dayCount,
+    cloudyRunDays(input.sky.clearShare, input.sky.cloudyPersistence, dayCount, input.sky.designLikelihood) + Math.max(0, options.extraCloudyRunDays ?? 0),
+  );
   const skies = designSkies({
     days: dayCount,
     cloudyRunDays: k,

@@ -1,0 +1,254 @@
+import { lithiumMinChargeTemperatureC } from '../constants/electrical.js';
+import { deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
+import { panelPowerSeries } from '../harvest/panel-series.js';
+import type { DominanceAttribute, HarvestGroup, KitCandidate, KitCounts, KitJudge, OptimisationProblem, PanelCoefficients, PathAlternative, PathNeed, StoreCoefficients } from '../optimisation/types.js';
+import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
+import type { KitEntry } from '../schemas/kit.js';
+import { chargePaths, joinPorts, type KitConverter, type KitLead } from '../simulation/connections.js';
+import { isKitFeasible, simulateKit } from '../simulation/simulate-kit.js';
+import type { KitSimulation } from '../simulation/types.js';
+import { bankUsableWh } from '../storage/bank.js';
+import { computeTripSolar, type TripSolarOptions } from '../sun/trip-solar.js';
+import type { TripSolarSeries } from '../sun/trip-solar-types.js';
+import type { PlanningGear, PlanningInput } from './planning-input.js';
+
+/** A planning input made ready for the optimiser and the simulation: sun series, problem, judge, kit builder. */
+export interface PlanningContext {
+  input: PlanningInput;
+  solar: TripSolarSeries;
+  gearById: ReadonlyMap<string, PlanningGear>;
+  /** One panel's power per step, per sky, by panel item id (computed once for every kit tried). */
+  panelSeriesCache: ReadonlyMap<string, readonly Float64Array[]>;
+  problem: OptimisationProblem;
+  judge: KitJudge;
+  /** Kit entries (with specs) for counts by item id. */
+  kitEntries(counts: KitCounts): KitEntry[];
+  /** The full hour-by-hour simulation of a kit. */
+  simulate(counts: KitCounts): KitSimulation;
+}
+
+type Grid = number[][];
+
+const gridOf = (skies: number, width: number): Grid => Array.from({ length: skies }, () => new Array<number>(width).fill(0));
+
+/** Same connectors and everything else that has no "better" direction: only such items are compared by dominance. */
+const signature = (spec: object, omit: readonly string[]): DominanceAttribute => ({
+  name: `same:${JSON.stringify(Object.fromEntries(Object.entries(spec).filter(([k]) => !omit.includes(k))))}`,
+  value: 1,
+  better: 'higher',
+});
+
+/**
+ * Builds the optimiser's problem for a trip and its candidate gear, and the judge (the hourly simulation).
+ *
+ * The daily coefficients are a RELAXATION of the simulation, so no kit the simulation accepts is lost:
+ * - panels: per step the power `panelPowerSeries` gives at the port, with no harvest in steps below 0 °C (every store
+ *   is a lithium bank), summed per day; a panel counts only with a lead when no owned bank takes its plug directly;
+ * - banks: usable Wh, charge efficiency, and the input limit × step hours outside frozen steps;
+ * - devices: the LEAST cumulative draw by each day's end — what the device has used beyond its own battery (which
+ *   starts full) over its best path's efficiency — for the reserve rows, and the MOST (everything it used, over its
+ *   worst path, since a battery is never topped up past full) for the room rows;
+ * - the first camp step of each day: before it no store gives energy to a device, so a full bank spills the morning;
+ * - charging paths: every bank, converter and lead combination `chargePaths` accepts, each lead needed once.
+ * @example planningContext(input).problem.candidates.length // input.gear.length
+ */
+export function planningContext(input: PlanningInput, solarOptions: TripSolarOptions = {}): PlanningContext {
+  const solar = computeTripSolar(input.solarInput, solarOptions);
+  const gearById = new Map(input.gear.map((g) => [g.itemId, g]));
+  const owned = input.gear.filter((g) => g.countOwned > 0);
+  const skyCount = solar.skies.length;
+  const steps = solar.steps;
+  const stepCount = steps.length;
+  const dayCount = solar.days.length;
+  const frozen = steps.map((s) => s.airTempC < lithiumMinChargeTemperatureC);
+
+  const dayFirstStep: number[] = [];
+  for (let t = 0, i = 0; t <= dayCount; t++) {
+    while (i < stepCount && (steps[i]?.dayIndex ?? 0) < t) i++;
+    dayFirstStep.push(i);
+  }
+  const firstTopUpStep = Array.from({ length: dayCount }, (_, t) => {
+    for (let i = dayFirstStep[t] ?? 0; i < (dayFirstStep[t + 1] ?? 0); i++) if (steps[i]?.window === 'camp') return i;
+    return dayFirstStep[t + 1] ?? stepCount;
+  });
+  const perDay = (byStep: readonly number[]): number[] => {
+    const out = new Array<number>(dayCount).fill(0);
+    byStep.forEach((wh, i) => {
+      const d = steps[i]?.dayIndex ?? 0;
+      out[d] = (out[d] ?? 0) + wh;
+    });
+    return out;
+  };
+
+  const banks = owned.filter((g): g is PlanningGear & { spec: BankSpec } => g.spec.kind === 'bank');
+  const leads: KitLead[] = owned.flatMap((g) => (g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec as LeadSpec }] : []));
+  const converters: KitConverter[] = owned.flatMap((g) => (g.spec.kind === 'converter' ? [{ itemId: g.itemId, spec: g.spec as ConverterSpec }] : []));
+
+  // Panels.
+  const panelSeriesCache = new Map<string, Float64Array[]>();
+  const panels: PanelCoefficients[] = [];
+  const harvestGroups: HarvestGroup[] = [];
+  const anySun: boolean[][] = Array.from({ length: skyCount }, () => new Array<boolean>(stepCount).fill(false));
+  for (const g of owned) {
+    if (g.spec.kind !== 'panel') continue;
+    const spec = g.spec as UsbPanelSpec;
+    const direct = banks.some((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
+    const viaLeads = direct ? [] : leads.filter((l) => banks.some((b) => joinPorts(spec.outputPort, b.spec.inputPort, [l]).joined));
+    if (!direct && viaLeads.length === 0) continue;
+    const series = panelPowerSeries(spec, solar);
+    panelSeriesCache.set(g.itemId, series);
+    const byStep = gridOf(skyCount, stepCount);
+    series.forEach((one, s) => {
+      for (let i = 0; i < stepCount; i++) {
+        const wh = frozen[i] ? 0 : (one[i] ?? 0) * (steps[i]?.durationH ?? 0);
+        (byStep[s] as number[])[i] = wh;
+        if (wh > 0) (anySun[s] as boolean[])[i] = true;
+      }
+    });
+    let groupId: string | undefined;
+    if (!direct) {
+      groupId = `leads:${viaLeads.map((l) => l.itemId).sort().join('|')}`;
+      if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf: viaLeads.map((l) => ({ itemIds: [l.itemId] })) });
+    }
+    panels.push({ itemId: g.itemId, harvestWh: byStep.map(perDay), harvestWhByStep: byStep, ...(groupId ? { groupId } : {}) });
+  }
+
+  // Stores.
+  const stores: StoreCoefficients[] = banks.map((b) => {
+    const byStep = gridOf(skyCount, stepCount);
+    const daily = gridOf(skyCount, dayCount);
+    for (let s = 0; s < skyCount; s++) {
+      for (let i = 0; i < stepCount; i++) {
+        const wh = frozen[i] ? 0 : b.spec.inputMaxW * (steps[i]?.durationH ?? 0);
+        (byStep[s] as number[])[i] = wh;
+        if (anySun[s]?.[i]) {
+          const d = steps[i]?.dayIndex ?? 0;
+          (daily[s] as number[])[d] = (daily[s]?.[d] ?? 0) + wh;
+        }
+      }
+    }
+    return { itemId: b.itemId, usableWh: bankUsableWh(b.spec), chargeEfficiency: b.spec.chargeEfficiency, acceptWh: daily, acceptWhByStep: byStep };
+  });
+
+  // Devices: paths and demand.
+  const tripHours = steps.reduce((h, s) => h + s.durationH, 0);
+  const hoursBefore: number[] = [0];
+  steps.forEach((s, i) => hoursBefore.push((hoursBefore[i] ?? 0) + s.durationH));
+  const hoursByDayEnd = Array.from({ length: dayCount }, (_, t) => hoursBefore[dayFirstStep[t + 1] ?? stepCount] ?? tripHours);
+  // No top-up happens between a day's end and the next day's first camp step, so by the day's end a device must
+  // already hold what it uses until then: the least draw counts the use up to the next top-up.
+  const hoursToNextTopUp = Array.from({ length: dayCount }, (_, t) => hoursBefore[t + 1 < dayCount ? (firstTopUpStep[t + 1] ?? stepCount) : stepCount] ?? tripHours);
+  const needs: PathNeed[] = [];
+  const leastCum = new Array<number>(dayCount).fill(0);
+  const mostCum = new Array<number>(dayCount).fill(0);
+  for (const d of input.devices) {
+    if (!needsChargingPath(d.spec, tripHours / 24)) continue;
+    const alternatives = new Map<string, { itemIds: string[]; efficiency: number }>();
+    const leadSets: KitLead[][] = [[], ...leads.map((l) => [l])];
+    if (d.spec.chargesVia === '12v-dc') for (let a = 0; a < leads.length; a++) for (let b = a + 1; b < leads.length; b++) leadSets.push([leads[a] as KitLead, leads[b] as KitLead]);
+    const converterSets: KitConverter[][] = d.spec.chargesVia === '12v-dc' ? converters.map((c) => [c]) : [[]];
+    for (const bank of banks) {
+      for (const cs of converterSets) {
+        for (const ls of leadSets) {
+          for (const path of chargePaths(bank.spec, d.spec, cs, ls).paths) {
+            const itemIds = [...new Set([bank.itemId, ...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds])].sort();
+            const key = itemIds.join('|');
+            const known = alternatives.get(key);
+            if (!known || known.efficiency < path.pathEfficiency) alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+          }
+        }
+      }
+    }
+    const list = [...alternatives.values()];
+    needs.push({
+      needId: d.deviceId,
+      label: input.deviceNames?.[d.deviceId] ?? d.deviceId,
+      alternatives: list.map((a): PathAlternative => ({ itemIds: a.itemIds, pathId: a.itemIds.join(' + ') })),
+    });
+    if (list.length === 0) continue;
+    const best = Math.max(...list.map((a) => a.efficiency));
+    const worst = Math.min(...list.map((a) => a.efficiency));
+    const perHourWh = deviceDemandWhPerDay(d.spec) / 24;
+    hoursByDayEnd.forEach((h, t) => {
+      const usedWh = perHourWh * h;
+      const neededWh = perHourWh * (hoursToNextTopUp[t] ?? h);
+      leastCum[t] = (leastCum[t] ?? 0) + Math.max(0, neededWh - d.spec.ownBatteryWh) / (d.spec.chargeEfficiency * best);
+      mostCum[t] = (mostCum[t] ?? 0) + usedWh / (d.spec.chargeEfficiency * worst);
+    });
+  }
+  const daily = (cum: readonly number[]): Grid => Array.from({ length: skyCount }, () => cum.map((v, t) => Math.max(0, v - (t > 0 ? (cum[t - 1] ?? 0) : 0))));
+
+  const candidates: KitCandidate[] = input.gear.map((g) => ({
+    itemId: g.itemId,
+    kind: g.spec.kind,
+    massG: Math.round(g.massG),
+    ownedCount: Math.max(0, Math.floor(g.countOwned)),
+    dominanceAttributes: dominanceOf(g),
+  }));
+  const problem: OptimisationProblem = {
+    candidates,
+    ...(input.gramLimitG !== null ? { gramLimitG: input.gramLimitG } : {}),
+    coefficients: {
+      skyIds: solar.skies.map((s) => s.id),
+      dayCount,
+      demandWh: daily(leastCum),
+      roomDemandWh: daily(mostCum),
+      reserveShare: input.reserveShare,
+      panels,
+      stores,
+      harvestGroups,
+      needs,
+      timing: 'overlapping',
+      dayFirstStep,
+      firstTopUpStep,
+    },
+  };
+
+  const kitEntries = (counts: KitCounts): KitEntry[] =>
+    [...counts]
+      .filter(([, n]) => n > 0)
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+      .flatMap(([itemId, count]) => {
+        const g = gearById.get(itemId);
+        return g ? [{ itemId, count, spec: g.spec }] : [];
+      });
+  const simulationInput = (counts: KitCounts) => ({
+    solar,
+    kit: kitEntries(counts),
+    devices: input.devices,
+    reserveShare: input.reserveShare,
+    options: { panelSeriesCache },
+  });
+  const simulate = (counts: KitCounts): KitSimulation => simulateKit(simulationInput(counts));
+  const judge: KitJudge = (counts) => {
+    if (!isKitFeasible(simulationInput(counts))) return { feasible: false };
+    const verdict = simulate(counts).verdict;
+    return { feasible: true, margin: verdict.status === 'runs-dry' ? 0 : verdict.worstMarginShare };
+  };
+  return { input, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
+}
+
+/** What makes one unit better or worse in the simulation's eyes beyond the daily coefficients. */
+function dominanceOf(g: PlanningGear): DominanceAttribute[] {
+  const spec = g.spec;
+  switch (spec.kind) {
+    case 'panel':
+      return [signature({ port: spec.outputPort }, [])];
+    case 'bank':
+      return [
+        signature(spec, ['massG', 'capacityMah', 'capacityWh', 'cellVolts', 'inputMaxW', 'chargeEfficiency', 'outputEfficiency']),
+        { name: 'usableWh', value: bankUsableWh(spec), better: 'higher' },
+        { name: 'inputMaxW', value: spec.inputMaxW, better: 'higher' },
+        { name: 'chargeEfficiency', value: spec.chargeEfficiency, better: 'higher' },
+        { name: 'outputEfficiency', value: spec.outputEfficiency, better: 'higher' },
+      ];
+    case 'converter':
+      return [
+        signature(spec, ['massG', 'efficiency', 'maxOutputA']),
+        { name: 'efficiency', value: spec.efficiency, better: 'higher' },
+        { name: 'maxOutputA', value: spec.maxOutputA, better: 'higher' },
+      ];
+    case 'lead':
+      return [signature(spec, ['massG'])];
+  }
+}

@@ -1,0 +1,6 @@
+/** Planning: a trip and its gear turned into the optimiser's problem, the plan the solver answers, and hand checks. */
+export * from './planning-input.js';
+export { planningContext, type PlanningContext } from './build-problem.js';
+export { evaluateKit, planKit } from './evaluate-kit.js';
+export { planTrip, planModelVersion, type PlanOptions } from './plan-trip.js';
+export { checkKit } from './check-kit.js';

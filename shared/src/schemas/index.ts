@@ -10,3 +10,4 @@ export * from './locker-files.js';
 export * from './catalogue.js';
 export * from './trips.js';
 export * from './plans.js';
+export * from './party.js';

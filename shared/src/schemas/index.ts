@@ -11,3 +11,4 @@ export * from './catalogue.js';
 export * from './trips.js';
 export * from './plans.js';
 export * from './party.js';
+export * from './pool.js';

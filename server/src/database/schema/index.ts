@@ -8,3 +8,4 @@ export * from './trip-devices';
 export * from './mail-messages';
 export * from './trip-invites';
 export * from './trip-share-links';
+export * from './trip-pool-items';

@@ -54,4 +54,23 @@ describe('apiRequest', () => {
     server.use(http.get('/api/offline', () => HttpResponse.error()));
     await expect(api.get('/offline')).rejects.toMatchObject({ statusCode: 0 });
   });
+
+  it('reads Retry-After as seconds, so a busy server can say when to try again', async () => {
+    server.use(
+      http.post('/api/busy', () =>
+        HttpResponse.json(
+          { statusCode: 503, message: 'Busy', errors: [] },
+          { status: 503, headers: { 'Retry-After': '12' } },
+        ),
+      ),
+    );
+    await expect(api.post('/busy')).rejects.toMatchObject({ statusCode: 503, retryAfterS: 12 });
+  });
+
+  it('has no wait when the server names none', async () => {
+    server.use(
+      http.get('/api/gone', () => HttpResponse.json({ statusCode: 404, message: 'No', errors: [] }, { status: 404 })),
+    );
+    await expect(api.get('/gone')).rejects.toMatchObject({ statusCode: 404, retryAfterS: null });
+  });
 });

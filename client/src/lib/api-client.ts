@@ -9,11 +9,14 @@ export class ApiError extends Error {
   override readonly name = 'ApiError';
   readonly statusCode: number;
   readonly errors: ApiFieldError[];
+  /** Seconds the server asks us to wait before trying again (`Retry-After` on a 503 or 429), or null. */
+  readonly retryAfterS: number | null;
 
-  constructor(statusCode: number, message: string, errors: ApiFieldError[] = []) {
+  constructor(statusCode: number, message: string, errors: ApiFieldError[] = [], retryAfterS: number | null = null) {
     super(message);
     this.statusCode = statusCode;
     this.errors = errors;
+    this.retryAfterS = retryAfterS;
   }
 }
 
@@ -53,19 +56,29 @@ const isApiErrorBody = (body: unknown): body is ApiErrorBody => {
   );
 };
 
+/** `Retry-After` as whole seconds: either a number of seconds or an HTTP date (RFC 9110 §10.2.3). */
+const retryAfterSeconds = (response: Response): number | null => {
+  const header = response.headers.get('Retry-After')?.trim();
+  if (!header) return null;
+  if (/^\d+$/.test(header)) return Number(header);
+  const atMs = Date.parse(header);
+  return Number.isNaN(atMs) ? null : Math.max(0, Math.ceil((atMs - Date.now()) / 1000));
+};
+
 const toApiError = async (response: Response): Promise<ApiError> => {
+  const retryAfterS = retryAfterSeconds(response);
   let payload: unknown = null;
   try {
     payload = await response.json();
   } catch {
     // Not JSON (a proxy's HTML page, an empty body): fall back to the status alone.
   }
-  if (isApiErrorBody(payload)) return new ApiError(response.status, payload.message, payload.errors);
+  if (isApiErrorBody(payload)) return new ApiError(response.status, payload.message, payload.errors, retryAfterS);
   const message =
     payload && typeof payload === 'object' && 'message' in payload && typeof payload.message === 'string'
       ? payload.message
       : fallbackMessage(response.status);
-  return new ApiError(response.status, message);
+  return new ApiError(response.status, message, [], retryAfterS);
 };
 
 /**
@@ -103,5 +116,6 @@ export const api = {
   get: <T>(path: string, signal?: AbortSignal) => apiRequest<T>(path, { signal }),
   post: <T>(path: string, body?: JsonBody) => apiRequest<T>(path, { method: 'POST', body }),
   patch: <T>(path: string, body: JsonBody) => apiRequest<T>(path, { method: 'PATCH', body }),
+  put: <T>(path: string, body: JsonBody) => apiRequest<T>(path, { method: 'PUT', body }),
   delete: <T>(path: string) => apiRequest<T>(path, { method: 'DELETE' }),
 };

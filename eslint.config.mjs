@@ -42,7 +42,7 @@ export default tseslint.config(
       'import-x/no-restricted-paths': [
         'error',
         {
-          zones: ['auth', 'locker', 'trips', 'plans', 'party', 'admin', 'outbox'].map((feature) => ({
+          zones: ['auth', 'locker', 'trips', 'plan', 'plans', 'party', 'admin', 'outbox'].map((feature) => ({
             target: `./client/src/features/${feature}`,
             from: './client/src/features',
             except: [`./${feature}`],

@@ -9,3 +9,5 @@ export * from './mail-messages';
 export * from './trip-invites';
 export * from './trip-share-links';
 export * from './trip-pool-items';
+export * from './trip-plans';
+export * from './trip-kits';

@@ -18,3 +18,4 @@ export * from './trips/index.js';
 export * from './locker-csv/index.js';
 export * from './gpx/index.js';
 export * from './planning/index.js';
+export * from './station/index.js';

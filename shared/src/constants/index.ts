@@ -5,3 +5,4 @@
 export * from './solar.js';
 export * from './electrical.js';
 export * from './limits.js';
+export * from './station.js';

@@ -24,6 +24,7 @@ import { LockerModule } from './locker/locker.module';
 import { mailConfig } from './mail/mail.config';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { PoolModule } from './pool/pool.module';
 import { shareConfig } from './share/share.config';
 import { ShareModule } from './share/share.module';
 import { TripsModule } from './trips/trips.module';
@@ -90,6 +91,7 @@ export class AppModule {
         MailModule,
         OutboxModule,
         InvitesModule,
+        PoolModule,
         ShareModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],

@@ -7,6 +7,7 @@ import {
   createTrip,
   insertLockerItem,
   signedInHiker,
+  testBankSpec,
   testPhoneSpec,
   testRadioSpec,
   tripBody,
@@ -24,6 +25,10 @@ interface Scene {
   viewerId: string;
   spareMemberId: string;
   inviteId: string;
+  /** The leader's pooled bank. */
+  poolItemId: string;
+  /** A bank in the caller's own locker, for sharing into the pool. */
+  callerBankId: string;
 }
 
 interface Row {
@@ -50,6 +55,10 @@ const table: Row[] = [
     expect: [200, 403, 403],
     body: () => ({ useProfileOverride: { transmitMinutesPerDay: 5 } }),
   },
+  { method: 'get', path: '/api/trips/{id}/pool', expect: [200, 200, 200] },
+  { method: 'post', path: '/api/trips/{id}/pool', expect: [201, 201, 403], body: (s) => ({ itemId: s.callerBankId, count: 1 }) },
+  { method: 'patch', path: '/api/trips/{id}/pool/{poolItemId}', expect: [200, 403, 403], body: () => ({ count: 1 }) },
+  { method: 'delete', path: '/api/trips/{id}/pool/{poolItemId}', expect: [204, 403, 403] },
   { method: 'patch', path: '/api/trips/{id}/members/{accountId}', expect: [200, 403, 403], body: () => ({ gramLimitG: 900 }) },
   { method: 'get', path: '/api/trips/{id}/invites', expect: [200, 403, 403] },
   { method: 'post', path: '/api/trips/{id}/invites', expect: [201, 403, 403], body: () => ({ email: 'someone.new@example.test', role: 'viewer' }) },
@@ -120,6 +129,9 @@ describe('trip roles × every trip route', () => {
             ? viewer
             : await signedInHiker(t, role === 'admin' ? 'admin' : 'member');
     const phone = await insertLockerItem(t.db, caller.id, testPhoneSpec());
+    const callerBank = await insertLockerItem(t.db, caller.id, testBankSpec());
+    const ownerBank = await insertLockerItem(t.db, owner.id, testBankSpec());
+    const pooled = await t.http().post(`/api/trips/${trip.id}/pool`).set(owner.auth).send({ itemId: ownerBank.id }).expect(201);
     return {
       caller,
       scene: {
@@ -129,6 +141,8 @@ describe('trip roles × every trip route', () => {
         viewerId: viewer.id,
         spareMemberId: spare.id,
         inviteId: invite.body.invite.id,
+        poolItemId: pooled.body.item.id,
+        callerBankId: callerBank.id,
       },
     };
   }
@@ -138,6 +152,7 @@ describe('trip roles × every trip route', () => {
       .replace('{id}', s.tripId)
       .replace('{deviceId}', s.ownerDeviceId)
       .replace('{inviteId}', s.inviteId)
+      .replace('{poolItemId}', s.poolItemId)
       .replace('{accountId}', row.method === 'delete' ? s.spareMemberId : s.viewerId);
   }
 

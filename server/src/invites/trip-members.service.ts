@@ -2,7 +2,7 @@ import { ConflictException, Inject, Injectable, NotFoundException } from '@nestj
 import type { TripMember } from '@gramwatt/shared';
 import { and, eq, inArray } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { accounts, lockerItems, tripDevices, tripMembers } from '../database/schema';
+import { accounts, lockerItems, tripDevices, tripMembers, tripPoolItems } from '../database/schema';
 import { toTripMember } from '../trips/trip-view';
 import type { MemberUpdate } from './invites.dto';
 
@@ -55,6 +55,7 @@ export class TripMembersService {
         .update(tripDevices)
         .set({ carrierAccountId: null })
         .where(and(eq(tripDevices.tripId, tripId), eq(tripDevices.carrierAccountId, accountId)));
+      await tx.delete(tripPoolItems).where(and(eq(tripPoolItems.tripId, tripId), eq(tripPoolItems.accountId, accountId)));
       await tx.delete(tripMembers).where(and(eq(tripMembers.tripId, tripId), eq(tripMembers.accountId, accountId)));
     });
   }

@@ -15,6 +15,11 @@ export const tripPermissions = {
   addDevice: ['leader', 'partner'],
   /** Changes or removes a device: a partner only their own (checked by the devices service), the leader any. */
   changeDevice: ['leader', 'partner'],
+  readPool: ['leader', 'partner', 'viewer'],
+  /** Shares one of the caller's own locker items into the party pool. */
+  shareToPool: ['leader', 'partner'],
+  /** Changes the count of a pooled item or takes it out: a partner only their own (checked by the pool service), the leader any. */
+  changePoolItem: ['leader', 'partner'],
   /** Changes a member's role or gram limit, or removes them. */
   manageMembers: ['leader'],
   /** Invites by e-mail, lists and withdraws invites. */

@@ -1,4 +1,4 @@
-import { type DeviceSpec, deviceSpecSchema, type ItemSpec } from '@gramwatt/shared';
+import { type BankSpec, bankSpecSchema, type DeviceSpec, deviceSpecSchema, type ItemSpec } from '@gramwatt/shared';
 import type request from 'supertest';
 import type { Database } from '../../src/database/database.types';
 import { type LockerItemRow, lockerItems } from '../../src/database/schema';
@@ -35,6 +35,22 @@ export function testPhoneSpec(overrides: Partial<DeviceSpec> = {}): DeviceSpec {
     chargePort: { connector: 'usb-c', captiveCable: false },
     massG: 190,
     useProfile: { basis: 'battery-share', batterySharePerDay: 0.5 },
+    ...overrides,
+  });
+}
+
+/** An invented 10,000 mAh bank (no real product): an input for tests, never a check value. */
+export function testBankSpec(overrides: Partial<BankSpec> = {}): BankSpec {
+  return bankSpecSchema.parse({
+    kind: 'bank',
+    capacityMah: 10000,
+    cellVolts: 3.7,
+    inputMaxW: 18,
+    inputPort: { connector: 'usb-c', captiveCable: false },
+    outputPorts: [{ connector: 'usb-c', captiveCable: false, volts: 5, maxA: 3 }],
+    outputEfficiency: 0.85,
+    chargeEfficiency: 0.9,
+    massG: 190,
     ...overrides,
   });
 }

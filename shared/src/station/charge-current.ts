@@ -30,7 +30,9 @@ export interface PackChargeLimit {
  * chemistry's typical rate (common practice: lithium polymer 1C, lithium-ion and LiFePO₄ 0.5C, lead-acid 0.1C).
  * @example packChargeLimit({ chemistry: 'lifepo4', cellsInSeries: 4, capacityAh: 6 }) // { chargeCRate: 0.5, maxChargeA: 3, basis: 'typical' }
  */
-export function packChargeLimit(battery: Pick<StationBattery, 'chemistry' | 'capacityAh' | 'chargeCRate'>): PackChargeLimit {
+export function packChargeLimit(
+  battery: Pick<StationBattery, 'chemistry' | 'capacityAh' | 'chargeCRate'>,
+): PackChargeLimit {
   const maker = battery.chargeCRate;
   const chargeCRate = maker !== undefined && maker > 0 ? maker : typicalChargeCRateByChemistry[battery.chemistry];
   return {

@@ -59,9 +59,7 @@ export function mpptHarvestW(
   if (!(batteryVolts > 0)) return 0;
   const points = panelCurvePoints(panel, conditions);
   const panelW =
-    batteryVolts <= points.maxPowerVolts
-      ? points.maxPowerW
-      : batteryVolts * panelCurrentAtVoltsA(points, batteryVolts);
+    batteryVolts <= points.maxPowerVolts ? points.maxPowerW : batteryVolts * panelCurrentAtVoltsA(points, batteryVolts);
   return panelW * efficiency * lossFactor(options);
 }
 

@@ -63,6 +63,10 @@ export function packVolts(chemistry: BatteryChemistry, cellsInSeries: number): P
  * A pack's rated energy, Wh: rated Ah × nominal pack volts (the IATA Lithium Battery Guidance Document's Wh = Ah × V).
  * @example packRatedWh({ chemistry: 'lifepo4', cellsInSeries: 4, capacityAh: 6 }) // 76.8
  */
-export function packRatedWh(battery: { chemistry: BatteryChemistry; cellsInSeries: number; capacityAh: number }): number {
+export function packRatedWh(battery: {
+  chemistry: BatteryChemistry;
+  cellsInSeries: number;
+  capacityAh: number;
+}): number {
   return battery.capacityAh * packVolts(battery.chemistry, battery.cellsInSeries).nominalVolts;
 }

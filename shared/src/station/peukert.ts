@@ -12,7 +12,7 @@ import {
  * 287–288; the rated-hours form as in Linden & Reddy, Handbook of Batteries, 3rd ed. (from memory).
  *
  * Limits: one exponent fits a rate table well from the rated hours down to a few hours (a 7 Ah sealed lead-acid
- * rate table within 3 % from 20 h to 5 h with k = 1.15) and overstates the capacity near the 1-hour rate; no
+ * rate table within 3 % from 20 h to 5 h with k = 1.15) and overstates the capacity near the 1-hour rate (about 4.8 Ah for 4.2 Ah, +15 %); no
  * temperature or age effect. Below the rated current the capacity is capped at the rating: the plan does not count
  * on more than the label.
  */

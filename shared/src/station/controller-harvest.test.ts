@@ -21,7 +21,7 @@ function panel12V(ratedW: number, overrides: Partial<StationPanel> = {}): Statio
     maxPowerVolts: 18,
     maxPowerAmps: ratedW / 18,
     openCircuitVolts: 21.6,
-    tempCoeffPowerPctPerC: -0.4,
+    tempCoeffPctPerC: -0.4,
     tempCoeffVocPctPerC: -0.3,
     ...overrides,
   };
@@ -119,7 +119,7 @@ describe('MPPT versus PWM property (fast-check)', () => {
       maxPowerAmps: fc.double({ min: 0.2, max: 10, noNaN: true }),
       vocRatio: fc.double({ min: 1.1, max: 1.35, noNaN: true }),
       iscRatio: fc.option(fc.double({ min: 1, max: 1.15, noNaN: true }), { nil: undefined }),
-      tempCoeffPowerPctPerC: fc.double({ min: -0.5, max: -0.3, noNaN: true }),
+      tempCoeffPctPerC: fc.double({ min: -0.5, max: -0.3, noNaN: true }),
       tempCoeffVocPctPerC: fc.double({ min: -0.35, max: -0.25, noNaN: true }),
     })
     .map((p): StationPanel => ({
@@ -127,7 +127,7 @@ describe('MPPT versus PWM property (fast-check)', () => {
       maxPowerAmps: p.maxPowerAmps,
       openCircuitVolts: p.maxPowerVolts * p.vocRatio,
       ...(p.iscRatio === undefined ? {} : { shortCircuitAmps: p.maxPowerAmps * p.iscRatio }),
-      tempCoeffPowerPctPerC: p.tempCoeffPowerPctPerC,
+      tempCoeffPctPerC: p.tempCoeffPctPerC,
       tempCoeffVocPctPerC: p.tempCoeffVocPctPerC,
     }));
   const conditionsArb = fc.record({

@@ -52,7 +52,7 @@ export function panelCurvePoints(panel: StationPanel, conditions: PanelCondition
   const openCircuitVolts = Math.max(0, panelOpenCircuitVoltsAt(panel, conditions.cellTempC));
   // Vmp stays below Voc even where the two coefficients would cross them (far outside datasheet temperatures).
   const maxPowerVolts = Math.min(
-    Math.max(0, panel.maxPowerVolts * (1 + (panel.tempCoeffPowerPctPerC / 100) * dT)),
+    Math.max(0, panel.maxPowerVolts * (1 + (panel.tempCoeffPctPerC / 100) * dT)),
     openCircuitVolts,
   );
   const maxPowerAmps = panel.maxPowerAmps * light;

@@ -44,7 +44,7 @@ export interface StationPanel {
   /** Short-circuit current, A; when omitted the current below Vmp is taken as flat at Imp (a little pessimistic). */
   shortCircuitAmps?: number;
   /** Temperature coefficient of maximum power, %/°C (negative). */
-  tempCoeffPowerPctPerC: number;
+  tempCoeffPctPerC: number;
   /** Temperature coefficient of open-circuit voltage, %/°C (negative). */
   tempCoeffVocPctPerC: number;
 }
@@ -54,7 +54,7 @@ export interface DcLead {
   /** Copper gauge, AWG (0 to 40; 1/0 and heavier are not modelled). */
   gaugeAwg: number;
   /** One-way length, m (the current flows out and back: loop = 2 × this). */
-  oneWayLengthM: number;
+  lengthM: number;
   /** Inline fuse rating, A; omit when the lead has no fuse. */
   fuseA?: number;
 }

@@ -61,25 +61,25 @@ describe('AWG definition points and identities', () => {
 
 describe('DC lead voltage drop', () => {
   it('hand worked: 12 AWG, 2 m one way, 20 A → 4 m × 5.21 Ω/km ≈ 0.0208 Ω → ≈ 0.417 V', () => {
-    const loopOhm = leadLoopResistanceOhm({ gaugeAwg: 12, oneWayLengthM: 2 });
+    const loopOhm = leadLoopResistanceOhm({ gaugeAwg: 12, lengthM: 2 });
     expect(relativeError(loopOhm, 4 * 0.005211)).toBeLessThan(0.01);
-    const check = checkLeadDrop({ gaugeAwg: 12, oneWayLengthM: 2 }, 20, 13.2, 11.7);
+    const check = checkLeadDrop({ gaugeAwg: 12, lengthM: 2 }, 20, 13.2, 11.7);
     expect(check.dropVolts).toBeCloseTo(20 * loopOhm, 12);
     expect(check.voltsAtRadio).toBeCloseTo(13.2 - check.dropVolts, 12);
     expect(check.warning).toBeUndefined();
   });
   it('the loop is twice the one-way length', () => {
-    const one = leadLoopResistanceOhm({ gaugeAwg: 16, oneWayLengthM: 1 });
-    expect(leadLoopResistanceOhm({ gaugeAwg: 16, oneWayLengthM: 2 })).toBeCloseTo(2 * one, 12);
+    const one = leadLoopResistanceOhm({ gaugeAwg: 16, lengthM: 1 });
+    expect(leadLoopResistanceOhm({ gaugeAwg: 16, lengthM: 2 })).toBeCloseTo(2 * one, 12);
     expect(one).toBeCloseTo((2 / 1000) * copperResistanceOhmPerKm(16), 12);
   });
   it('warns when an 18 AWG, 3 m lead at 20 A leaves a LiFePO₄ pack’s 12.8 V below the radio’s 11.7 V (6 m × 20.9 Ω/km × 20 A ≈ 2.5 V)', () => {
-    const check = checkLeadDrop({ gaugeAwg: 18, oneWayLengthM: 3 }, 20, 12.8, 11.7);
+    const check = checkLeadDrop({ gaugeAwg: 18, lengthM: 3 }, 20, 12.8, 11.7);
     expect(check.dropVolts).toBeGreaterThan(2.4);
     expect(check.dropVolts).toBeLessThan(2.6);
     expect(check.warning?.id).toBe('lead-drop-below-min');
   });
   it('no current, no drop', () => {
-    expect(checkLeadDrop({ gaugeAwg: 22, oneWayLengthM: 5 }, 0, 12, 11).dropVolts).toBe(0);
+    expect(checkLeadDrop({ gaugeAwg: 22, lengthM: 5 }, 0, 12, 11).dropVolts).toBe(0);
   });
 });

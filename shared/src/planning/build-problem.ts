@@ -43,7 +43,8 @@ const signature = (spec: object, omit: readonly string[]): DominanceAttribute =>
  *
  * The daily coefficients are a RELAXATION of the simulation, so no kit the simulation accepts is lost:
  * - panels: per step the power `panelPowerSeries` gives at the port, with no harvest in steps below 0 °C (every store
- *   is a lithium bank), summed per day; a panel counts only with a lead when no owned bank takes its plug directly;
+ *   is a lithium bank), summed per day; when some owned bank does not take a panel's plug directly, the panel counts
+ *   only with a bank that does or a lead that joins it to some bank (so a lead that only some banks need is kept);
  * - banks: usable Wh, charge efficiency, and the input limit × step hours outside frozen steps;
  * - devices: the LEAST cumulative draw by each day's end — what the device has used beyond its own battery (which
  *   starts full) over its best path's efficiency — for the reserve rows, and the MOST (everything it used, over its
@@ -92,9 +93,13 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
   for (const g of owned) {
     if (g.spec.kind !== 'panel') continue;
     const spec = g.spec as UsbPanelSpec;
-    const direct = banks.some((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
-    const viaLeads = direct ? [] : leads.filter((l) => banks.some((b) => joinPorts(spec.outputPort, b.spec.inputPort, [l]).joined));
-    if (!direct && viaLeads.length === 0) continue;
+    const directBanks = banks.filter((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
+    // Leads count even when some bank takes the plug directly: another bank (the one the optimum needs) may not.
+    const viaLeads = directBanks.length === banks.length ? [] : leads.filter((l) => banks.some((b) => {
+            const hop = joinPorts(spec.outputPort, b.spec.inputPort, [l]);
+            return hop.joined && hop.leadItemId === l.itemId;
+          }));
+    if (directBanks.length === 0 && viaLeads.length === 0) continue;
     const series = panelPowerSeries(spec, solar);
     panelSeriesCache.set(g.itemId, series);
     const byStep = gridOf(skyCount, stepCount);
@@ -106,9 +111,12 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
       }
     });
     let groupId: string | undefined;
-    if (!direct) {
-      groupId = `leads:${viaLeads.map((l) => l.itemId).sort().join('|')}`;
-      if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf: viaLeads.map((l) => ({ itemIds: [l.itemId] })) });
+    if (viaLeads.length > 0) {
+      // Harvest needs a bank the plug fits or a lead that joins it to some bank (looser than bank-and-lead pairs: a
+      // relaxation, and it keeps such leads in the model).
+      const requiresAnyOf = [...directBanks.map((b) => b.itemId), ...viaLeads.map((l) => l.itemId)].sort().map((id) => ({ itemIds: [id] }));
+      groupId = `reach:${requiresAnyOf.map((a) => a.itemIds[0]).join('|')}`;
+      if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf });
     }
     panels.push({ itemId: g.itemId, harvestWh: byStep.map(perDay), harvestWhByStep: byStep, ...(groupId ? { groupId } : {}) });
   }

@@ -122,7 +122,12 @@ describe('the party pool', () => {
 
     // An entry id from another trip is not found here, and stays untouched.
     const other = await createTrip(t, leader);
-    await t.http().patch(`/api/trips/${other.id}/pool/${mine.body.item.id}`).set(leader.auth).send({ count: 1 }).expect(404);
+    await t
+      .http()
+      .patch(`/api/trips/${other.id}/pool/${mine.body.item.id}`)
+      .set(leader.auth)
+      .send({ count: 1 })
+      .expect(404);
     await t.http().delete(`/api/trips/${other.id}/pool/${mine.body.item.id}`).set(leader.auth).expect(404);
     await t.http().delete(`${poolUrl}/not-a-uuid`).set(leader.auth).expect(404);
     const [kept] = await t.db.select().from(tripPoolItems).where(eq(tripPoolItems.id, mine.body.item.id));

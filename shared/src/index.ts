@@ -12,6 +12,7 @@ export * from './storage/index.js';
 export * from './demand/index.js';
 export * from './simulation/index.js';
 export * from './optimisation/index.js';
+export * from './party/index.js';
 export * from './cautions/index.js';
 export * from './schemas/index.js';
 export * from './trips/index.js';

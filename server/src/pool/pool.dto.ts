@@ -1,4 +1,9 @@
-import { poolItemAddSchema, poolItemResponseSchema, poolItemUpdateSchema, poolListResponseSchema } from '@gramwatt/shared';
+import {
+  poolItemAddSchema,
+  poolItemResponseSchema,
+  poolItemUpdateSchema,
+  poolListResponseSchema,
+} from '@gramwatt/shared';
 import { createZodDto } from 'nestjs-zod';
 
 /** Body of POST /api/trips/:id/pool. */

@@ -112,7 +112,14 @@ export class PoolService {
     try {
       const [row] = await this.db
         .insert(tripPoolItems)
-        .values({ tripId: member.tripId, accountId: member.accountId, itemId: item.id, count: body.count, createdAt: now, updatedAt: now })
+        .values({
+          tripId: member.tripId,
+          accountId: member.accountId,
+          itemId: item.id,
+          count: body.count,
+          createdAt: now,
+          updatedAt: now,
+        })
         .returning();
       if (!row) throw new Error('insert returned no row');
       return this.get(member.tripId, row.id);

@@ -30,6 +30,8 @@ export interface KitSearch {
   next(deadlineMs: number): SearchStep;
   /** Exclude `counts` and every kit that holds at least `counts`. */
   excludeSupersetsOf(counts: KitCounts): void;
+  /** Exclude exactly `counts` (a kit rejected for a reason that more gear might mend, e.g. the party's split). */
+  excludeKit(counts: KitCounts): void;
   /** The judge, with a cache (kits are judged once). */
   judge(counts: KitCounts): JudgeVerdict;
   readonly now: () => number;
@@ -243,6 +245,9 @@ export function createKitSearch(
     next,
     excludeSupersetsOf: (counts) => {
       cuts.push({ kind: 'no-superset-of', counts: new Map(counts) });
+    },
+    excludeKit: (counts) => {
+      cuts.push({ kind: 'not-exactly', counts: new Map(counts) });
     },
     judge,
     now,

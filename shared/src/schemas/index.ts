@@ -12,3 +12,4 @@ export * from './trips.js';
 export * from './plans.js';
 export * from './party.js';
 export * from './pool.js';
+export * from './station-items.js';

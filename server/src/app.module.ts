@@ -24,6 +24,8 @@ import { LockerModule } from './locker/locker.module';
 import { mailConfig } from './mail/mail.config';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { plansConfig } from './plans/plans.config';
+import { PlansModule } from './plans/plans.module';
 import { PoolModule } from './pool/pool.module';
 import { shareConfig } from './share/share.config';
 import { ShareModule } from './share/share.module';
@@ -65,6 +67,7 @@ export class AppModule {
             mailConfig(env),
             invitesConfig(env),
             shareConfig(env),
+            plansConfig(env),
           ],
         }),
         ClockModule.forRoot(options.clock),
@@ -93,6 +96,7 @@ export class AppModule {
         InvitesModule,
         PoolModule,
         ShareModule,
+        PlansModule,
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

@@ -29,6 +29,10 @@ interface Scene {
   poolItemId: string;
   /** A bank in the caller's own locker, for sharing into the pool. */
   callerBankId: string;
+  /** A bank in the leader's locker: power gear a plan or a hand-picked kit may hold. */
+  ownerBankId: string;
+  /** A plan the leader ran. */
+  planId: string;
 }
 
 interface Row {
@@ -59,6 +63,12 @@ const table: Row[] = [
   { method: 'post', path: '/api/trips/{id}/pool', expect: [201, 201, 403], body: (s) => ({ itemId: s.callerBankId, count: 1 }) },
   { method: 'patch', path: '/api/trips/{id}/pool/{poolItemId}', expect: [200, 403, 403], body: () => ({ count: 1 }) },
   { method: 'delete', path: '/api/trips/{id}/pool/{poolItemId}', expect: [204, 403, 403] },
+  { method: 'get', path: '/api/trips/{id}/plans', expect: [200, 200, 200] },
+  { method: 'get', path: '/api/trips/{id}/plans/{planId}', expect: [200, 200, 200] },
+  { method: 'get', path: '/api/trips/{id}/kit', expect: [200, 200, 200] },
+  { method: 'post', path: '/api/trips/{id}/plans', expect: [201, 201, 403], body: () => ({}) },
+  { method: 'post', path: '/api/trips/{id}/check', expect: [200, 200, 403], body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }] }) },
+  { method: 'put', path: '/api/trips/{id}/kit', expect: [200, 403, 403], body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }], source: 'hand' }) },
   { method: 'patch', path: '/api/trips/{id}/members/{accountId}', expect: [200, 403, 403], body: () => ({ gramLimitG: 900 }) },
   { method: 'get', path: '/api/trips/{id}/invites', expect: [200, 403, 403] },
   { method: 'post', path: '/api/trips/{id}/invites', expect: [201, 403, 403], body: () => ({ email: 'someone.new@example.test', role: 'viewer' }) },
@@ -132,6 +142,7 @@ describe('trip roles × every trip route', () => {
     const callerBank = await insertLockerItem(t.db, caller.id, testBankSpec());
     const ownerBank = await insertLockerItem(t.db, owner.id, testBankSpec());
     const pooled = await t.http().post(`/api/trips/${trip.id}/pool`).set(owner.auth).send({ itemId: ownerBank.id }).expect(201);
+    const plan = await t.http().post(`/api/trips/${trip.id}/plans`).set(owner.auth).send({}).expect(201);
     return {
       caller,
       scene: {
@@ -143,6 +154,8 @@ describe('trip roles × every trip route', () => {
         inviteId: invite.body.invite.id,
         poolItemId: pooled.body.item.id,
         callerBankId: callerBank.id,
+        ownerBankId: ownerBank.id,
+        planId: plan.body.plan.id,
       },
     };
   }
@@ -153,6 +166,7 @@ describe('trip roles × every trip route', () => {
       .replace('{deviceId}', s.ownerDeviceId)
       .replace('{inviteId}', s.inviteId)
       .replace('{poolItemId}', s.poolItemId)
+      .replace('{planId}', s.planId)
       .replace('{accountId}', row.method === 'delete' ? s.spareMemberId : s.viewerId);
   }
 

@@ -14,6 +14,7 @@ const errorDescriptions: Readonly<Record<number, string>> = {
   404: 'Not yours or not there',
   409: 'Conflicts with the current state',
   413: 'The request body is too large',
+  422: 'Cannot be done as asked (e.g. a trip with nothing to plan)',
   429: 'Too many attempts',
   503: 'Busy or degraded; retry later',
 };

@@ -20,6 +20,14 @@ export const tripPermissions = {
   shareToPool: ['leader', 'partner'],
   /** Changes the count of a pooled item or takes it out: a partner only their own (checked by the pool service), the leader any. */
   changePoolItem: ['leader', 'partner'],
+  /** Reads the trip's plans and its chosen kit. */
+  readPlans: ['leader', 'partner', 'viewer'],
+  /** Solves and stores a plan. */
+  runPlan: ['leader', 'partner'],
+  /** Simulates a kit picked by hand (nothing is stored). */
+  checkKit: ['leader', 'partner'],
+  /** Stores the chosen kit the packing list and the e-mails use. */
+  chooseKit: ['leader'],
   /** Changes a member's role or gram limit, or removes them. */
   manageMembers: ['leader'],
   /** Invites by e-mail, lists and withdraws invites. */

@@ -1,0 +1,140 @@
+import { resolve } from 'node:path';
+import {
+  Inject,
+  Injectable,
+  type OnModuleDestroy,
+  ServiceUnavailableException,
+  UnprocessableEntityException,
+} from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { type KitSelection, type PlanningInput, PlanningInputError } from '@gramwatt/shared';
+import Piscina from 'piscina';
+import { type PlansConfig, plansConfigKey } from './plans.config';
+import type { PlanSolverAnswer, PlanSolverTask, PlanSolverValues } from './plan-solver-task';
+
+/**
+ * The worker file: a plain ES module beside the package (`server/workers/`), found from this file — `src/plans`
+ * and `dist/plans` are both two levels below the package root — so tests (from src) and the build run the same one.
+ */
+export const defaultPlanWorkerFile = resolve(__dirname, '../../workers/plan-solver.worker.mjs');
+
+/** Injection token of the worker file's path (a test may hand in a slower stand-in). */
+export const PLAN_WORKER_FILE = Symbol.for('gramwatt:PLAN_WORKER_FILE');
+
+/**
+ * The parent's Node flags for the worker threads, without custom export conditions: the workers load the built
+ * `@gramwatt/shared` (its default export), and a parent started with `--conditions development` (the test runner)
+ * would point them at TypeScript sources plain Node cannot load.
+ * @example workerExecArgv(['--conditions', 'development', '--enable-source-maps']) // ['--enable-source-maps']
+ */
+export function workerExecArgv(parentExecArgv: readonly string[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < parentExecArgv.length; i += 1) {
+    const arg = parentExecArgv[i] as string;
+    if (arg === '--conditions' || arg === '-C') i += 1;
+    else if (!arg.startsWith('--conditions=')) out.push(arg);
+  }
+  return out;
+}
+
+/** Every thread and queue place is taken: 503 with `Retry-After`. */
+export class PlanSolverBusyException extends ServiceUnavailableException {
+  constructor(readonly retryAfterS: number) {
+    super(`The planner is busy with other plans: try again in ${retryAfterS} s`);
+  }
+}
+
+/** A timed run: the value, the thread it ran on, and the time from queueing to answer. */
+export interface SolverRun<V> {
+  value: V;
+  threadId: number;
+  durationMs: number;
+}
+
+/**
+ * Runs plans, hand checks and kit evaluations in a pool of worker threads, so a solve never blocks the event
+ * loop. At most `workerThreads` run at once and `queueMax` wait; one more is refused at once (503). A plan gets
+ * `timeLimitMs` from its arrival (queue wait included) and stops itself with the best kit it has verified; a task
+ * still running `stopGraceMs` later is stopped (its thread is ended and replaced) and answered 422, since no kit
+ * was verified in time.
+ */
+@Injectable()
+export class PlanSolver implements OnModuleDestroy {
+  private readonly config: PlansConfig;
+  private readonly pool: Piscina<PlanSolverTask, PlanSolverAnswer>;
+  private inFlight = 0;
+
+  constructor(config: ConfigService, @Inject(PLAN_WORKER_FILE) workerFile: string) {
+    this.config = config.getOrThrow<PlansConfig>(plansConfigKey);
+    this.pool = new Piscina({
+      filename: workerFile,
+      execArgv: workerExecArgv(process.execArgv),
+      // Threads start on the first solve, and end after a minute idle: a server that never plans holds none.
+      minThreads: 0,
+      maxThreads: this.config.workerThreads,
+      idleTimeout: 60_000,
+      // Admission is counted here (see `admit`), so the pool's own queue never refuses.
+      maxQueue: Infinity,
+    });
+  }
+
+  /** Solves a whole plan (optimum, and swaps and gram prices when `withExtras`). */
+  plan(input: PlanningInput, withExtras = true): Promise<SolverRun<PlanSolverValues['plan']>> {
+    const deadlineMs = Date.now() + this.config.timeLimitMs;
+    return this.run<PlanSolverValues['plan']>({ kind: 'plan', input, deadlineMs, withExtras });
+  }
+
+  /** Simulates a hand-picked kit and finds the changes that shave grams. */
+  check(input: PlanningInput, selection: KitSelection): Promise<SolverRun<PlanSolverValues['check']>> {
+    return this.run<PlanSolverValues['check']>({ kind: 'check', input, selection });
+  }
+
+  /** Simulates a kit (the chosen kit): its lines with grams and its evaluation. */
+  evaluate(input: PlanningInput, selection: KitSelection): Promise<SolverRun<PlanSolverValues['evaluate']>> {
+    return this.run<PlanSolverValues['evaluate']>({ kind: 'evaluate', input, selection });
+  }
+
+  /** Tasks running or waiting now. */
+  get load(): number {
+    return this.inFlight;
+  }
+
+  async onModuleDestroy(): Promise<void> {
+    await this.pool.destroy();
+  }
+
+  private async run<V>(task: PlanSolverTask): Promise<SolverRun<V>> {
+    this.admit();
+    const startedMs = performance.now();
+    try {
+      const signal = AbortSignal.timeout(this.config.timeLimitMs + this.config.stopGraceMs);
+      let answer: PlanSolverAnswer;
+      try {
+        answer = await this.pool.run(task, { signal });
+      } catch (error) {
+        if (signal.aborted) throw this.timedOut(task.kind);
+        throw error;
+      }
+      // A selection the input does not hold (the service checks first; this is the engine's own word on it).
+      if (answer.kind === 'input-error') throw new PlanningInputError(answer.path, answer.message);
+      return { value: answer.value as V, threadId: answer.threadId, durationMs: Math.round(performance.now() - startedMs) };
+    } finally {
+      this.inFlight -= 1;
+    }
+  }
+
+  private admit(): void {
+    if (this.inFlight >= this.config.workerThreads + this.config.queueMax) {
+      throw new PlanSolverBusyException(this.config.retryAfterS);
+    }
+    this.inFlight += 1;
+  }
+
+  private timedOut(kind: PlanSolverTask['kind']): UnprocessableEntityException {
+    const seconds = (this.config.timeLimitMs + this.config.stopGraceMs) / 1000;
+    const what = kind === 'plan' ? 'No kit could be verified' : 'This kit could not be simulated';
+    return new UnprocessableEntityException(
+      `${what} within ${seconds} s: try fewer items, a shorter trip, or again when the planner is less busy`,
+    );
+  }
+}

@@ -1,0 +1,108 @@
+import { BadRequestException, Inject, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import { type ItemSpec, type KitItemSpec, type PlanningGear, type PlanningInput, toEngineTripDevices } from '@gramwatt/shared';
+import { and, asc, eq, gt, ne } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../database/database.types';
+import { accounts, lockerItems, tripMembers, trips } from '../database/schema';
+import { tripNotFoundMessage } from '../trips/trip-access.service';
+import { TripDevicesService } from '../trips/trip-devices.service';
+import { storedSolarInput } from '../trips/trip-view';
+
+/** Shown when a plan or a check is asked for a trip with nothing to power. */
+export const noDevicesMessage = 'This trip has no devices yet: add the devices you will carry, then plan';
+
+/** Who carries the kit: until the party's gear is pooled, the leader, whose locker it comes from. */
+export interface KitCarrier {
+  accountId: string;
+  displayName: string;
+}
+
+/** A trip's planning input with the carrier of its gear. */
+export interface TripPlanningInput {
+  input: PlanningInput;
+  carrier: KitCarrier;
+}
+
+/** Options of {@link PlanningInputBuilder.forTrip}. */
+export interface ForTripOptions {
+  /** Only these locker items (ids of the leader's power gear); default every item. */
+  itemIds?: readonly string[];
+}
+
+const isKitItemSpec = (spec: ItemSpec): spec is KitItemSpec => spec.kind !== 'device';
+
+/**
+ * Turns a trip into the planner's input: its sun and sky input, its devices with their effective use profiles,
+ * its reserve and gram limit, and the candidate gear — the leader's own locker power gear (every non-device
+ * item, with the units owned). The one place that decides which gear a plan may pick from; pooling the party's
+ * shared items extends `gearFor`.
+ */
+@Injectable()
+export class PlanningInputBuilder {
+  constructor(
+    @Inject(DRIZZLE) private readonly db: Database,
+    private readonly devices: TripDevicesService,
+  ) {}
+
+  /**
+   * The planning input of a trip the caller was let into.
+   * @throws UnprocessableEntityException (422) when the trip has no devices; BadRequestException (400, path
+   * `itemIds.<i>`) when `itemIds` names an item that is not the leader's power gear.
+   */
+  async forTrip(tripId: string, options: ForTripOptions = {}): Promise<TripPlanningInput> {
+    const [trip] = await this.db.select().from(trips).where(eq(trips.id, tripId));
+    if (!trip) throw new NotFoundException(tripNotFoundMessage);
+    const devices = await this.devices.list(tripId);
+    if (devices.length === 0) throw new UnprocessableEntityException(noDevicesMessage);
+    const carrier = await this.leaderOf(tripId);
+    const gear = this.pick(await this.gearFor(carrier), options.itemIds);
+    return {
+      input: {
+        solarInput: storedSolarInput(trip),
+        devices: toEngineTripDevices(devices),
+        deviceNames: Object.fromEntries(devices.map((device) => [device.itemId, device.name])),
+        gear,
+        reserveShare: trip.reserveShare,
+        gramLimitG: trip.gramLimitG,
+      },
+      carrier,
+    };
+  }
+
+  /** The trip's leader (every trip has exactly one). */
+  async leaderOf(tripId: string): Promise<KitCarrier> {
+    const [leader] = await this.db
+      .select({ accountId: tripMembers.accountId, displayName: accounts.displayName })
+      .from(tripMembers)
+      .innerJoin(accounts, eq(accounts.id, tripMembers.accountId))
+      .where(and(eq(tripMembers.tripId, tripId), eq(tripMembers.role, 'leader')));
+    if (!leader) throw new Error(`trip ${tripId} has no leader`);
+    return leader;
+  }
+
+  /** The candidate gear: the carrier's power gear with the units owned, by name. */
+  private async gearFor(carrier: KitCarrier): Promise<PlanningGear[]> {
+    const rows = await this.db
+      .select()
+      .from(lockerItems)
+      .where(and(eq(lockerItems.ownerId, carrier.accountId), ne(lockerItems.kind, 'device'), gt(lockerItems.countOwned, 0)))
+      .orderBy(asc(lockerItems.name), asc(lockerItems.id));
+    return rows.flatMap((row) =>
+      isKitItemSpec(row.spec)
+        ? [{ itemId: row.id, name: row.name, countOwned: row.countOwned, massG: row.massG, spec: row.spec }]
+        : [],
+    );
+  }
+
+  private pick(gear: PlanningGear[], itemIds: readonly string[] | undefined): PlanningGear[] {
+    if (itemIds === undefined) return gear;
+    const known = new Set(gear.map((g) => g.itemId));
+    const errors = itemIds.flatMap((id, i) =>
+      known.has(id) ? [] : [{ path: `itemIds.${i}`, message: 'This item is not among the leader’s power gear' }],
+    );
+    if (errors.length > 0) {
+      throw new BadRequestException({ message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention', errors });
+    }
+    const wanted = new Set(itemIds);
+    return gear.filter((g) => wanted.has(g.itemId));
+  }
+}

@@ -1,0 +1,33 @@
+// The plan solver's worker thread: plans, hand checks and kit evaluations run here, off the server's event loop.
+// A plain ES module on purpose: it runs unchanged beside the server's sources (tests) and its build (dist), and
+// takes the built `@gramwatt/shared`. The task and answer shapes are `PlanSolverTask` and `PlanSolverAnswer` in
+// `src/plans/plan-solver-task.ts`.
+import { threadId } from 'node:worker_threads';
+import { checkKit, evaluateKit, planKit, planningContext, planTrip, PlanningInputError } from '@gramwatt/shared';
+
+/** Runs one task; a selection the input does not hold comes back as an `input-error` (an Error loses its path between threads). */
+export default function solve(task) {
+  try {
+    return { kind: 'done', threadId, value: run(task) };
+  } catch (error) {
+    if (error instanceof PlanningInputError) return { kind: 'input-error', threadId, path: error.path, message: error.message };
+    throw error;
+  }
+}
+
+function run(task) {
+  switch (task.kind) {
+    case 'plan':
+      // The budget is what is left of the request's time limit after its wait in the queue (same process, same clock).
+      return planTrip(task.input, { now: Date.now, timeBudgetMs: Math.max(1, task.deadlineMs - Date.now()), withExtras: task.withExtras });
+    case 'check':
+      return checkKit(task.input, task.selection);
+    case 'evaluate': {
+      const context = planningContext(task.input);
+      const counts = new Map(task.selection.map((line) => [line.itemId, line.count]));
+      return { kit: planKit(context, counts), evaluation: evaluateKit(context, counts) };
+    }
+    default:
+      throw new Error(`Unknown plan solver task ${String(task.kind)}`);
+  }
+}

@@ -49,6 +49,7 @@ describe('discharge current against the maker’s continuous rating', () => {
   it('no maker rating: a warning that it cannot be checked', () => {
     const check = checkDischargeCurrent({ capacityAh: 6 }, 2);
     expect(check.warning?.id).toBe('discharge-rating-missing');
+    expect(check.warning?.severity).toBe('warning');
     expect(check.maxDischargeA).toBeUndefined();
   });
 });

@@ -11,7 +11,7 @@ export interface DischargeCheck {
 
 /**
  * Checks a steady draw (e.g. a radio's transmit current) against the maker's continuous discharge rating, A =
- * discharge C-rate × Ah. A warning when the draw exceeds it, and a softer one when the maker gives no rating (the
+ * discharge C-rate × Ah. A warning when the draw exceeds it, and also a warning when the maker gives no rating (the
  * pack's protection circuit may cut out under a transmit peak).
  * @example checkDischargeCurrent({ chemistry: 'lifepo4', cellsInSeries: 4, capacityAh: 3, dischargeCRate: 1 }, 4).warning?.id // 'discharge-over-rating'
  */
@@ -25,7 +25,7 @@ export function checkDischargeCurrent(
       drawCRate,
       warning: {
         id: 'discharge-rating-missing',
-        severity: 'info',
+        severity: 'warning',
         text: `The pack has no continuous discharge rating from its maker, so a draw of ${round1(currentA)} A (${round2(drawCRate)}C) cannot be checked. Look it up before running a radio from it.`,
       },
     };

@@ -33,6 +33,18 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
     hydrateFallbackElement: <PageSpinner />,
   },
   {
+    path: paths.links.invite.path,
+    lazy: () => import('./routes/invite').then(convert(queryClient)),
+    errorElement: <RootRouteError />,
+    hydrateFallbackElement: <PageSpinner />,
+  },
+  {
+    path: paths.links.sharedTrip.path,
+    lazy: () => import('./routes/shared-trip').then(convert(queryClient)),
+    errorElement: <RootRouteError />,
+    hydrateFallbackElement: <PageSpinner />,
+  },
+  {
     path: paths.home.path,
     lazy: () => import('./routes/app/root').then(convert(queryClient)),
     errorElement: <RootRouteError />,
@@ -61,6 +73,11 @@ export const createAppRoutes = (queryClient: QueryClient): RouteObject[] => [
             path: paths.app.adminAccounts.path,
             lazy: () => import('./routes/app/admin/accounts').then(convert(queryClient)),
           },
+          {
+            path: paths.app.adminMail.path,
+            lazy: () => import('./routes/app/admin/mail').then(convert(queryClient)),
+          },
+          { path: paths.app.outbox.path, lazy: () => import('./routes/app/outbox').then(convert(queryClient)) },
         ],
       },
     ],

@@ -50,6 +50,26 @@ export const paths = {
       path: '/admin/accounts',
       getHref: () => '/admin/accounts',
     },
+    adminMail: {
+      path: '/admin/mail',
+      getHref: () => '/admin/mail',
+    },
+    outbox: {
+      path: '/outbox',
+      /** `messageId` opens one message beside the list. */
+      getHref: (messageId?: string | null) => `/outbox${messageId ? `?message=${encodeURIComponent(messageId)}` : ''}`,
+    },
+  },
+  /** Pages anyone holding the link may open, signed in or not. */
+  links: {
+    invite: {
+      path: '/invites/:token',
+      getHref: (token: string) => `/invites/${encodeURIComponent(token)}`,
+    },
+    sharedTrip: {
+      path: '/share/:token',
+      getHref: (token: string) => `/share/${encodeURIComponent(token)}`,
+    },
   },
 } as const;
 

@@ -13,10 +13,14 @@ interface NavItem {
   to: string;
 }
 
-/** The main sections; Admin only for admins (the server refuses the rest anyway). */
-export const navItemsFor = (account: Account): NavItem[] => [
+/**
+ * The main sections; Outbox only while the server keeps mail local (with real SMTP there is none to read);
+ * Admin only for admins (the server refuses the rest anyway).
+ */
+export const navItemsFor = (account: Account, { showOutbox = false } = {}): NavItem[] => [
   { label: 'Locker', to: paths.app.locker.getHref() },
   { label: 'Trips', to: paths.app.trips.getHref() },
+  ...(showOutbox ? [{ label: 'Outbox', to: paths.app.outbox.getHref() }] : []),
   ...(account.role === 'admin' ? [{ label: 'Admin', to: paths.app.adminAccounts.getHref() }] : []),
 ];
 
@@ -77,9 +81,18 @@ const phoneLinkClasses = ({ isActive }: { isActive: boolean }) =>
   );
 
 /** The signed-in frame: header with navigation and account menu, the page, a short footer. */
-export function AppLayout({ account, children }: { account: Account; children: ReactNode }) {
+export function AppLayout({
+  account,
+  showOutbox = false,
+  children,
+}: {
+  account: Account;
+  /** Whether mail stays on this server, so the Outbox section has something to show. */
+  showOutbox?: boolean;
+  children: ReactNode;
+}) {
   const navigation = useNavigation();
-  const items = navItemsFor(account);
+  const items = navItemsFor(account, { showOutbox });
   return (
     <div className="flex min-h-dvh flex-col bg-firn-50">
       <a

@@ -1,6 +1,7 @@
 import type { Account } from '@gramwatt/shared';
 import { buildAccount, testPassword } from '../data';
 import { resetLockerDb } from './locker-db';
+import { resetPartyDb } from './party-db';
 
 /** The fake server's state: accounts with their passwords, and who holds the session cookie. */
 interface MockDb {
@@ -16,6 +17,7 @@ export const resetDb = () => {
   db.passwords = new Map();
   db.sessionAccountId = null;
   resetLockerDb();
+  resetPartyDb();
 };
 
 /** Adds an account the fake server knows, optionally signed in. */

@@ -3,6 +3,7 @@ import { http, HttpResponse } from 'msw';
 import { buildAccount } from '../data';
 import { db, sessionAccount } from './db';
 import { lockerHandlers } from './locker-handlers';
+import { partyHandlers } from './party-handlers';
 
 const apiError = (statusCode: number, message: string, errors: Array<{ path: string; message: string }> = []) =>
   HttpResponse.json({ statusCode, message, errors }, { status: statusCode });
@@ -79,4 +80,5 @@ export const handlers = [
   }),
 
   ...lockerHandlers,
+  ...partyHandlers,
 ];

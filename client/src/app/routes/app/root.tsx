@@ -4,6 +4,7 @@ import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { AppLayout } from '@/components/layouts/app-layout';
 import { PageSpinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
+import { useOutboxIsLocal } from '@/features/outbox/api/get-outbox-status';
 import { requireAccount, useAccount } from '@/lib/auth';
 
 export const clientLoader =
@@ -15,11 +16,12 @@ export const clientLoader =
 export default function AppRoot() {
   const account = useAccount();
   const location = useLocation();
+  const showOutbox = useOutboxIsLocal();
   if (account.isPending) return <PageSpinner />;
   if (!account.data)
     return <Navigate to={paths.auth.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   return (
-    <AppLayout account={account.data}>
+    <AppLayout account={account.data} showOutbox={showOutbox}>
       <Outlet />
     </AppLayout>
   );

@@ -3,6 +3,7 @@ import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/layouts/app-layout';
 import { PageTitle } from '@/components/seo/page-title';
 import { paths } from '@/config/paths';
+import { PartyTab } from '@/features/party/components/party-tab';
 import { PackingListTab, PlanTab, TryKitTab } from '@/features/plan';
 import { getTripQueryOptions, useTrip } from '@/features/trips/api/get-trip';
 import { TripDetailPage, type TripTab } from '@/features/trips/components/trip-detail-page';
@@ -20,6 +21,7 @@ const tripTabs: readonly TripTab[] = [
   { name: 'Plan', Panel: PlanTab },
   { name: 'Try a kit', Panel: TryKitTab },
   { name: 'Packing list', Panel: PackingListTab },
+  { name: 'Party', Panel: PartyTab },
 ];
 
 export default function TripDetailRoute() {

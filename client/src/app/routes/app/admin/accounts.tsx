@@ -2,6 +2,8 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/layouts/app-layout';
 import { PageTitle } from '@/components/seo/page-title';
+import { TextLink } from '@/components/ui/text-link';
+import { paths } from '@/config/paths';
 import { getAccountsQueryOptions } from '@/features/admin/api/get-accounts';
 import { AccountsTable } from '@/features/admin/components/accounts-table';
 import { requireRole } from '@/lib/auth';
@@ -20,7 +22,9 @@ export default function AdminAccountsRoute() {
     <>
       <PageTitle title="Accounts" />
       <PageHeader title="Accounts">
-        Change who is an admin, or stop an account from signing in. There is always at least one admin.
+        Change who is an admin, or stop an account from signing in. There is always at least one admin.{' '}
+        <TextLink to={paths.app.adminMail.getHref()}>Mail delivery</TextLink> ·{' '}
+        <TextLink to={paths.app.adminCatalogue.getHref()}>Catalogue entries</TextLink>
       </PageHeader>
       <AccountsTable />
     </>

@@ -1,7 +1,7 @@
 import { kitLines, kitMassG } from '../optimisation/kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions } from '../optimisation/kit-search.js';
 import { optimiseKit } from '../optimisation/optimise.js';
-import type { KitChoice, KitCounts, OptimisationProblem, SearchStats } from '../optimisation/types.js';
+import type { KitChoice, KitCounts, KitJudge, OptimisationProblem, SearchStats } from '../optimisation/types.js';
 import { splitKit, type SplitOptions } from './split-kit.js';
 import type { KitSplit, PartyAnswer, PartyProblem, PartyStats } from './types.js';
 
@@ -76,21 +76,26 @@ function statsOf(search: KitSearch, party: { unsplittableKits: number; supersetC
  * checks it; a kit that cannot be shared is cut off (with every kit holding it when grams alone rule it out, alone
  * otherwise) and the next lightest is tried, in bounded rounds. A proposed kit heavier than Σ limits ends the search:
  * no kit from there on can be shared. When no kit fits, the answer is the lightest feasible kit with its best split,
- * naming each person's overage.
+ * naming each person's overage. Pass the search to go on with it afterwards (the swaps do).
  * @example optimisePartyKit(party, judge).status // 'optimal'
  */
 export function optimisePartyKit(
   party: PartyProblem,
-  judge: Parameters<typeof optimiseKit>[1],
+  judge: KitJudge,
   options: PartyOptions = {},
+  search: KitSearch = createKitSearch(
+    { candidates: party.problem.candidates, coefficients: party.problem.coefficients },
+    judge,
+    options,
+  ),
 ): PartyAnswer {
   const problem: OptimisationProblem = {
     candidates: party.problem.candidates,
     coefficients: party.problem.coefficients,
   };
-  const search = createKitSearch(problem, judge, options);
   const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
   const counters = { unsplittableKits: 0, supersetCuts: 0 };
+  // A search made on a problem with a gram limit may call the lightest kit `over-limit`: the party's limits rule here.
   const first = optimiseKit(problem, judge, options, search);
   if (first.status === 'nothing-feasible')
     return { status: 'nothing-feasible', answer: first, stats: statsOf(search, counters), notes: first.notes };

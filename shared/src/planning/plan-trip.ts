@@ -1,5 +1,5 @@
 import { kitCounts } from '../optimisation/kit.js';
-import { createKitSearch } from '../optimisation/kit-search.js';
+import { createKitSearch, type KitSearch } from '../optimisation/kit-search.js';
 import { findSwaps, optimiseKit } from '../optimisation/optimise.js';
 import { freeSteps, gramPrice } from '../optimisation/gram-price.js';
 import type { KitCounts, OptimiseAnswer } from '../optimisation/types.js';
@@ -25,6 +25,11 @@ export interface PlanOptions {
   timeBudgetMs?: number;
   /** Swaps and gram prices too (default true). */
   withExtras?: boolean;
+  /**
+   * Picks the kit in place of the optimiser's lightest (the party's solver does), given the context and the search the
+   * swaps go on with. Default: `optimiseKit`.
+   */
+  chooseKit?: (context: PlanningContext, search: KitSearch, options: { now: () => number; timeBudgetMs?: number }) => OptimiseAnswer;
 }
 
 const stillClock = (): number => 0;
@@ -175,7 +180,9 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   const left = (): { timeBudgetMs?: number } => (deadline === Infinity ? {} : { timeBudgetMs: Math.max(1, deadline - now()) });
   const context = planningContext(input);
   const search = createKitSearch(context.problem, context.judge, { now, ...left() });
-  const answer = optimiseKit(context.problem, context.judge, { now, ...left() }, search);
+  const answer = options.chooseKit
+    ? options.chooseKit(context, search, { now, ...left() })
+    : optimiseKit(context.problem, context.judge, { now, ...left() }, search);
   const optimumMs = now() - startMs;
   const notes = [...answer.notes];
   const stats = { ...answer.stats, optimumMs, totalMs: optimumMs };

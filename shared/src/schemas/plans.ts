@@ -59,12 +59,28 @@ export const planKitLineSchema = z.object({
 });
 export type PlanKitLine = z.infer<typeof planKitLineSchema>;
 
+/**
+ * One carrier's share of a party's kit: the lines they carry, their grams against their own limit (null: none) and
+ * the grams over it (0 when within it).
+ */
+export const planCarrierSchema = z.object({
+  memberId: z.string(),
+  name: z.string(),
+  lines: z.array(planKitLineSchema),
+  massG: z.number(),
+  gramLimitG: z.number().nullable(),
+  overG: z.number(),
+});
+export type PlanCarrier = z.infer<typeof planCarrierSchema>;
+
 export const planKitSchema = z.object({
   lines: z.array(planKitLineSchema),
   massG: z.number(),
   gramLimitG: z.number().nullable(),
   /** Grams over the limit, or null when within it (or no limit). */
   overLimitG: z.number().nullable(),
+  /** A party's plan: who carries what (every leader and partner, also those who carry nothing). Absent for one hiker. */
+  carriers: z.array(planCarrierSchema).optional(),
 });
 export type PlanKit = z.infer<typeof planKitSchema>;
 

@@ -25,7 +25,7 @@ export interface PartyPlanning {
 }
 
 /**
- * The walking rule's feeds for the pooled gear: for each panel, every bank its plug fits directly, or with one lead
+ * The walking rule's feeds for the pooled gear: for each USB panel, every bank its plug fits directly, or with one lead
  * whose ends join them (the same hop rule as the simulation's, `joinPorts`).
  * @example walkingFeedsOf(gear)[0].alternatives // [{ itemIds: ['bank-1'] }, { itemIds: ['bank-2', 'lead-1'] }]
  */
@@ -34,7 +34,8 @@ export function walkingFeedsOf(gear: readonly PlanningGear[]): WalkingFeed[] {
   const banks = owned.filter((g): g is PlanningGear & { spec: BankSpec } => g.spec.kind === 'bank');
   const leads: KitLead[] = owned.flatMap((g) => (g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec }] : []));
   return owned
-    .filter((g): g is PlanningGear & { spec: UsbPanelSpec } => g.spec.kind === 'panel')
+    // USB panels fill banks; a 12 V panel's walking feed (controller and battery) joins when the 12 V path is planned.
+    .filter((g): g is PlanningGear & { spec: UsbPanelSpec } => g.spec.kind === 'panel' && g.spec.panelType === 'usb')
     .map((panel) => ({
       panelItemId: panel.itemId,
       alternatives: banks.flatMap((bank): PathAlternative[] => {

@@ -4,4 +4,4 @@ export { planningContext, type PlanningContext } from './build-problem.js';
 export { evaluateKit, planKit } from './evaluate-kit.js';
 export { planTrip, planModelVersion, type PlanOptions } from './plan-trip.js';
 export { checkKit } from './check-kit.js';
-export { planParty, partyProblemOf, walkingFeedsOf, type PartyPlanning, type PartyPlanningMember } from './plan-party.js';
+export { planParty, partyCarriers, partyProblemOf, walkingFeedsOf } from './plan-party.js';

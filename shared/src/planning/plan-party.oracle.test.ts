@@ -15,8 +15,8 @@ import { bruteForceSplitCost, exhaustivePartyAnswer, keepsWalkingRule } from '..
 import type { PlanResult } from '../schemas/plans.js';
 import { randomPlanningInput } from '../testing/random-planning.js';
 import { planningContext } from './build-problem.js';
-import { partyProblemOf, planParty, type PartyPlanning } from './plan-party.js';
-import type { PlanningInput } from './planning-input.js';
+import { partyProblemOf, planParty } from './plan-party.js';
+import type { PartyPlanning, PlanningInput } from './planning-input.js';
 
 const caseCount = 120;
 const names = ['Wren', 'Tamsin', 'Odile'];

@@ -8,21 +8,7 @@ import { joinPorts, type KitLead } from '../simulation/connections.js';
 import type { PlanningContext } from './build-problem.js';
 import { gramsText, listText } from './plain-words.js';
 import { planTrip, type PlanOptions } from './plan-trip.js';
-import type { PlanningGear, PlanningInput } from './planning-input.js';
-
-/** Someone who carries the party's gear (the leader or a partner), with their own gram limit (null: none). */
-export interface PartyPlanningMember {
-  memberId: string;
-  name: string;
-  gramLimitG: number | null;
-}
-
-/** The party around a planning input: who carries, and who owns each pooled item (by item id). */
-export interface PartyPlanning {
-  /** At least one. */
-  members: readonly PartyPlanningMember[];
-  ownerByItemId: Readonly<Record<string, string>>;
-}
+import type { PartyPlanning, PlanningGear, PlanningInput } from './planning-input.js';
 
 /**
  * The walking rule's feeds for the pooled gear: for each USB panel, every bank its plug fits directly, or with one lead
@@ -33,21 +19,23 @@ export function walkingFeedsOf(gear: readonly PlanningGear[]): WalkingFeed[] {
   const owned = gear.filter((g) => g.countOwned > 0);
   const banks = owned.filter((g): g is PlanningGear & { spec: BankSpec } => g.spec.kind === 'bank');
   const leads: KitLead[] = owned.flatMap((g) => (g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec }] : []));
-  return owned
-    // USB panels fill banks; a 12 V panel's walking feed (controller and battery) joins when the 12 V path is planned.
-    .filter((g): g is PlanningGear & { spec: UsbPanelSpec } => g.spec.kind === 'panel' && g.spec.panelType === 'usb')
-    .map((panel) => ({
-      panelItemId: panel.itemId,
-      alternatives: banks.flatMap((bank): PathAlternative[] => {
-        if (joinPorts(panel.spec.outputPort, bank.spec.inputPort, []).joined) return [{ itemIds: [bank.itemId] }];
-        return leads
-          .filter((lead) => {
-            const hop = joinPorts(panel.spec.outputPort, bank.spec.inputPort, [lead]);
-            return hop.joined && hop.leadItemId === lead.itemId;
-          })
-          .map((lead) => ({ itemIds: [bank.itemId, lead.itemId] }));
-      }),
-    }));
+  return (
+    owned
+      // USB panels fill banks; a 12 V panel's walking feed (controller and battery) joins when the 12 V path is planned.
+      .filter((g): g is PlanningGear & { spec: UsbPanelSpec } => g.spec.kind === 'panel' && g.spec.panelType === 'usb')
+      .map((panel) => ({
+        panelItemId: panel.itemId,
+        alternatives: banks.flatMap((bank): PathAlternative[] => {
+          if (joinPorts(panel.spec.outputPort, bank.spec.inputPort, []).joined) return [{ itemIds: [bank.itemId] }];
+          return leads
+            .filter((lead) => {
+              const hop = joinPorts(panel.spec.outputPort, bank.spec.inputPort, [lead]);
+              return hop.joined && hop.leadItemId === lead.itemId;
+            })
+            .map((lead) => ({ itemIds: [bank.itemId, lead.itemId] }));
+        }),
+      }))
+  );
 }
 
 /** The party's problem for a planning context: the pooled candidates and daily model, carriers, owners, feeds. */
@@ -103,6 +91,14 @@ function planCarriers(context: PlanningContext, party: PartyPlanning, split: Kit
     gramLimitG: c.gramLimitG,
     overG: c.overG,
   }));
+}
+
+/**
+ * Who carries what of a kit in a party (the best split under the walking rule): for a kit chosen by hand or a swap.
+ * @example partyCarriers(context, party, counts).map((c) => c.massG) // [640, 410]
+ */
+export function partyCarriers(context: PlanningContext, party: PartyPlanning, counts: KitCounts): PlanCarrier[] {
+  return planCarriers(context, party, bestSplit(partyProblemOf(context, party), counts));
 }
 
 /** "Wren would carry 1,020 g, 120 g over a 900 g limit" for each person over. */

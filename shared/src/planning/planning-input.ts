@@ -11,6 +11,25 @@ export interface PlanningGear {
   spec: KitItemSpec;
 }
 
+/** Someone who carries the party's gear (the leader or a partner), with their own gram limit (null: none). */
+export interface PartyPlanningMember {
+  memberId: string;
+  name: string;
+  gramLimitG: number | null;
+  /**
+   * A party's trip: the carriers and the owners of the pooled gear (`planParty` shares the kit out among them).
+   * Absent or null: one hiker carries everything.
+   */
+  party?: PartyPlanning | null;
+}
+
+/** The party around a planning input: who carries, and who owns each pooled item (by item id). */
+export interface PartyPlanning {
+  /** At least one. */
+  members: readonly PartyPlanningMember[];
+  ownerByItemId: Readonly<Record<string, string>>;
+}
+
 /** Everything a plan or a check needs: the trip's sun and sky input, its devices, the gear, reserve and gram limit. */
 export interface PlanningInput {
   solarInput: TripSolarInput;

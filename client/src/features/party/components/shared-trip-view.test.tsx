@@ -1,0 +1,79 @@
+import type { SharedTrip } from '@gramwatt/shared';
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { partyDb } from '@/testing/mocks/party-db';
+import { renderApp } from '@/testing/test-utils';
+
+/** An invented trip as a share link shows it. */
+const sharedTrip: SharedTrip = {
+  name: 'Invented lakes loop',
+  startDate: '2027-07-12',
+  endDate: '2027-07-16',
+  nights: 4,
+  latitudeDeg: 61.2034,
+  longitudeDeg: -9.8012,
+  timeZone: 'Etc/GMT+1',
+  gramLimitG: 1500,
+  members: [
+    { displayName: 'Ash Leader', role: 'leader' },
+    { displayName: 'Cal Home', role: 'viewer' },
+  ],
+  devices: [{ name: 'Invented handheld', deviceKind: 'radio', carrierName: 'Ash Leader' }],
+  plan: {
+    verdict: 'Keeps up: 31 % to spare on the worst day.',
+    kitMassG: 612,
+    carriers: [
+      {
+        name: 'Ash Leader',
+        massG: 612,
+        items: [
+          { name: 'Invented fold panel', count: 1 },
+          { name: 'Invented bank', count: 2 },
+        ],
+      },
+    ],
+    cautions: ['Fuse DC leads on the positive side close to the battery.'],
+  },
+  linkExpiresAt: '2027-08-01T10:00:00.000Z',
+};
+
+describe('the shared trip page', () => {
+  it('shows dates, start point, party, devices, the kit per carrier and the cautions, with no account', async () => {
+    partyDb.sharedTrips.set('good', sharedTrip);
+    await renderApp('/share/good');
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Invented lakes loop' })).toBeInTheDocument();
+    expect(screen.getByText('12 Jul 2027 to 16 Jul 2027 (4 nights)')).toBeInTheDocument();
+    expect(screen.getByText('61.2034° N, 9.8012° W')).toBeInTheDocument();
+    const party = within(screen.getByRole('region', { name: 'The party' }));
+    expect(party.getByText('Cal Home').parentElement).toHaveTextContent('Viewer');
+    expect(screen.getByRole('region', { name: 'Devices' })).toHaveTextContent(
+      'Invented handheld (radio), carried by Ash Leader',
+    );
+    const kit = within(screen.getByRole('region', { name: 'The kit' }));
+    expect(kit.getByText('Keeps up: 31 % to spare on the worst day.')).toBeInTheDocument();
+    expect(kit.getByText('2 × Invented bank')).toBeInTheDocument();
+    const cautions = screen.getByRole('region', { name: 'Cautions' });
+    expect(cautions).toHaveTextContent('Fuse DC leads');
+    expect(cautions).toHaveTextContent('Figures are estimates');
+    expect(screen.queryByRole('navigation')).toBeNull();
+  });
+
+  it('says when the leader has not chosen a kit yet', async () => {
+    partyDb.sharedTrips.set('no-plan', { ...sharedTrip, plan: null });
+    await renderApp('/share/no-plan');
+    expect(await screen.findByText(/has not chosen a kit yet/)).toBeInTheDocument();
+  });
+
+  it('says a revoked link no longer works, and an unknown one is not recognised', async () => {
+    partyDb.sharedTrips.set('gone', { status: 410, message: 'This share link was revoked by the trip leader' });
+    await renderApp('/share/gone');
+    expect(await screen.findByRole('heading', { level: 1, name: 'This link no longer works' })).toBeInTheDocument();
+    expect(screen.getByText('This share link was revoked by the trip leader.')).toBeInTheDocument();
+  });
+
+  it('says an unknown link is not recognised', async () => {
+    await renderApp('/share/never-made');
+    expect(await screen.findByRole('heading', { level: 1, name: 'This link is not recognised' })).toBeInTheDocument();
+  });
+});

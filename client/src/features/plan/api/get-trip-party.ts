@@ -1,0 +1,26 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Trip } from '@gramwatt/shared';
+import { api } from '@/lib/api-client';
+import { tripPath } from './trip-path';
+
+/** `GET /api/trips/:id` under the trip page's own cache key: the packing list needs its members and devices. */
+export const getTripQueryOptions = (tripId: string) =>
+  queryOptions({
+    queryKey: ['trips', tripId],
+    queryFn: async ({ signal }) => (await api.get<{ trip: Trip }>(tripPath(tripId), signal)).trip,
+  });
+
+/** The trip's name and dates, who carries the kit (the leader, until the party carries gear) and its devices. */
+export const useTripParty = (tripId: string) =>
+  useQuery({
+    ...getTripQueryOptions(tripId),
+    select: (trip) => ({
+      name: trip.name,
+      startDate: trip.startDate,
+      endDate: trip.endDate,
+      days: trip.nights + 1,
+      timeZone: trip.timeZone,
+      leader: trip.members.find((member) => member.role === 'leader') ?? null,
+      devices: trip.devices,
+    }),
+  });

@@ -1,0 +1,45 @@
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { useChosenKit } from '../api/get-chosen-kit';
+import { useTripParty } from '../api/get-trip-party';
+import type { PlanTabProps } from '../types';
+import { formatDate } from '../utils/format';
+import { PackingList } from './packing-list';
+import './packing-list-print.css';
+import { TabError, TabLoading } from './tab-states';
+
+/** The Packing list tab: the chosen kit as a list to pack and print. */
+export function PackingListTab({ tripId }: PlanTabProps) {
+  const chosen = useChosenKit(tripId);
+  const party = useTripParty(tripId);
+
+  if (chosen.isPending || party.isPending) return <TabLoading label="Loading the packing list" />;
+  if (chosen.isError) return <TabError title="The chosen kit could not be loaded" error={chosen.error} />;
+  if (party.isError) return <TabError title="The trip could not be loaded" error={party.error} />;
+  if (!chosen.data)
+    return (
+      <EmptyState title="No kit chosen yet">
+        Find the lightest kit on the Plan tab, or pick one on Try a kit, and the packing list follows from it.
+      </EmptyState>
+    );
+
+  return (
+    <article data-print-root aria-labelledby="packing-list-heading" className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h2 id="packing-list-heading" className="text-lg font-semibold text-scree-950">
+            Packing list: {party.data.name}
+          </h2>
+          <p className="text-sm text-scree-700">
+            {formatDate(party.data.startDate)} to {formatDate(party.data.endDate)} · {party.data.days} days · times in{' '}
+            {party.data.timeZone}
+          </p>
+        </div>
+        <Button variant="secondary" onClick={() => window.print()}>
+          Print
+        </Button>
+      </div>
+      <PackingList chosen={chosen.data} carrier={party.data.leader} devices={party.data.devices} />
+    </article>
+  );
+}

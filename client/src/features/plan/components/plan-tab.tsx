@@ -1,0 +1,64 @@
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { usePlan } from '../api/get-plan';
+import { usePlans } from '../api/get-plans';
+import type { PlanTabProps } from '../types';
+import { PlanView } from './plan-view';
+import { SolveAction } from './solve-action';
+import { TabError, TabLoading } from './tab-states';
+
+/** The Plan tab: the newest stored plan of the trip, and the action that finds the lightest kit again. */
+export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
+  const plans = usePlans(tripId);
+  const [solvedId, setSolvedId] = useState<string | null>(null);
+  const latestId = plans.data?.[0]?.id;
+  const plan = usePlan(tripId, latestId);
+
+  const solve = canSolve && (
+    <SolveAction tripId={tripId} hasPlan={latestId !== undefined} onSolved={(p) => setSolvedId(p.id)} />
+  );
+
+  if (plans.isPending) return <TabLoading label="Loading the plans" />;
+  if (plans.isError)
+    return (
+      <TabError
+        title="The plans could not be loaded"
+        error={plans.error}
+        retry={
+          <Button variant="secondary" size="sm" onClick={() => void plans.refetch()}>
+            Try again
+          </Button>
+        }
+      />
+    );
+  if (latestId === undefined)
+    return (
+      <div className="flex flex-col gap-4">
+        <EmptyState title="No plan yet — find the lightest kit">
+          {canSolve
+            ? 'Gramwatt weighs the gear in your locker against this trip’s sun, sky and devices, and stores the lightest kit that keeps every device charged.'
+            : 'The trip’s leader or a partner finds the lightest kit; it will show here.'}
+        </EmptyState>
+        {solve}
+      </div>
+    );
+
+  return (
+    <div className="flex flex-col gap-6">
+      {solve}
+      {plan.isPending ? (
+        <TabLoading label="Loading the plan" />
+      ) : plan.isError ? (
+        <TabError title="The plan could not be loaded" error={plan.error} />
+      ) : (
+        <PlanView
+          tripId={tripId}
+          plan={plan.data}
+          canChooseKit={canChooseKit}
+          focusAnswer={plan.data.id === solvedId}
+        />
+      )}
+    </div>
+  );
+}

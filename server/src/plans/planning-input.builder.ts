@@ -1,8 +1,16 @@
 import { BadRequestException, Inject, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
-import { type ItemSpec, type KitItemSpec, type PlanningGear, type PlanningInput, toEngineTripDevices } from '@gramwatt/shared';
-import { and, asc, eq, gt, ne } from 'drizzle-orm';
+import {
+  type ItemSpec,
+  type KitItemSpec,
+  kitItemSpecSchema,
+  type PartyPlanning,
+  type PlanningGear,
+  type PlanningInput,
+  toEngineTripDevices,
+} from '@gramwatt/shared';
+import { and, asc, eq, gt, inArray, ne } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { accounts, lockerItems, tripMembers, trips } from '../database/schema';
+import { accounts, lockerItems, tripMembers, tripPoolItems, trips } from '../database/schema';
 import { tripNotFoundMessage } from '../trips/trip-access.service';
 import { TripDevicesService } from '../trips/trip-devices.service';
 import { storedSolarInput } from '../trips/trip-view';
@@ -24,17 +32,22 @@ export interface TripPlanningInput {
 
 /** Options of {@link PlanningInputBuilder.forTrip}. */
 export interface ForTripOptions {
-  /** Only these locker items (ids of the leader's power gear); default every item. */
+  /** Only these locker items (ids of the pooled power gear); default every item. */
   itemIds?: readonly string[];
 }
 
-const isKitItemSpec = (spec: ItemSpec): spec is KitItemSpec => spec.kind !== 'device';
+/** Whether the planner can pack this item (devices come on the trip anyway; kinds the planner does not model yet stay home). */
+const isKitItemSpec = (spec: ItemSpec): spec is KitItemSpec => kitItemSpecSchema.safeParse(spec).success;
 
 /**
- * Turns a trip into the planner's input: its sun and sky input, its devices with their effective use profiles,
- * its reserve and gram limit, and the candidate gear — the leader's own locker power gear (every non-device
- * item, with the units owned). The one place that decides which gear a plan may pick from; pooling the party's
- * shared items extends `gearFor`.
+ * Turns a trip into the planner's input: its sun and sky input, its devices (every member's) with their effective
+ * use profiles, its reserve and gram limit, and the candidate gear — the party pool. The one place that decides which
+ * gear a plan may pick from:
+ * - the leader's whole locker power gear (every non-device item, with the units owned) while the leader has pooled
+ *   nothing, else only the leader's pool entries — so a trip nobody pooled into plans exactly as a solo trip;
+ * - every partner's pool entries, each at most the units the owner still has.
+ * With at least one partner the input carries the party (leader and partners with their own gram limits, and who owns
+ * each item), and the plan shares the kit out among them.
  */
 @Injectable()
 export class PlanningInputBuilder {
@@ -54,7 +67,8 @@ export class PlanningInputBuilder {
     const devices = await this.devices.list(tripId);
     if (devices.length === 0) throw new UnprocessableEntityException(noDevicesMessage);
     const carrier = await this.leaderOf(tripId);
-    const gear = this.pick(await this.gearFor(carrier), options.itemIds);
+    const pooled = await this.poolFor(tripId, carrier);
+    const gear = this.pick(pooled.gear, options.itemIds);
     return {
       input: {
         solarInput: storedSolarInput(trip),
@@ -63,6 +77,7 @@ export class PlanningInputBuilder {
         gear,
         reserveShare: trip.reserveShare,
         gramLimitG: trip.gramLimitG,
+        party: pooled.party,
       },
       carrier,
     };
@@ -77,6 +92,48 @@ export class PlanningInputBuilder {
       .where(and(eq(tripMembers.tripId, tripId), eq(tripMembers.role, 'leader')));
     if (!leader) throw new Error(`trip ${tripId} has no leader`);
     return leader;
+  }
+
+  /** The pooled gear and, with partners on the trip, the party that carries it. */
+  private async poolFor(tripId: string, leader: KitCarrier): Promise<{ gear: PlanningGear[]; party: PartyPlanning | null }> {
+    const carrierRoles = ['leader', 'partner'] as const;
+    const entries = await this.db
+      .select({ item: lockerItems, count: tripPoolItems.count, ownerId: tripPoolItems.accountId })
+      .from(tripPoolItems)
+      .innerJoin(lockerItems, eq(lockerItems.id, tripPoolItems.itemId))
+      .innerJoin(
+        tripMembers,
+        and(eq(tripMembers.tripId, tripPoolItems.tripId), eq(tripMembers.accountId, tripPoolItems.accountId)),
+      )
+      .where(and(eq(tripPoolItems.tripId, tripId), inArray(tripMembers.role, carrierRoles)))
+      .orderBy(asc(lockerItems.name), asc(lockerItems.id));
+    const leaderPooled = entries.some((entry) => entry.ownerId === leader.accountId);
+    const gear: PlanningGear[] = leaderPooled ? [] : await this.gearFor(leader);
+    const ownerByItemId: Record<string, string> = Object.fromEntries(gear.map((g) => [g.itemId, leader.accountId]));
+    for (const { item, count, ownerId } of entries) {
+      const units = Math.min(count, item.countOwned);
+      if (!isKitItemSpec(item.spec) || units <= 0 || ownerByItemId[item.id] !== undefined) continue;
+      gear.push({ itemId: item.id, name: item.name, countOwned: units, massG: item.massG, spec: item.spec });
+      ownerByItemId[item.id] = ownerId;
+    }
+    const members = await this.db
+      .select({
+        memberId: tripMembers.accountId,
+        name: accounts.displayName,
+        gramLimitG: tripMembers.gramLimitG,
+        role: tripMembers.role,
+      })
+      .from(tripMembers)
+      .innerJoin(accounts, eq(accounts.id, tripMembers.accountId))
+      .where(and(eq(tripMembers.tripId, tripId), inArray(tripMembers.role, carrierRoles)))
+      .orderBy(asc(tripMembers.joinedAt), asc(tripMembers.accountId));
+    if (!members.some((m) => m.role === 'partner')) return { gear, party: null };
+    // The leader first, then the partners in the order they joined.
+    const carriers = [...members].sort((a, b) => Number(b.role === 'leader') - Number(a.role === 'leader'));
+    return {
+      gear,
+      party: { members: carriers.map(({ memberId, name, gramLimitG }) => ({ memberId, name, gramLimitG })), ownerByItemId },
+    };
   }
 
   /** The candidate gear: the carrier's power gear with the units owned, by name. */
@@ -97,7 +154,7 @@ export class PlanningInputBuilder {
     if (itemIds === undefined) return gear;
     const known = new Set(gear.map((g) => g.itemId));
     const errors = itemIds.flatMap((id, i) =>
-      known.has(id) ? [] : [{ path: `itemIds.${i}`, message: 'This item is not among the leader’s power gear' }],
+      known.has(id) ? [] : [{ path: `itemIds.${i}`, message: 'This item is not among the party’s pooled power gear' }],
     );
     if (errors.length > 0) {
       throw new BadRequestException({ message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention', errors });

@@ -1,0 +1,304 @@
+import { threadId as mainThreadId } from 'node:worker_threads';
+import {
+  type ChosenKit,
+  type CheckResult,
+  type PlanRecord,
+  type PlanSummary,
+  checkResultSchema,
+  chosenKitResponseSchema,
+  planListResponseSchema,
+  planModelVersion,
+  planResponseSchema,
+} from '@gramwatt/shared';
+import { UnprocessableEntityException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { type LockerItemRow, tripKits, tripPlans } from '../src/database/schema';
+import { defaultPlanWorkerFile, PlanSolver } from '../src/plans/plan-solver';
+import { noDevicesMessage, PlanningInputBuilder } from '../src/plans/planning-input.builder';
+import { plansConfigKey, readPlansConfig } from '../src/plans/plans.config';
+import { heldPlanWorkerFile, insertLockerItems, planDevices, planGear, planTripBody } from './support/plan-fixtures';
+import { type TestApp, startTestApp } from './support/test-app';
+import { type Hiker, createTrip, errorPaths, insertLockerItem, signedInHiker, testPhoneSpec } from './support/trip-fixtures';
+
+/** The invented high route with the leader's gear and devices, as a member sets it up through the API. */
+async function highRoute(t: TestApp, leader: Hiker) {
+  const gear = await insertLockerItems(t.db, leader.id, planGear);
+  const devices = await insertLockerItems(
+    t.db,
+    leader.id,
+    planDevices.map((d) => d.item),
+  );
+  const trip = await createTrip(t, leader, planTripBody());
+  for (const [i, device] of devices.entries()) {
+    await t
+      .http()
+      .post(`/api/trips/${trip.id}/devices`)
+      .set(leader.auth)
+      .send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null })
+      .expect(201);
+  }
+  return { trip, gear, devices };
+}
+
+const byName = (gear: LockerItemRow[], name: string): LockerItemRow => {
+  const row = gear.find((g) => g.name === name);
+  if (!row) throw new Error(`no ${name} in the fixture`);
+  return row;
+};
+
+describe('plans', () => {
+  let t: TestApp;
+  let leader: Hiker;
+  let outsider: Hiker;
+  let route: Awaited<ReturnType<typeof highRoute>>;
+  let plan: PlanRecord;
+
+  beforeAll(async () => {
+    t = await startTestApp({ env: { PLAN_WORKER_THREADS: '1', PLAN_QUEUE_MAX: '1', PLAN_RETRY_AFTER_S: '7' } });
+    leader = await signedInHiker(t);
+    outsider = await signedInHiker(t);
+    route = await highRoute(t, leader);
+    const solved = await t.http().post(`/api/trips/${route.trip.id}/plans`).set(leader.auth).send({}).expect(201);
+    plan = planResponseSchema.parse(solved.body).plan;
+  });
+
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it('solves the trip on the leader’s locker gear and stores the plan with its input and model version', async () => {
+    expect(plan).toMatchObject({ tripId: route.trip.id, createdBy: leader.id, modelVersion: planModelVersion });
+    expect(plan.durationMs).toBeGreaterThanOrEqual(0);
+    const { result } = plan;
+    expect(result.status).toBe('optimal');
+    const kit = result.kit;
+    if (!kit || !result.evaluation) throw new Error('an optimal plan has a kit and its simulation');
+    // Every line is the leader's power gear, within the units owned; the grams add up; the kit fits the limit.
+    const gearIds = new Map(route.gear.map((g) => [g.id, g]));
+    for (const line of kit.lines) {
+      expect(line.count).toBeLessThanOrEqual(gearIds.get(line.itemId)?.countOwned ?? 0);
+      expect(line.massG).toBe(line.unitMassG * line.count);
+    }
+    expect(kit.massG).toBe(kit.lines.reduce((sum, l) => sum + l.massG, 0));
+    expect(kit.gramLimitG).toBe(1400);
+    expect(kit.massG).toBeLessThanOrEqual(1400);
+    expect(result.evaluation.verdict.status).not.toBe('runs-dry');
+    expect(result.evaluation.cautions.length).toBeGreaterThan(0);
+    expect(result.swaps.length).toBeGreaterThan(0);
+    expect(result.gramPrices.map((p) => p.requirement)).toContain('transmit-minutes');
+    // The snapshot is what was solved: the trip's four devices and every piece of the leader's power gear.
+    const [row] = await t.db.select().from(tripPlans).where(eq(tripPlans.id, plan.id));
+    expect(row?.input.devices).toHaveLength(planDevices.length);
+    expect(row?.input.gear.map((g) => g.itemId).sort()).toEqual(route.gear.map((g) => g.id).sort());
+    expect(row?.input.deviceNames?.[route.devices[0]?.id ?? '']).toBe('Handheld radio, 5 W');
+    expect(row).toMatchObject({ status: 'optimal', massG: kit.massG, headline: result.headline });
+  });
+
+  it('lists plans newest first without answers, and reads one; the default chosen kit is the latest plan’s optimum', async () => {
+    const chosen = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
+    expect(chosenKitResponseSchema.parse(chosen.body).kit).toMatchObject({ source: 'optimum', planId: plan.id, kit: plan.result.kit });
+
+    // A plan on part of the gear: no boost converter, so nothing can charge the 12 V radio.
+    t.clock.advanceS(60);
+    const noConverters = route.gear.filter((g) => g.kind !== 'converter').map((g) => g.id);
+    const partial = await t.http().post(`/api/trips/${route.trip.id}/plans`).set(leader.auth).send({ itemIds: noConverters }).expect(201);
+    const second = planResponseSchema.parse(partial.body).plan;
+    expect(second.result.status).toBe('nothing-feasible');
+    expect(second.result.kit).toBeNull();
+    expect(second.result.nothingFeasible?.missing.join(' ')).toContain('Handheld radio, 5 W');
+
+    const listed = await t.http().get(`/api/trips/${route.trip.id}/plans`).set(leader.auth).expect(200);
+    const plans: PlanSummary[] = planListResponseSchema.parse(listed.body).plans;
+    expect(plans.map((p) => p.id)).toEqual([second.id, plan.id]);
+    expect(plans[1]).toMatchObject({ status: 'optimal', massG: plan.result.kit?.massG, headline: plan.result.headline });
+    expect(listed.body.plans[0]).not.toHaveProperty('result');
+
+    const one = await t.http().get(`/api/trips/${route.trip.id}/plans/${plan.id}`).set(leader.auth).expect(200);
+    expect(one.body.plan).toEqual(plan);
+    // The latest plan found nothing that works: no kit stands in for a choice.
+    const none = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
+    expect(none.body).toEqual({ kit: null });
+  });
+
+  it('answers 400 with the field path for items that are not the leader’s power gear', async () => {
+    const [stranger] = await insertLockerItems(t.db, outsider.id, planGear.slice(0, 1));
+    const bad = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/plans`)
+      .set(leader.auth)
+      .send({ itemIds: [route.gear[0]?.id, stranger?.id, route.devices[0]?.id] })
+      .expect(400);
+    expect(errorPaths(bad)).toEqual(['itemIds.1', 'itemIds.2']);
+  });
+
+  it('hides plans and kits of a trip the caller is not on (404), and another trip’s plan from this trip', async () => {
+    const base = `/api/trips/${route.trip.id}`;
+    await t.http().get(`${base}/plans`).set(outsider.auth).expect(404);
+    await t.http().get(`${base}/plans/${plan.id}`).set(outsider.auth).expect(404);
+    await t.http().post(`${base}/plans`).set(outsider.auth).send({}).expect(404);
+    await t.http().post(`${base}/check`).set(outsider.auth).send({ kit: [] }).expect(404);
+    await t.http().get(`${base}/kit`).set(outsider.auth).expect(404);
+    await t.http().put(`${base}/kit`).set(outsider.auth).send({ kit: [], source: 'hand' }).expect(404);
+
+    // The outsider's own trip cannot reach the leader's plan by id, and their attempts change nothing.
+    const own = await createTrip(t, outsider);
+    await t.http().get(`/api/trips/${own.id}/plans/${plan.id}`).set(outsider.auth).expect(404);
+    await t.http().get(`/api/trips/${own.id}/plans/not-a-uuid`).set(outsider.auth).expect(404);
+    const rows = await t.db.select().from(tripPlans).where(eq(tripPlans.id, plan.id));
+    expect(rows[0]?.tripId).toBe(route.trip.id);
+    expect(await t.db.select().from(tripKits).where(eq(tripKits.tripId, route.trip.id))).toEqual([]);
+  });
+
+  it('checks a hand-picked kit: verdict, ledger and the changes that shave grams', async () => {
+    const kit = plan.result.kit;
+    if (!kit) throw new Error('the plan has a kit');
+    // The optimum plus a panel it left out: still works, and leaving that panel home is a shave.
+    const spare = route.gear.find((g) => g.kind === 'panel' && !kit.lines.some((l) => l.itemId === g.id));
+    if (!spare) throw new Error('the fixture owns a panel the optimum leaves out');
+    const selection = [...kit.lines.map((l) => ({ itemId: l.itemId, count: l.count })), { itemId: spare.id, count: 1 }];
+    const checked = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: selection }).expect(200);
+    const result: CheckResult = checkResultSchema.parse(checked.body);
+    expect(result.kit.massG).toBe(kit.massG + spare.massG);
+    expect(result.evaluation.verdict.status).not.toBe('runs-dry');
+    expect(result.evaluation.ledgers[0]?.days).toHaveLength(6);
+    expect(result.shaves).toContainEqual(
+      expect.objectContaining({ change: { kind: 'remove', itemId: spare.id }, savedG: spare.massG, massG: kit.massG }),
+    );
+    for (const shave of result.shaves) expect(shave.massG).toBe(result.kit.massG - shave.savedG);
+
+    // One bank alone: the radio has no path, so the kit runs dry, and the sentence names the device.
+    const bank = byName(route.gear, 'Knoll 10 000 mAh bank');
+    const thin = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [{ itemId: bank.id, count: 1 }] }).expect(200);
+    expect(thin.body.evaluation.verdict.status).toBe('runs-dry');
+    expect(thin.body.evaluation.verdict.text).not.toContain(route.devices[0]?.id);
+  });
+
+  it('refuses a hand-picked kit with unknown, someone else’s or device items, or more than owned (400 with paths)', async () => {
+    const [theirs] = await insertLockerItems(t.db, outsider.id, planGear.slice(3, 4));
+    const lead = byName(route.gear, 'USB-A to USB-C lead, 30 cm');
+    const bad = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/check`)
+      .set(leader.auth)
+      .send({
+        kit: [
+          { itemId: '00000000-0000-4000-8000-000000000000', count: 1 },
+          { itemId: theirs?.id, count: 1 },
+          { itemId: route.devices[1]?.id, count: 1 },
+          { itemId: lead.id, count: 3 },
+        ],
+      })
+      .expect(400);
+    expect(errorPaths(bad)).toEqual(['kit.0.itemId', 'kit.1.itemId', 'kit.2.itemId', 'kit.3.count']);
+    const body = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [{ itemId: lead.id, count: 0 }] }).expect(400);
+    expect(errorPaths(body)).toEqual(['kit.0.count']);
+  });
+
+  it('stores the chosen kit (a swap), which the share page then carries; a plan id of another trip is refused', async () => {
+    const swap = plan.result.swaps[0];
+    if (!swap) throw new Error('the plan has swaps');
+    const lines = swap.kit.lines.map((l) => ({ itemId: l.itemId, count: l.count }));
+    // The outsider's own trip and plan (their locker has no power gear: it finds nothing, quickly).
+    const own = await createTrip(t, outsider);
+    const phone = await insertLockerItem(t.db, outsider.id, testPhoneSpec());
+    await t.http().post(`/api/trips/${own.id}/devices`).set(outsider.auth).send({ itemId: phone.id }).expect(201);
+    const otherPlan = await t.http().post(`/api/trips/${own.id}/plans`).set(outsider.auth).send({}).expect(201);
+    const refused = await t
+      .http()
+      .put(`/api/trips/${route.trip.id}/kit`)
+      .set(leader.auth)
+      .send({ kit: lines, source: 'swap', planId: otherPlan.body.plan.id })
+      .expect(400);
+    expect(errorPaths(refused)).toEqual(['planId']);
+
+    t.clock.advanceS(60);
+    const stored = await t.http().put(`/api/trips/${route.trip.id}/kit`).set(leader.auth).send({ kit: lines, source: 'swap', planId: plan.id }).expect(200);
+    const chosen: ChosenKit | null = chosenKitResponseSchema.parse(stored.body).kit;
+    expect(chosen).toMatchObject({ source: 'swap', planId: plan.id, updatedAt: t.clock.now().toISOString() });
+    expect(chosen?.kit.massG).toBe(swap.kit.massG);
+    expect(chosen?.kit.lines.map((l) => l.itemId).sort()).toEqual(lines.map((l) => l.itemId).sort());
+    expect(chosen?.evaluation.verdict.status).not.toBe('runs-dry');
+    const read = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
+    expect(read.body).toEqual(stored.body);
+
+    const share = await t.http().post(`/api/trips/${route.trip.id}/share`).set(leader.auth).send({}).expect(201);
+    const shared = await t.http().get(`/api${share.body.share.path}`).expect(200);
+    expect(shared.body.trip.plan).toEqual({
+      verdict: chosen?.evaluation.verdict.text,
+      kitMassG: swap.kit.massG,
+      carriers: [{ name: 'Test Hiker', massG: swap.kit.massG, items: swap.kit.lines.map((l) => ({ name: l.name, count: l.count })) }],
+      cautions: chosen?.evaluation.cautions.map((c) => c.text),
+    });
+  });
+
+  it('answers 422 for a trip with no devices', async () => {
+    const empty = await createTrip(t, leader);
+    const res = await t.http().post(`/api/trips/${empty.id}/plans`).set(leader.auth).send({}).expect(422);
+    expect(res.body).toEqual({ statusCode: 422, message: noDevicesMessage, errors: [] });
+    await t.http().post(`/api/trips/${empty.id}/check`).set(leader.auth).send({ kit: [] }).expect(422);
+  });
+
+  /** A solver of its own over the `plans` namespace read from `env` (the app's stays as it is). */
+  const solverWith = (env: Record<string, string>, workerFile: string) =>
+    new PlanSolver(new ConfigService({ [plansConfigKey]: readPlansConfig(env) }), workerFile);
+
+  it('answers 422 when no kit could be verified within the time limit, and frees the thread', async () => {
+    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
+    const solver = solverWith({ PLAN_WORKER_THREADS: '1', PLAN_TIME_LIMIT_MS: '100', PLAN_STOP_GRACE_MS: '100' }, heldPlanWorkerFile);
+    try {
+      const error = await solver.plan(input).catch((e: unknown) => e);
+      expect(error).toBeInstanceOf(UnprocessableEntityException);
+      expect((error as Error).message).toMatch(/^No kit could be verified within 0\.2 s/);
+      const checked = await solver.check(input, []).catch((e: unknown) => e);
+      expect((checked as Error).message).toMatch(/^This kit could not be simulated/);
+      expect(solver.load).toBe(0);
+    } finally {
+      await solver.onModuleDestroy();
+    }
+  });
+
+  it('with a tiny time limit answers the best kit verified so far, with a note (not a 422)', async () => {
+    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
+    const solver = solverWith({ PLAN_TIME_LIMIT_MS: '1' }, defaultPlanWorkerFile);
+    try {
+      const { value: result } = await solver.plan(input);
+      expect(result.kit).not.toBeNull();
+      expect(result.evaluation?.verdict.status).not.toBe('runs-dry');
+      if (result.status === 'best-so-far') expect(result.notes.length).toBeGreaterThan(0);
+      else expect(result.status).toBe('optimal');
+    } finally {
+      await solver.onModuleDestroy();
+    }
+  });
+
+  it('refuses a solve with 503 and Retry-After when every thread and queue place is taken, and serves other requests meanwhile', async () => {
+    // This app has one thread and one queue place: two whole plans fill them for a few seconds.
+    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
+    const solver = t.app.get(PlanSolver);
+    let solved = 0;
+    const running = [solver.plan(input), solver.plan(input)].map((run) => run.then(() => (solved += 1)));
+    const busy = await t.http().post(`/api/trips/${route.trip.id}/plans`).set(leader.auth).send({}).expect(503);
+    expect(busy.headers['retry-after']).toBe('7');
+    expect(busy.body).toMatchObject({ statusCode: 503, errors: [] });
+    expect(busy.body.message).toContain('busy');
+    await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [] }).expect(503);
+    // Health and reads answer while both solves are still running.
+    const health = await t.http().get('/api/health').expect(200);
+    expect(health.body.status).toBe('ok');
+    await t.http().get(`/api/trips/${route.trip.id}/plans`).set(leader.auth).expect(200);
+    expect(solved).toBe(0);
+    await Promise.all(running);
+    expect(solver.load).toBe(0);
+  });
+
+  it('solves in a worker thread, not on the server’s event loop', async () => {
+    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id, { itemIds: [route.gear[0]?.id ?? ''] });
+    const solver = t.app.get(PlanSolver);
+    const run = await solver.plan(input, false);
+    expect(run.threadId).not.toBe(mainThreadId);
+    expect(run.value.modelVersion).toBe(planModelVersion);
+    expect(solver.load).toBe(0);
+  });
+});

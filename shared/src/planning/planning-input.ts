@@ -16,11 +16,6 @@ export interface PartyPlanningMember {
   memberId: string;
   name: string;
   gramLimitG: number | null;
-  /**
-   * A party's trip: the carriers and the owners of the pooled gear (`planParty` shares the kit out among them).
-   * Absent or null: one hiker carries everything.
-   */
-  party?: PartyPlanning | null;
 }
 
 /** The party around a planning input: who carries, and who owns each pooled item (by item id). */
@@ -41,6 +36,11 @@ export interface PlanningInput {
   /** Share of each store never to go below, 0–1. */
   reserveShare: number;
   gramLimitG: number | null;
+  /**
+   * A party's trip: the carriers and the owners of the pooled gear (`planParty` shares the kit out among them).
+   * Absent or null: one hiker carries everything.
+   */
+  party?: PartyPlanning | null;
 }
 
 /** A request that names something the planning input does not hold: the server answers 400/404 with the path. */

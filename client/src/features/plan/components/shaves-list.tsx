@@ -27,9 +27,10 @@ export function ShavesList({ shaves, onApply }: ShavesListProps) {
           <button
             type="button"
             onClick={() => onApply(shave.change)}
+            aria-label={`Try it: ${shave.text}`}
             className="min-h-9 rounded-lg border-2 border-scree-300 px-3 text-sm font-medium hover:border-scree-500"
           >
-            Try it<span className="sr-only">: {shave.text}</span>
+            Try it
           </button>
         </li>
       ))}

@@ -3,7 +3,7 @@
 // takes the built `@gramwatt/shared`. The task and answer shapes are `PlanSolverTask` and `PlanSolverAnswer` in
 // `src/plans/plan-solver-task.ts`.
 import { threadId } from 'node:worker_threads';
-import { checkKit, evaluateKit, planKit, planningContext, planTrip, PlanningInputError } from '@gramwatt/shared';
+import { checkKit, evaluateKit, partyCarriers, planKit, planningContext, planParty, planTrip, PlanningInputError } from '@gramwatt/shared';
 
 /** Runs one task; a selection the input does not hold comes back as an `input-error` (an Error loses its path between threads). */
 export default function solve(task) {
@@ -17,17 +17,30 @@ export default function solve(task) {
 
 function run(task) {
   switch (task.kind) {
-    case 'plan':
+    case 'plan': {
       // The budget is what is left of the request's time limit after its wait in the queue (same process, same clock).
-      return planTrip(task.input, { now: Date.now, timeBudgetMs: Math.max(1, task.deadlineMs - Date.now()), withExtras: task.withExtras });
-    case 'check':
-      return checkKit(task.input, task.selection);
+      const options = { now: Date.now, timeBudgetMs: Math.max(1, task.deadlineMs - Date.now()), withExtras: task.withExtras };
+      // A party's trip: the kit is shared out among the carriers within their own gram limits.
+      return task.input.party ? planParty(task.input, task.input.party, options) : planTrip(task.input, options);
+    }
+    case 'check': {
+      const checked = checkKit(task.input, task.selection);
+      return task.input.party ? { ...checked, kit: withCarriers(task.input, task.selection, checked.kit) } : checked;
+    }
     case 'evaluate': {
       const context = planningContext(task.input);
       const counts = new Map(task.selection.map((line) => [line.itemId, line.count]));
-      return { kit: planKit(context, counts), evaluation: evaluateKit(context, counts) };
+      const kit = planKit(context, counts);
+      const party = task.input.party;
+      return { kit: party ? { ...kit, carriers: partyCarriers(context, party, counts) } : kit, evaluation: evaluateKit(context, counts) };
     }
     default:
       throw new Error(`Unknown plan solver task ${String(task.kind)}`);
   }
+}
+
+/** A hand-picked or chosen kit of a party's trip, with who carries what (the best split of that kit). */
+function withCarriers(input, selection, kit) {
+  const counts = new Map(selection.map((line) => [line.itemId, line.count]));
+  return { ...kit, carriers: partyCarriers(planningContext(input), input.party, counts) };
 }

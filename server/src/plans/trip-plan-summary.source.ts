@@ -5,7 +5,7 @@ import { PlanningInputBuilder } from './planning-input.builder';
 
 /**
  * What the share page and the plan e-mail say about a trip's chosen kit: the verdict, the grams, who carries
- * what (the leader carries the whole kit until the party's gear is pooled) and the cautions that apply.
+ * what (a party's kit as the solver shared it out; a solo trip's leader carries it all) and the cautions that apply.
  * Provided under `TRIP_PLAN_SUMMARY`.
  */
 @Injectable()
@@ -18,17 +18,26 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
   async summaryFor(tripId: string): Promise<TripPlanSummary | null> {
     const chosen = await this.chosen.current(tripId);
     if (!chosen) return null;
-    const leader = await this.inputs.leaderOf(tripId);
+    // A party's kit says who carries what; a kit without carriers is the leader's to carry.
+    const carriers = chosen.kit.carriers
+      ? chosen.kit.carriers
+          .filter((carrier) => carrier.lines.length > 0)
+          .map((carrier) => ({
+            name: carrier.name,
+            massG: carrier.massG,
+            items: carrier.lines.map((line) => ({ name: line.name, count: line.count })),
+          }))
+      : [
+          {
+            name: (await this.inputs.leaderOf(tripId)).displayName,
+            massG: chosen.kit.massG,
+            items: chosen.kit.lines.map((line) => ({ name: line.name, count: line.count })),
+          },
+        ];
     return {
       verdict: chosen.evaluation.verdict.text,
       kitMassG: chosen.kit.massG,
-      carriers: [
-        {
-          name: leader.displayName,
-          massG: chosen.kit.massG,
-          items: chosen.kit.lines.map((line) => ({ name: line.name, count: line.count })),
-        },
-      ],
+      carriers,
       cautions: chosen.evaluation.cautions.map((caution) => caution.text),
     };
   }

@@ -21,22 +21,6 @@ export const defaultPlanWorkerFile = resolve(__dirname, '../../workers/plan-solv
 /** Injection token of the worker file's path (a test may hand in a slower stand-in). */
 export const PLAN_WORKER_FILE = Symbol.for('gramwatt:PLAN_WORKER_FILE');
 
-/**
- * The parent's Node flags for the worker threads, without custom export conditions: the workers load the built
- * `@gramwatt/shared` (its default export), and a parent started with `--conditions development` (the test runner)
- * would point them at TypeScript sources plain Node cannot load.
- * @example workerExecArgv(['--conditions', 'development', '--enable-source-maps']) // ['--enable-source-maps']
- */
-export function workerExecArgv(parentExecArgv: readonly string[]): string[] {
-  const out: string[] = [];
-  for (let i = 0; i < parentExecArgv.length; i += 1) {
-    const arg = parentExecArgv[i] as string;
-    if (arg === '--conditions' || arg === '-C') i += 1;
-    else if (!arg.startsWith('--conditions=')) out.push(arg);
-  }
-  return out;
-}
-
 /** Every thread and queue place is taken: 503 with `Retry-After`. */
 export class PlanSolverBusyException extends ServiceUnavailableException {
   constructor(readonly retryAfterS: number) {
@@ -68,7 +52,10 @@ export class PlanSolver implements OnModuleDestroy {
     this.config = config.getOrThrow<PlansConfig>(plansConfigKey);
     this.pool = new Piscina({
       filename: workerFile,
-      execArgv: workerExecArgv(process.execArgv),
+      // None of the parent's Node flags: the worker is plain JavaScript over the built `@gramwatt/shared`, and a
+      // parent's loader flags (`--conditions development` in tests, `-r @swc-node/register` in dev) would point it at
+      // TypeScript sources or load a compiler it does not need.
+      execArgv: [],
       // Threads start on the first solve, and end after a minute idle: a server that never plans holds none.
       minThreads: 0,
       maxThreads: this.config.workerThreads,

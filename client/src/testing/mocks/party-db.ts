@@ -1,6 +1,7 @@
 import type {
   Account,
   Invite,
+  PoolItem,
   MailDelivery,
   OutboxMessage,
   SharedTrip,
@@ -26,6 +27,8 @@ interface PartyDb {
   outboxLocal: boolean;
   outbox: OutboxMessage[];
   deliveries: MailDelivery[];
+  /** Each trip's pooled gear. */
+  pool: Map<string, PoolItem[]>;
 }
 
 const empty = (): PartyDb => ({
@@ -37,6 +40,7 @@ const empty = (): PartyDb => ({
   outboxLocal: false,
   outbox: [],
   deliveries: [],
+  pool: new Map(),
 });
 
 export const partyDb: PartyDb = empty();

@@ -1,6 +1,11 @@
 import {
   inviteCreateSchema,
   memberUpdateSchema,
+  poolItemAddSchema,
+  poolItemSchema,
+  poolItemUpdateSchema,
+  type KitItemSpec,
+  type PoolItem,
   sendHomeSchema,
   shareCreateSchema,
   type OutboxMessage,
@@ -8,6 +13,7 @@ import {
 } from '@gramwatt/shared';
 import { http, HttpResponse } from 'msw';
 import { sessionAccount } from './db';
+import { lockerDb } from './locker-db';
 import { partyDb, partyId, type MockInvite } from './party-db';
 
 const apiError = (statusCode: number, message: string, errors: Array<{ path: string; message: string }> = []) =>
@@ -65,8 +71,93 @@ const deliver = (kind: 'trip-invite' | 'trip-plan', to: string, subject: string,
   });
 };
 
-/** A fake of the party, share-link and outbox routes, following the server's contract. */
+const poolableKinds: readonly string[] = poolItemSchema.shape.kind.options;
+
+/** The pool as the server lists it: entries, and whether the leader's whole locker still counts. */
+const poolList = (tripId: string, members: TripMember[]) => {
+  const items = partyDb.pool.get(tripId) ?? [];
+  const leaderId = members.find((m) => m.role === 'leader')?.accountId;
+  return { items, leaderWholeLocker: !items.some((item) => item.ownerAccountId === leaderId) };
+};
+
+/** Finds a pool entry the caller may change: a partner only their own, the leader any. */
+const changeablePoolItem = (tripId: string, poolItemId: string, member: TripMember): PoolItem | Response => {
+  const item = partyDb.pool.get(tripId)?.find((entry) => entry.id === poolItemId);
+  if (!item) return apiError(404, 'This item is not in the trip’s pool');
+  if (member.role === 'viewer' || (member.role === 'partner' && item.ownerAccountId !== member.accountId))
+    return apiError(403, 'Only its owner or the leader may change this entry');
+  return item;
+};
+
+/** A fake of the party, pool, share-link and outbox routes, following the server's contract. */
 export const partyHandlers = [
+  http.get<{ id: string }>('*/api/trips/:id/pool', ({ params }) => {
+    const access = guard(params.id);
+    if ('response' in access) return access.response;
+    return HttpResponse.json(poolList(params.id, access.members));
+  }),
+
+  http.post<{ id: string }>('*/api/trips/:id/pool', async ({ params, request }) => {
+    const access = guard(params.id);
+    if ('response' in access) return access.response;
+    if (access.member.role === 'viewer') return apiError(403, 'Viewers cannot share gear');
+    const parsed = poolItemAddSchema.safeParse(await request.json());
+    if (!parsed.success) return validationError(parsed.error.issues);
+    const item = lockerDb.items.find((i) => i.id === parsed.data.itemId && i.ownerId === access.member.accountId);
+    if (!item) return apiError(404, 'No such item in your locker');
+    if (!poolableKinds.includes(item.kind)) return apiError(400, 'Only power gear can be pooled');
+    if (parsed.data.count > item.countOwned)
+      return apiError(400, `You own ${item.countOwned} of this item`, [
+        { path: 'count', message: `Count may be at most the ${item.countOwned} you own` },
+      ]);
+    const entries = partyDb.pool.get(params.id) ?? [];
+    if (entries.some((e) => e.itemId === item.id))
+      return apiError(409, 'This item is in the pool already: change its count instead');
+    const entry: PoolItem = {
+      id: partyId(),
+      itemId: item.id,
+      name: item.name,
+      kind: item.kind as PoolItem['kind'],
+      massG: item.massG,
+      count: parsed.data.count,
+      countOwned: item.countOwned,
+      ownerAccountId: access.member.accountId,
+      ownerName: access.member.displayName,
+      spec: item.spec as KitItemSpec,
+      createdAt: fixedNow,
+      updatedAt: fixedNow,
+    };
+    partyDb.pool.set(params.id, [...entries, entry]);
+    return HttpResponse.json({ item: entry }, { status: 201 });
+  }),
+
+  http.patch<{ id: string; poolItemId: string }>('*/api/trips/:id/pool/:poolItemId', async ({ params, request }) => {
+    const access = guard(params.id);
+    if ('response' in access) return access.response;
+    const found = changeablePoolItem(params.id, params.poolItemId, access.member);
+    if (found instanceof Response) return found;
+    const parsed = poolItemUpdateSchema.safeParse(await request.json());
+    if (!parsed.success) return validationError(parsed.error.issues);
+    if (parsed.data.count > found.countOwned)
+      return apiError(400, `You own ${found.countOwned} of this item`, [
+        { path: 'count', message: `Count may be at most the ${found.countOwned} you own` },
+      ]);
+    found.count = parsed.data.count;
+    return HttpResponse.json({ item: found });
+  }),
+
+  http.delete<{ id: string; poolItemId: string }>('*/api/trips/:id/pool/:poolItemId', ({ params }) => {
+    const access = guard(params.id);
+    if ('response' in access) return access.response;
+    const found = changeablePoolItem(params.id, params.poolItemId, access.member);
+    if (found instanceof Response) return found;
+    partyDb.pool.set(
+      params.id,
+      (partyDb.pool.get(params.id) ?? []).filter((entry) => entry !== found),
+    );
+    return new HttpResponse(null, { status: 204 });
+  }),
+
   http.get('*/api/outbox/status', () => HttpResponse.json({ local: partyDb.outboxLocal })),
 
   http.get('*/api/outbox', () => {

@@ -8,6 +8,7 @@ export const partyKeys = {
   members: (tripId: string) => ['trips', tripId, 'members'] as const,
   invites: (tripId: string) => ['trips', tripId, 'invites'] as const,
   shareLink: (tripId: string) => ['trips', tripId, 'share'] as const,
+  pool: (tripId: string) => ['trips', tripId, 'pool'] as const,
   /** The trip list (its member counts change when someone joins or leaves). */
   tripList: () => ['trips'] as const,
 };

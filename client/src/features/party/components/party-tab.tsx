@@ -5,6 +5,7 @@ import { roleForYou } from '../utils/party-format';
 import { InviteForm } from './invite-form';
 import { InviteList } from './invite-list';
 import { MemberList } from './member-list';
+import { PoolPanel } from './pool-panel';
 import { SendHomePanel } from './send-home-panel';
 import { ShareLinkPanel } from './share-link-panel';
 
@@ -15,8 +16,8 @@ export interface PartyTabProps {
 const cardClasses = 'flex flex-col gap-6 rounded-xl border-2 border-scree-200 bg-firn-100 p-4 sm:p-6';
 
 /**
- * The trip's party: who is going with their roles and gram limits; for the leader, invites, the read-only
- * link and sending the plan home. Partners and viewers see the same people without the controls.
+ * The trip's party: who is going with their roles and gram limits, and the gear they share; for the leader,
+ * invites, the read-only link and sending the plan home. Partners share their own gear; viewers only read.
  */
 export function PartyTab({ tripId }: PartyTabProps) {
   const me = useAccount().data;
@@ -32,6 +33,7 @@ export function PartyTab({ tripId }: PartyTabProps) {
         </p>
       )}
       <MemberList tripId={tripId} myAccountId={me?.id} canManage={isLeader} />
+      {myRole && <PoolPanel tripId={tripId} myAccountId={me?.id} myRole={myRole} />}
       {isLeader && (
         <section aria-labelledby="party-invites-heading" className={cardClasses}>
           <h2 id="party-invites-heading" className="text-lg font-semibold text-scree-900">

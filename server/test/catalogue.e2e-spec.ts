@@ -30,6 +30,46 @@ const panelEntry = {
   },
 };
 
+/** The 12 V path's gear, invented: a 12 V panel, a PWM controller and a small LiFePO4 pack. */
+const twelveVoltEntries = [
+  {
+    name: 'Generic 20 W 12 V panel',
+    spec: {
+      kind: 'panel',
+      panelType: '12v',
+      ratedW: 20,
+      maxPowerVolts: 18,
+      maxPowerAmps: 1.11,
+      openCircuitVolts: 21.6,
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+      massG: 700,
+    },
+  },
+  {
+    name: 'Generic 5 A PWM controller',
+    spec: {
+      kind: 'controller',
+      controllerType: 'pwm',
+      maxInputVolts: 25,
+      maxChargeA: 5,
+      inputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      outputPort: { connector: 'ring-terminal', captiveCable: false },
+      massG: 80,
+    },
+  },
+  {
+    name: 'Generic 3 Ah LiFePO4 pack',
+    spec: {
+      kind: 'battery',
+      chemistry: 'lifepo4',
+      cellsInSeries: 4,
+      capacityAh: 3,
+      port: { connector: 'ring-terminal', captiveCable: false },
+      massG: 420,
+    },
+  },
+];
+
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 describe('reference catalogue', () => {
@@ -79,8 +119,23 @@ describe('reference catalogue', () => {
     const one = await t.http().get(`/api/catalogue/${bank.body.entry.id}`).set(bearer(tokenB)).expect(200);
     expect(one.body.entry).toEqual(bank.body.entry);
 
-    const badKind = await t.http().get('/api/catalogue?kind=battery').set(bearer(tokenA)).expect(400);
+    const badKind = await t.http().get('/api/catalogue?kind=tent').set(bearer(tokenA)).expect(400);
     expect(badKind.body.errors[0].path).toBe('kind');
+  });
+
+  it('holds the 12 V path: batteries after banks, controllers after converters; a member copies them', async () => {
+    const created = [];
+    for (const entry of twelveVoltEntries) created.push((await create(entry).expect(201)).body.entry);
+    await create(bankEntry).expect(201);
+    const all = await t.http().get('/api/catalogue').set(bearer(tokenA)).expect(200);
+    expect(all.body.entries.map((e: { kind: string }) => e.kind)).toEqual(['panel', 'bank', 'battery', 'controller']);
+    const batteries = await t.http().get('/api/catalogue?kind=battery').set(bearer(tokenA)).expect(200);
+    expect(batteries.body.entries.map((e: { name: string }) => e.name)).toEqual(['Generic 3 Ah LiFePO4 pack']);
+    for (const entry of created) {
+      const copied = await t.http().post(`/api/catalogue/${entry.id}/copy`).set(bearer(tokenA)).expect(201);
+      expect(copied.body.item).toMatchObject({ kind: entry.kind, countOwned: 1, spec: entry.spec });
+    }
+    expect((await t.http().get('/api/locker/items').set(bearer(tokenB)).expect(200)).body.items).toEqual([]);
   });
 
   it('answers 403 to members who create, change or delete, and changes nothing', async () => {

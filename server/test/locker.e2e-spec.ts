@@ -48,6 +48,32 @@ const samples: Record<LockerItem['kind'], LockerItemInputRaw> = {
       massG: 35,
     },
   },
+  battery: {
+    name: 'Test LiFePO4 6 Ah',
+    countOwned: 1,
+    spec: {
+      kind: 'battery',
+      chemistry: 'lifepo4',
+      cellsInSeries: 4,
+      capacityAh: 6,
+      dischargeCRate: 1,
+      port: { connector: 'ring-terminal', captiveCable: false },
+      massG: 780,
+    },
+  },
+  controller: {
+    name: 'Test MPPT 5 A',
+    countOwned: 1,
+    spec: {
+      kind: 'controller',
+      controllerType: 'mppt',
+      maxInputVolts: 30,
+      maxChargeA: 5,
+      inputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      outputPort: { connector: 'ring-terminal', captiveCable: false },
+      massG: 120,
+    },
+  },
   lead: {
     name: 'Test USB-A to C',
     countOwned: 3,
@@ -69,6 +95,35 @@ const samples: Record<LockerItem['kind'], LockerItemInputRaw> = {
       standbyCurrentA: 0.05,
       useProfile: { basis: 'radio-hours', transmitMinutesPerDay: 20, receiveHoursPerDay: 2, standbyHoursPerDay: 6 },
     },
+  },
+};
+
+/** A 12 V panel and a fused DC lead: the 12 V path's kinds that are variants of panel and lead. */
+const twelveVoltPanel: LockerItemInputRaw = {
+  name: 'Test 30 W 12 V panel',
+  countOwned: 1,
+  spec: {
+    kind: 'panel',
+    panelType: '12v',
+    ratedW: 30,
+    maxPowerVolts: 18,
+    maxPowerAmps: 1.67,
+    openCircuitVolts: 21.6,
+    outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+    massG: 900,
+  },
+};
+const fusedLead: LockerItemInputRaw = {
+  name: 'Test fused radio lead',
+  countOwned: 1,
+  spec: {
+    kind: 'lead',
+    fromConnector: 'ring-terminal',
+    toConnector: 'radio-dc',
+    lengthM: 1.5,
+    gaugeAwg: 16,
+    fuseA: 7.5,
+    massG: 60,
   },
 };
 
@@ -337,6 +392,81 @@ describe('locker items', () => {
       await create(samples.lead);
       await t.db.delete(accounts).where(eq(accounts.id, ownerId));
       expect(await t.db.select().from(lockerItems).where(eq(lockerItems.ownerId, ownerId))).toEqual([]);
+    });
+  });
+
+  describe('the 12 V path', () => {
+    it('adds a battery, a controller, a 12 V panel and a fused DC lead, with the schema defaults', async () => {
+      const battery = await create(samples.battery);
+      const controller = await create(samples.controller);
+      const panel = await create(twelveVoltPanel);
+      const lead = await create(fusedLead);
+      expect(battery).toMatchObject({ kind: 'battery', massG: 780, spec: { chemistry: 'lifepo4', capacityAh: 6 } });
+      expect(battery.spec).not.toHaveProperty('chargeCRate');
+      expect(controller).toMatchObject({ kind: 'controller', spec: { controllerType: 'mppt', efficiency: 0.95 } });
+      expect(panel).toMatchObject({
+        kind: 'panel',
+        spec: { panelType: '12v', openCircuitVolts: 21.6, tempCoeffPctPerC: -0.4, tempCoeffVocPctPerC: -0.3 },
+      });
+      expect(lead.spec).toMatchObject({ gaugeAwg: 16, fuseA: 7.5, lengthM: 1.5 });
+      const list = await t.http().get('/api/locker/items?sort=kind').set(bearer(token)).expect(200);
+      expect(list.body.items.map((i: LockerItem) => i.kind)).toEqual(['panel', 'battery', 'controller', 'lead']);
+      expect(list.body.totalMassG).toBe(780 + 120 + 900 + 60);
+      expect((await t.http().get('/api/locker/items?kind=battery').set(bearer(token)).expect(200)).body.items).toEqual([
+        battery,
+      ]);
+    });
+
+    it('field errors name the field under spec', async () => {
+      const post = (spec: Record<string, unknown>) =>
+        t.http().post('/api/locker/items').set(bearer(token)).send({ name: 'x', countOwned: 1, spec }).expect(400);
+      const battery = await post({ ...samples.battery.spec, chemistry: 'nicad', capacityAh: 0 });
+      expect(battery.body.errors.map((e: { path: string }) => e.path).sort()).toEqual([
+        'spec.capacityAh',
+        'spec.chemistry',
+      ]);
+      const controller = await post({ ...samples.controller.spec, controllerType: 'shunt' });
+      expect(controller.body.errors).toEqual([
+        { path: 'spec.controllerType', message: 'Controller type must be pwm or mppt' },
+      ]);
+      const panel = await post({ ...twelveVoltPanel.spec, openCircuitVolts: 17 });
+      expect(panel.body.errors).toEqual([
+        { path: 'spec.openCircuitVolts', message: 'Open-circuit voltage must be above the maximum-power voltage' },
+      ]);
+      const lead = await post({ ...fusedLead.spec, gaugeAwg: 16.5 });
+      expect(lead.body.errors).toEqual([{ path: 'spec.gaugeAwg', message: 'Wire gauge is a whole AWG number' }]);
+    });
+
+    it('a USB panel can become a 12 V panel (same kind), but a battery cannot become a bank (409)', async () => {
+      const panel = await create(samples.panel);
+      const changed = await t
+        .http()
+        .put(`/api/locker/items/${panel.id}`)
+        .set(bearer(token))
+        .send(twelveVoltPanel)
+        .expect(200);
+      expect(changed.body.item.spec.panelType).toBe('12v');
+      const battery = await create(samples.battery);
+      await t.http().put(`/api/locker/items/${battery.id}`).set(bearer(token)).send(samples.bank).expect(409);
+    });
+
+    it("another member's battery, controller and 12 V panel answer 404 and stay untouched", async () => {
+      const mine = await Promise.all([create(samples.battery), create(samples.controller), create(twelveVoltPanel)]);
+      const before = await t.db.select().from(lockerItems).where(eq(lockerItems.ownerId, ownerId));
+      const other = await insertAccount(t.db);
+      const otherToken = await signInToken(t, other.email);
+      expect((await t.http().get('/api/locker/items').set(bearer(otherToken)).expect(200)).body.items).toEqual([]);
+      for (const item of mine) {
+        await t.http().get(`/api/locker/items/${item.id}`).set(bearer(otherToken)).expect(404);
+        await t
+          .http()
+          .put(`/api/locker/items/${item.id}`)
+          .set(bearer(otherToken))
+          .send(item.kind === 'panel' ? twelveVoltPanel : samples[item.kind])
+          .expect(404);
+        await t.http().delete(`/api/locker/items/${item.id}`).set(bearer(otherToken)).expect(404);
+      }
+      expect(await t.db.select().from(lockerItems).where(eq(lockerItems.ownerId, ownerId))).toEqual(before);
     });
   });
 

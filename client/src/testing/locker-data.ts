@@ -5,7 +5,9 @@ import { lockerDb } from './mocks/locker-db';
 let nextItem = 1;
 const itemUuid = (n: number) => `00000000-0000-4000-9000-${String(n).padStart(12, '0')}`;
 
-export const panelSpec = (overrides: Partial<Extract<ItemSpec, { kind: 'panel' }>> = {}): ItemSpec => ({
+export const panelSpec = (
+  overrides: Partial<Extract<ItemSpec, { kind: 'panel'; panelType: 'usb' }>> = {},
+): ItemSpec => ({
   kind: 'panel',
   panelType: 'usb',
   ratedW: 10,
@@ -38,6 +40,42 @@ export const leadSpec = (overrides: Partial<Extract<ItemSpec, { kind: 'lead' }>>
   lengthM: 1,
   massG: 30,
   ...overrides,
+});
+
+/** A 12 V panel: 18 V × 1.67 A ≈ 30 W at maximum power, 21.6 V open circuit. */
+export const twelveVoltPanelSpec = (): ItemSpec => ({
+  kind: 'panel',
+  panelType: '12v',
+  ratedW: 30,
+  maxPowerVolts: 18,
+  maxPowerAmps: 1.67,
+  openCircuitVolts: 21.6,
+  tempCoeffPctPerC: -0.4,
+  tempCoeffVocPctPerC: -0.3,
+  dropoutIrradianceWm2: 0,
+  outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+  massG: 900,
+});
+
+export const batterySpec = (overrides: Partial<Extract<ItemSpec, { kind: 'battery' }>> = {}): ItemSpec => ({
+  kind: 'battery',
+  chemistry: 'lifepo4',
+  cellsInSeries: 4,
+  capacityAh: 6,
+  port: { connector: 'ring-terminal', captiveCable: false },
+  massG: 800,
+  ...overrides,
+});
+
+export const controllerSpec = (): ItemSpec => ({
+  kind: 'controller',
+  controllerType: 'pwm',
+  maxInputVolts: 25,
+  maxChargeA: 5,
+  efficiency: 0.95,
+  inputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+  outputPort: { connector: 'ring-terminal', captiveCable: false },
+  massG: 90,
 });
 
 export const phoneSpec = (): ItemSpec => ({

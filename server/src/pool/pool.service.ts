@@ -31,7 +31,7 @@ import {
 const uuidSchema = z.uuid();
 const poolItemNotFoundMessage = 'This item is not in the trip’s pool';
 /** Kinds of locker item that can be pooled: power gear (devices go on the device list). */
-const poolableKinds = new Set(['panel', 'bank', 'converter', 'lead']);
+const poolableKinds = new Set(['panel', 'bank', 'battery', 'converter', 'controller', 'lead']);
 
 type PoolableItem = LockerItemRow & { spec: KitItemSpec };
 interface PoolRow {

@@ -1,4 +1,9 @@
 import type { LockerItemKind } from '../schemas/locker.js';
+import type { PanelSpec } from '../schemas/items.js';
+
+/** The two panel types: a USB panel or a 12 V panel. */
+export type PanelType = PanelSpec['panelType'];
+export const lockerPanelTypes: readonly PanelType[] = ['usb', '12v'];
 
 /**
  * Gramwatt's own locker CSV columns: one file for every kind, told apart by the `kind` column; each spec
@@ -31,6 +36,8 @@ export interface LockerCsvColumn {
   type: LockerCsvCellType;
   /** For a device's use-profile columns: the `use_basis` values they belong to. */
   useBases?: readonly string[];
+  /** For a panel's type-specific columns: the `panel_type` values they belong to (every type when absent). */
+  panelTypes?: readonly PanelType[];
   /** Required in the header (the file is rejected without it). */
   requiredInHeader?: boolean;
   /** What an empty cell stands for, when not the schema's own default. */
@@ -39,7 +46,7 @@ export interface LockerCsvColumn {
   description: string;
 }
 
-const allKinds: readonly LockerItemKind[] = ['panel', 'bank', 'converter', 'lead', 'device'];
+const allKinds: readonly LockerItemKind[] = ['panel', 'bank', 'battery', 'converter', 'controller', 'lead', 'device'];
 const connectorList =
   'usb-a, usb-c, micro-usb, barrel-5.5x2.1, barrel-5.5x2.5, 12v-accessory, ring-terminal, radio-dc, other';
 const radio = ['radio-hours'] as const;
@@ -52,7 +59,7 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
     kinds: allKinds,
     type: 'text',
     requiredInHeader: true,
-    description: 'panel, bank, converter, lead or device',
+    description: 'panel, bank, battery, converter, controller, lead or device',
   },
   {
     name: 'name',
@@ -85,22 +92,56 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
     kinds: ['panel'],
     type: 'text',
     blankMeans: 'usb',
-    description: 'usb (empty: usb)',
+    description: 'usb (a regulated USB output) or 12v (a 12 V-class panel for a charge controller); empty: usb',
   },
   { name: 'rated_w', path: ['spec', 'ratedW'], kinds: ['panel'], type: 'number', description: 'Rated power at STC, W' },
   {
     name: 'port_volts',
     path: ['spec', 'portVolts'],
     kinds: ['panel'],
+    panelTypes: ['usb'],
     type: 'number',
-    description: 'USB port voltage, V',
+    description: 'USB panel: USB port voltage, V',
   },
   {
     name: 'port_max_a',
     path: ['spec', 'portMaxA'],
     kinds: ['panel'],
+    panelTypes: ['usb'],
     type: 'number',
-    description: 'USB port maximum current, A',
+    description: 'USB panel: USB port maximum current, A',
+  },
+  {
+    name: 'max_power_volts',
+    path: ['spec', 'maxPowerVolts'],
+    kinds: ['panel'],
+    panelTypes: ['12v'],
+    type: 'number',
+    description: '12 V panel: voltage at maximum power (Vmp) at STC, V',
+  },
+  {
+    name: 'max_power_amps',
+    path: ['spec', 'maxPowerAmps'],
+    kinds: ['panel'],
+    panelTypes: ['12v'],
+    type: 'number',
+    description: '12 V panel: current at maximum power (Imp) at STC, A',
+  },
+  {
+    name: 'open_circuit_volts',
+    path: ['spec', 'openCircuitVolts'],
+    kinds: ['panel'],
+    panelTypes: ['12v'],
+    type: 'number',
+    description: '12 V panel: open-circuit voltage (Voc) at STC, V',
+  },
+  {
+    name: 'short_circuit_amps',
+    path: ['spec', 'shortCircuitAmps'],
+    kinds: ['panel'],
+    panelTypes: ['12v'],
+    type: 'number',
+    description: '12 V panel: short-circuit current (Isc) at STC, A (optional)',
   },
   {
     name: 'dropout_irradiance_w_m2',
@@ -117,16 +158,24 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
     description: 'Temperature coefficient of power, %/°C, 0 or negative (empty: −0.4)',
   },
   {
+    name: 'temp_coeff_voc_pct_per_c',
+    path: ['spec', 'tempCoeffVocPctPerC'],
+    kinds: ['panel'],
+    panelTypes: ['12v'],
+    type: 'number',
+    description: '12 V panel: temperature coefficient of Voc, %/°C, 0 or negative (empty: −0.3)',
+  },
+  {
     name: 'output_connector',
     path: ['spec', 'outputPort', 'connector'],
-    kinds: ['panel', 'converter'],
+    kinds: ['panel', 'converter', 'controller'],
     type: 'text',
     description: `Output connector: ${connectorList}`,
   },
   {
     name: 'output_captive_cable',
     path: ['spec', 'outputPort', 'captiveCable'],
-    kinds: ['panel', 'converter'],
+    kinds: ['panel', 'converter', 'controller'],
     type: 'boolean',
     blankMeans: false,
     description: 'The output has a fixed cable (connector = its plug); empty: false',
@@ -163,14 +212,14 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
   {
     name: 'input_connector',
     path: ['spec', 'inputPort', 'connector'],
-    kinds: ['bank', 'converter'],
+    kinds: ['bank', 'converter', 'controller'],
     type: 'text',
     description: `Input connector: ${connectorList}`,
   },
   {
     name: 'input_captive_cable',
     path: ['spec', 'inputPort', 'captiveCable'],
-    kinds: ['bank', 'converter'],
+    kinds: ['bank', 'converter', 'controller'],
     type: 'boolean',
     blankMeans: false,
     description: 'The input has a fixed cable; empty: false',
@@ -196,6 +245,71 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
     kinds: ['bank', 'device'],
     type: 'number',
     description: 'Share of input energy that is stored, 0–1 (empty: bank 0.9, device 0.85)',
+  },
+  // Batteries
+  {
+    name: 'chemistry',
+    path: ['spec', 'chemistry'],
+    kinds: ['battery'],
+    type: 'text',
+    description: 'lipo, li-ion, lifepo4 or lead-acid',
+  },
+  {
+    name: 'cells_in_series',
+    path: ['spec', 'cellsInSeries'],
+    kinds: ['battery'],
+    type: 'number',
+    description: 'Cells in series, a whole number (4 for a 12.8 V LiFePO4 pack, 6 for a 12 V lead-acid one)',
+  },
+  {
+    name: 'capacity_ah',
+    path: ['spec', 'capacityAh'],
+    kinds: ['battery'],
+    type: 'number',
+    description: 'Rated capacity, Ah',
+  },
+  {
+    name: 'charge_c_rate',
+    path: ['spec', 'chargeCRate'],
+    kinds: ['battery'],
+    type: 'number',
+    description: "The maker's largest charge rate, C (0.5 = half the Ah in A); empty: typical for the chemistry",
+  },
+  {
+    name: 'discharge_c_rate',
+    path: ['spec', 'dischargeCRate'],
+    kinds: ['battery'],
+    type: 'number',
+    description: "The maker's continuous discharge rate, C (optional)",
+  },
+  {
+    name: 'rated_hours',
+    path: ['spec', 'ratedHours'],
+    kinds: ['battery'],
+    type: 'number',
+    description: 'Hours the capacity is rated over, h (optional; lead-acid usually 20)',
+  },
+  {
+    name: 'peukert_exponent',
+    path: ['spec', 'peukertExponent'],
+    kinds: ['battery'],
+    type: 'number',
+    description: "Peukert exponent from the maker's rate table, 1–2 (optional)",
+  },
+  {
+    name: 'port_connector',
+    path: ['spec', 'port', 'connector'],
+    kinds: ['battery'],
+    type: 'text',
+    description: "The battery's terminal or socket (same list as output_connector)",
+  },
+  {
+    name: 'port_captive_cable',
+    path: ['spec', 'port', 'captiveCable'],
+    kinds: ['battery'],
+    type: 'boolean',
+    blankMeans: false,
+    description: 'The battery has a fixed cable (connector = its plug); empty: false',
   },
   // Converters
   {
@@ -229,9 +343,31 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
   {
     name: 'efficiency',
     path: ['spec', 'efficiency'],
-    kinds: ['converter'],
+    kinds: ['converter', 'controller'],
     type: 'number',
-    description: 'Conversion efficiency, 0–1 (empty: 0.85)',
+    description: 'Conversion efficiency, 0–1 (empty: converter 0.85, controller 0.95)',
+  },
+  // Controllers
+  {
+    name: 'controller_type',
+    path: ['spec', 'controllerType'],
+    kinds: ['controller'],
+    type: 'text',
+    description: 'pwm or mppt',
+  },
+  {
+    name: 'max_input_volts',
+    path: ['spec', 'maxInputVolts'],
+    kinds: ['controller'],
+    type: 'number',
+    description: 'Highest panel voltage the input takes, V',
+  },
+  {
+    name: 'max_charge_a',
+    path: ['spec', 'maxChargeA'],
+    kinds: ['controller'],
+    type: 'number',
+    description: 'Largest charge current into the battery, A',
   },
   // Leads
   {
@@ -249,6 +385,20 @@ export const lockerCsvColumns: readonly LockerCsvColumn[] = [
     description: 'The other end (same list)',
   },
   { name: 'length_m', path: ['spec', 'lengthM'], kinds: ['lead'], type: 'number', description: 'One-way length, m' },
+  {
+    name: 'gauge_awg',
+    path: ['spec', 'gaugeAwg'],
+    kinds: ['lead'],
+    type: 'number',
+    description: 'DC lead: copper wire gauge, AWG, a whole number (optional)',
+  },
+  {
+    name: 'fuse_a',
+    path: ['spec', 'fuseA'],
+    kinds: ['lead'],
+    type: 'number',
+    description: 'DC lead: inline fuse rating, A (optional)',
+  },
   // Devices
   {
     name: 'device_kind',

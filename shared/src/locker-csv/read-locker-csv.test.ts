@@ -4,7 +4,23 @@ import { type LockerItemInput, lockerItemInputSchema } from '../schemas/locker.j
 import { bankSpecSchema, converterSpecSchema, leadSpecSchema, usbPanelSpecSchema } from '../schemas/items.js';
 import { deviceSpecSchema } from '../schemas/devices.js';
 import type { ItemSpec } from '../schemas/kit.js';
-import { bankArb, converterArb, deviceArb, leadArb, panelArb, share } from '../testing/arbitraries.js';
+import {
+  batterySpecSchema,
+  controllerSpecSchema,
+  twelveVoltPanelSpecSchema,
+} from '../schemas/station-items.js';
+import {
+  bankArb,
+  batteryArb,
+  controllerArb,
+  converterArb,
+  dcLeadArb,
+  deviceArb,
+  leadArb,
+  panelArb,
+  share,
+  twelveVoltPanelArb,
+} from '../testing/arbitraries.js';
 import { lockerCsvColumns, lockerCsvHeader } from './columns.js';
 import { decodeLockerCsv, detectLockerCsvDelimiter, maxLockerCsvIssues, readLockerCsv } from './read-locker-csv.js';
 import { writeLockerCsv } from './write-locker-csv.js';
@@ -54,6 +70,50 @@ const leadRow = {
   from_connector: 'usb-a',
   to_connector: 'usb-c',
   length_m: '0.3',
+};
+// The 12 V path (invented gear): a 12 V panel, an MPPT controller, a LiFePO4 pack and a fused DC lead.
+const twelveVoltPanelRow = {
+  kind: 'panel',
+  name: 'Ridge 30 W 12 V',
+  mass_g: '900',
+  panel_type: '12v',
+  rated_w: '30',
+  max_power_volts: '18',
+  max_power_amps: '1.67',
+  open_circuit_volts: '21.6',
+  temp_coeff_voc_pct_per_c: '-0.29',
+  output_connector: 'barrel-5.5x2.1',
+  output_captive_cable: 'yes',
+};
+const controllerRow = {
+  kind: 'controller',
+  name: 'Small MPPT',
+  mass_g: '120',
+  controller_type: 'mppt',
+  max_input_volts: '30',
+  max_charge_a: '5',
+  input_connector: 'barrel-5.5x2.1',
+  output_connector: 'ring-terminal',
+};
+const batteryRow = {
+  kind: 'battery',
+  name: 'Pack 6 Ah',
+  mass_g: '780',
+  chemistry: 'lifepo4',
+  cells_in_series: '4',
+  capacity_ah: '6',
+  discharge_c_rate: '1',
+  port_connector: 'ring-terminal',
+};
+const dcLeadRow = {
+  kind: 'lead',
+  name: 'Fused radio lead',
+  mass_g: '60',
+  from_connector: 'ring-terminal',
+  to_connector: 'radio-dc',
+  length_m: '1.5',
+  gauge_awg: '16',
+  fuse_a: '7.5',
 };
 const radioRow = {
   kind: 'device',
@@ -145,6 +205,59 @@ describe('readLockerCsv: a good file', () => {
       useProfile: { basis: 'battery-share', batterySharePerDay: 0.6 },
     });
     expect(phone?.spec.massG).toBeUndefined();
+  });
+
+  it('reads the 12 V path: a 12 V panel, a controller, a battery and a fused DC lead', () => {
+    const result = readLockerCsv(csvOf([twelveVoltPanelRow, controllerRow, batteryRow, dcLeadRow]));
+    expect(result.report).toEqual([]);
+    const [panel, controller, battery, lead] = result.rows.map((r) => r.item.spec);
+    expect(panel).toEqual({
+      kind: 'panel',
+      panelType: '12v',
+      ratedW: 30,
+      maxPowerVolts: 18,
+      maxPowerAmps: 1.67,
+      openCircuitVolts: 21.6,
+      tempCoeffPctPerC: -0.4,
+      tempCoeffVocPctPerC: -0.29,
+      dropoutIrradianceWm2: 0,
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+      massG: 900,
+    });
+    expect(controller).toEqual({
+      kind: 'controller',
+      controllerType: 'mppt',
+      maxInputVolts: 30,
+      maxChargeA: 5,
+      efficiency: 0.95,
+      inputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      outputPort: { connector: 'ring-terminal', captiveCable: false },
+      massG: 120,
+    });
+    expect(battery).toEqual({
+      kind: 'battery',
+      chemistry: 'lifepo4',
+      cellsInSeries: 4,
+      capacityAh: 6,
+      dischargeCRate: 1,
+      port: { connector: 'ring-terminal', captiveCable: false },
+      massG: 780,
+    });
+    expect(lead).toEqual({
+      kind: 'lead',
+      fromConnector: 'ring-terminal',
+      toConnector: 'radio-dc',
+      lengthM: 1.5,
+      gaugeAwg: 16,
+      fuseA: 7.5,
+      massG: 60,
+    });
+  });
+
+  it('a file written before 12 V panels (no panel_type column) still reads its panels as USB panels', () => {
+    const result = readLockerCsv(csvOf([panelRow]));
+    expect(result.ok).toBe(true);
+    expect(result.rows[0]?.item.spec).toMatchObject({ kind: 'panel', panelType: 'usb', portVolts: 5 });
   });
 
   it('reads header names in any case and with spaces around them', () => {
@@ -284,6 +397,48 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
     ]);
   });
 
+  it('a 12 V panel with USB port values, a USB panel with 12 V values, an unknown panel type', () => {
+    const result = readLockerCsv(
+      csvOf([
+        { ...twelveVoltPanelRow, port_volts: '5' },
+        { ...panelRow, open_circuit_volts: '21' },
+        { ...twelveVoltPanelRow, panel_type: 'solar' },
+      ]),
+    );
+    expect(result.report).toEqual([
+      { row: 2, column: 'port_volts', message: 'port_volts is for panel_type usb, not 12v; leave it empty' },
+      { row: 3, column: 'open_circuit_volts', message: 'open_circuit_volts is for panel_type 12v, not usb; leave it empty' },
+      { row: 4, column: 'panel_type', message: 'Panel type must be usb or 12v' },
+    ]);
+  });
+
+  it('the 12 V gear: missing and out-of-range values, named by column', () => {
+    const result = readLockerCsv(
+      csvOf([
+        { ...batteryRow, capacity_ah: '' },
+        { ...batteryRow, chemistry: 'nicad' },
+        { ...batteryRow, cells_in_series: '3.5' },
+        { ...controllerRow, controller_type: '' },
+        { ...twelveVoltPanelRow, open_circuit_volts: '17' },
+        { ...dcLeadRow, gauge_awg: '16.5' },
+        { ...dcLeadRow, fuse_a: '0' },
+      ]),
+    );
+    expect(result.report).toEqual([
+      { row: 2, column: 'capacity_ah', message: 'A battery needs capacity_ah' },
+      { row: 3, column: 'chemistry', message: 'Chemistry must be lipo, li-ion, lifepo4 or lead-acid' },
+      { row: 4, column: 'cells_in_series', message: 'Cells in series is a whole number' },
+      { row: 5, column: 'controller_type', message: 'A controller needs controller_type' },
+      {
+        row: 6,
+        column: 'open_circuit_volts',
+        message: 'Open-circuit voltage must be above the maximum-power voltage',
+      },
+      { row: 7, column: 'gauge_awg', message: 'Wire gauge is a whole AWG number' },
+      { row: 8, column: 'fuse_a', message: 'Fuse rating must be above 0 A' },
+    ]);
+  });
+
   it('an unknown or missing kind, a bad boolean, a bad port and a count out of range', () => {
     const result = readLockerCsv(
       csvOf([
@@ -297,8 +452,12 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
       ]),
     );
     expect(result.report).toEqual([
-      { row: 2, column: 'kind', message: '"tent" is not a kind: panel, bank, converter, lead or device' },
-      { row: 3, column: 'kind', message: 'Give the kind: panel, bank, converter, lead or device' },
+      {
+        row: 2,
+        column: 'kind',
+        message: '"tent" is not a kind: panel, bank, battery, converter, controller, lead or device',
+      },
+      { row: 3, column: 'kind', message: 'Give the kind: panel, bank, battery, converter, controller, lead or device' },
       { row: 4, column: 'input_captive_cable', message: 'Write true or false, not "sometimes"' },
       { row: 5, column: 'output_ports', message: expect.stringContaining('write connector:volts:max_a') },
       { row: 6, column: 'output_ports', message: 'Port 1: Port current may be at most 20 A' },
@@ -354,7 +513,16 @@ describe('the column table', () => {
     const specKeys = (shape: Record<string, unknown>) => Object.keys(shape).map((k) => `spec.${k}`);
     const covered = (key: string) => [...paths].some((p) => p === key || p.startsWith(`${key}.`));
     const objectShape = (schema: unknown) => (schema as { shape?: Record<string, unknown> }).shape;
-    for (const schema of [usbPanelSpecSchema, bankSpecSchema, converterSpecSchema, leadSpecSchema, deviceSpecSchema]) {
+    for (const schema of [
+      usbPanelSpecSchema,
+      twelveVoltPanelSpecSchema,
+      bankSpecSchema,
+      batterySpecSchema,
+      converterSpecSchema,
+      controllerSpecSchema,
+      leadSpecSchema,
+      deviceSpecSchema,
+    ]) {
       const keys = specKeys(objectShape(schema) ?? {}).filter((k) => k !== 'spec.kind' || covered(k));
       expect(keys.length).toBeGreaterThan(3);
       for (const key of keys) expect(covered(key), key).toBe(true);
@@ -429,6 +597,10 @@ const specArb: fc.Arbitrary<ItemSpec> = fc.oneof(
   leadArb,
   deviceArb,
   energyDeviceArb,
+  twelveVoltPanelArb,
+  batteryArb,
+  controllerArb,
+  dcLeadArb,
 );
 const lockerItemArb: fc.Arbitrary<LockerItemInput> = fc
   .record({ name: nameArb, notes: notesArb, countOwned: fc.integer({ min: 1, max: 20 }), spec: specArb })

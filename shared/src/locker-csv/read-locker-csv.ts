@@ -8,7 +8,13 @@ import {
   lockerItemKinds,
 } from '../schemas/locker.js';
 import { type LockerCsvDelimiter, readBooleanCell, readNumberCell, readOutputPortsCell, unguardText } from './cells.js';
-import { type LockerCsvColumn, columnForPath, lockerCsvColumns, lockerCsvColumnsByName } from './columns.js';
+import {
+  type LockerCsvColumn,
+  columnForPath,
+  lockerCsvColumns,
+  lockerCsvColumnsByName,
+  lockerPanelTypes,
+} from './columns.js';
 
 /** Largest import file, bytes (1 MiB): a 2,000-row locker with notes fits well within it. */
 export const maxLockerCsvBytes = 1_048_576;
@@ -114,10 +120,15 @@ const isBlank = (cell: string | undefined) => cell === undefined || cell.trim() 
 const kindArticle: Record<LockerItemKind, string> = {
   panel: 'A panel',
   bank: 'A bank',
+  battery: 'A battery',
   converter: 'A converter',
+  controller: 'A controller',
   lead: 'A lead',
   device: 'A device',
 };
+
+/** The kinds as a report lists them. */
+const kindList = 'panel, bank, battery, converter, controller, lead or device';
 
 function setPath(target: Record<string, unknown>, path: readonly string[], value: unknown): void {
   let node = target;
@@ -140,6 +151,7 @@ const portPaths = [
   ['spec', 'outputPort'],
   ['spec', 'inputPort'],
   ['spec', 'chargePort'],
+  ['spec', 'port'],
 ] as const;
 
 interface RowContext {
@@ -156,16 +168,20 @@ function readRow({ rowNumber, cells, delimiter }: RowContext): { item?: LockerIt
   const kindColumn = lockerCsvColumnsByName.get('kind');
   const kindText = (kindColumn && cells.get(kindColumn)?.trim().toLowerCase()) ?? '';
   if (kindText === '') {
-    issue('kind', 'Give the kind: panel, bank, converter, lead or device');
+    issue('kind', `Give the kind: ${kindList}`);
     return { issues };
   }
   if (!(lockerItemKinds as readonly string[]).includes(kindText)) {
-    issue('kind', `"${kindText}" is not a kind: panel, bank, converter, lead or device`);
+    issue('kind', `"${kindText}" is not a kind: ${kindList}`);
     return { issues };
   }
   const kind = kindText as LockerItemKind;
   const basisColumn = lockerCsvColumnsByName.get('use_basis');
   const basis = basisColumn ? cells.get(basisColumn)?.trim() : undefined;
+  // An unknown panel type is the schema's to report; only a known one rules out the other type's columns.
+  const panelTypeColumn = lockerCsvColumnsByName.get('panel_type');
+  const panelTypeText = (panelTypeColumn && cells.get(panelTypeColumn)?.trim()) || panelTypeColumn?.blankMeans;
+  const panelType = lockerPanelTypes.find((t) => t === panelTypeText);
 
   const input: Record<string, unknown> = { spec: { kind } };
   const givenPorts = new Set<string>();
@@ -182,6 +198,13 @@ function readRow({ rowNumber, cells, delimiter }: RowContext): { item?: LockerIt
       issue(
         column.name,
         `${column.name} is for use_basis ${column.useBases.join(' or ')}, not ${basis}; leave it empty`,
+      );
+      continue;
+    }
+    if (column.panelTypes && panelType && !column.panelTypes.includes(panelType)) {
+      issue(
+        column.name,
+        `${column.name} is for panel_type ${column.panelTypes.join(' or ')}, not ${panelType}; leave it empty`,
       );
       continue;
     }

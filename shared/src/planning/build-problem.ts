@@ -91,7 +91,8 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
   const harvestGroups: HarvestGroup[] = [];
   const anySun: boolean[][] = Array.from({ length: skyCount }, () => new Array<boolean>(stepCount).fill(false));
   for (const g of owned) {
-    if (g.spec.kind !== 'panel') continue;
+    // 12 V panels are not planned with yet: no coefficients, so the presolve drops them (as batteries and controllers).
+    if (g.spec.kind !== 'panel' || g.spec.panelType !== 'usb') continue;
     const spec = g.spec as UsbPanelSpec;
     const directBanks = banks.filter((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
     // Leads count even when some bank takes the plug directly: another bank (the one the optimum needs) may not.
@@ -258,5 +259,8 @@ function dominanceOf(g: PlanningGear): DominanceAttribute[] {
       ];
     case 'lead':
       return [signature(spec, ['massG'])];
+    case 'battery':
+    case 'controller':
+      return [];
   }
 }

@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import { defaultBankCellVolts, maxBankCellVolts, minBankCellVolts } from '../constants/electrical.js';
 import { connectorSchema, efficiencyShare, finiteNumber, massGSchema, outputPortSchema, portSchema } from './ports.js';
+import { dcLeadFieldsSchema, twelveVoltPanelSpecSchema } from './station-items.js';
 
 /**
  * The engine's item specs (what the locker stores per item, without name, notes or counts). `kind` is the
- * discriminator; `battery` and `controller` (the 12 V path) join the union later as further members.
+ * discriminator; the 12 V path's `battery` and `controller` and the 12 V panel are in `station-items.ts`.
  */
 
 /** USB panel: a portable panel with a regulated USB output. */
@@ -33,9 +34,12 @@ export const usbPanelSpecSchema = z.object({
 });
 export type UsbPanelSpec = z.infer<typeof usbPanelSpecSchema>;
 
-/** Any panel; `panelType: '12v'` joins this union with the 12 V path. */
-export const panelSpecSchema = z.discriminatedUnion('panelType', [usbPanelSpecSchema], {
-  error: 'Panel type must be usb',
+/**
+ * Any panel: a USB panel or a 12 V panel, told apart by `panelType`. Stored USB panels carry `panelType: 'usb'`
+ * already, so they parse unchanged.
+ */
+export const panelSpecSchema = z.discriminatedUnion('panelType', [usbPanelSpecSchema, twelveVoltPanelSpecSchema], {
+  error: 'Panel type must be usb or 12v',
 });
 export type PanelSpec = z.infer<typeof panelSpecSchema>;
 
@@ -115,7 +119,11 @@ export const converterSpecSchema = z
   });
 export type ConverterSpec = z.infer<typeof converterSpecSchema>;
 
-/** A cable or adapter between two connectors (DC gauge and fuse fields join with the 12 V path). */
+/**
+ * A cable or adapter between two connectors; `lengthM` is one way (the loop is twice that). A DC lead may also
+ * give its copper gauge and its inline fuse (`gaugeAwg`, `fuseA`, both optional), which the lead-drop and fuse
+ * checks of the 12 V path read.
+ */
 export const leadSpecSchema = z.object({
   kind: z.literal('lead'),
   fromConnector: connectorSchema,
@@ -123,6 +131,7 @@ export const leadSpecSchema = z.object({
   lengthM: finiteNumber('Length')
     .gt(0, { error: 'Length must be above 0 m' })
     .max(20, { error: 'Length may be at most 20 m' }),
+  ...dcLeadFieldsSchema.shape,
   massG: massGSchema,
 });
 export type LeadSpec = z.infer<typeof leadSpecSchema>;

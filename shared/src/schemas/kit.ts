@@ -1,24 +1,29 @@
 import { z } from 'zod';
 import { bankSpecSchema, converterSpecSchema, leadSpecSchema, panelSpecSchema } from './items.js';
 import { deviceSpecSchema } from './devices.js';
+import { batterySpecSchema, controllerSpecSchema } from './station-items.js';
 
 /**
- * Any item spec, discriminated by `kind`. The 12 V path adds `battery` and `controller` members (and a
- * `panelType: '12v'` panel) without changing the others.
+ * Any item spec, discriminated by `kind` (a panel by `panelType` within it): the USB path's panel, bank, converter
+ * and lead, the 12 V path's battery and controller (and 12 V panel), and devices.
  */
 export const itemSpecSchema = z.discriminatedUnion(
   'kind',
-  [panelSpecSchema, bankSpecSchema, converterSpecSchema, leadSpecSchema, deviceSpecSchema],
-  { error: 'Item kind must be panel, bank, converter, lead or device' },
+  [panelSpecSchema, bankSpecSchema, batterySpecSchema, converterSpecSchema, controllerSpecSchema, leadSpecSchema, deviceSpecSchema],
+  { error: 'Item kind must be panel, bank, battery, converter, controller, lead or device' },
 );
 export type ItemSpec = z.infer<typeof itemSpecSchema>;
 export type ItemKind = ItemSpec['kind'];
 
-/** The power gear a kit can hold (devices are carried anyway and are not kit items). */
+/**
+ * The power gear a kit can hold (devices are carried anyway and are not kit items). The simulation and the
+ * planner do not yet use batteries, controllers or 12 V panels: such lines are left out of their paths and
+ * reported unused.
+ */
 export const kitItemSpecSchema = z.discriminatedUnion(
   'kind',
-  [panelSpecSchema, bankSpecSchema, converterSpecSchema, leadSpecSchema],
-  { error: 'Kit item kind must be panel, bank, converter or lead' },
+  [panelSpecSchema, bankSpecSchema, batterySpecSchema, converterSpecSchema, controllerSpecSchema, leadSpecSchema],
+  { error: 'Kit item kind must be panel, bank, battery, converter, controller or lead' },
 );
 export type KitItemSpec = z.infer<typeof kitItemSpecSchema>;
 

@@ -8,9 +8,9 @@ import { itemSpecSchema } from './kit.js';
  */
 
 /** The item kinds the locker holds today, in power-role order (Collect, Store, Convert, Connect, Use). */
-export const lockerItemKinds = ['panel', 'bank', 'converter', 'lead', 'device'] as const;
+export const lockerItemKinds = ['panel', 'bank', 'battery', 'converter', 'controller', 'lead', 'device'] as const;
 export const lockerItemKindSchema = z.enum(lockerItemKinds, {
-  error: 'Kind must be panel, bank, converter, lead or device',
+  error: 'Kind must be panel, bank, battery, converter, controller, lead or device',
 });
 export type LockerItemKind = z.infer<typeof lockerItemKindSchema>;
 

@@ -3,7 +3,7 @@ import { kitItemSpecSchema } from './kit.js';
 import { maxLockerCountOwned } from './locker.js';
 
 /**
- * The party pool: power gear (panels, banks, converters, leads) that members share into a trip's plan, each entry one
+ * The party pool: power gear (panels, banks, batteries, converters, controllers, leads) that members share into a trip's plan, each entry one
  * member's locker item with how many of it they bring. Devices are not pooled: they go on the trip's device list.
  *
  * The leader's locker rule: until the leader pools an item themselves, the leader's WHOLE locker counts as pooled
@@ -37,7 +37,7 @@ export const poolItemSchema = z.object({
   id: z.uuid(),
   itemId: z.uuid(),
   name: z.string(),
-  kind: z.enum(['panel', 'bank', 'converter', 'lead']),
+  kind: z.enum(['panel', 'bank', 'battery', 'converter', 'controller', 'lead']),
   /** Grams of one unit. */
   massG: z.number().int(),
   count: z.number().int(),

@@ -6,6 +6,8 @@ import {
   twelveVoltPanelSpecSchema,
 } from './station-items.js';
 import { leadSpecSchema } from './items.js';
+import { itemSpecSchema, kitItemSpecSchema } from './kit.js';
+import { lockerItemInputSchema } from './locker.js';
 import { checkLeadDrop } from '../station/lead-drop.js';
 import { mpptHarvestW } from '../station/controller-harvest.js';
 import { packUsableWh } from '../station/usable-energy.js';
@@ -93,5 +95,52 @@ describe('12 V item specs', () => {
     expect(paths(dcLeadFieldsSchema.safeParse({ gaugeAwg: 12.5 }))).toEqual(['gaugeAwg']);
     expect(paths(dcLeadFieldsSchema.safeParse({ gaugeAwg: 41 }))).toEqual(['gaugeAwg']);
     expect(paths(dcLeadFieldsSchema.safeParse({ fuseA: 0 }))).toEqual(['fuseA']);
+  });
+});
+
+describe('12 V gear in the locker item union', () => {
+  const usbPanel = {
+    kind: 'panel',
+    panelType: 'usb',
+    ratedW: 10,
+    portVolts: 5,
+    portMaxA: 2,
+    dropoutIrradianceWm2: 0,
+    tempCoeffPctPerC: -0.4,
+    outputPort: { connector: 'usb-a', captiveCable: false },
+    massG: 290,
+  } as const;
+  const usbLead = { kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 } as const;
+
+  it('a battery, a controller and a 12 V panel are locker items (and kit items)', () => {
+    for (const spec of [battery, controller, panel]) {
+      const item = lockerItemInputSchema.parse({ name: 'x', countOwned: 1, spec });
+      expect(item.spec.kind).toBe(spec.kind);
+      expect(kitItemSpecSchema.parse(spec).kind).toBe(spec.kind);
+    }
+    expect(itemSpecSchema.parse(panel)).toMatchObject({ panelType: '12v', tempCoeffVocPctPerC: -0.3 });
+  });
+
+  it('stored USB panels and leads without DC fields parse to exactly what they were', () => {
+    expect(itemSpecSchema.parse(usbPanel)).toEqual(usbPanel);
+    expect(itemSpecSchema.parse(usbLead)).toStrictEqual(usbLead);
+  });
+
+  it('a DC lead keeps its gauge and fuse', () => {
+    const dc = { ...usbLead, fromConnector: 'ring-terminal', toConnector: 'radio-dc', gaugeAwg: 16, fuseA: 7.5 };
+    expect(itemSpecSchema.parse(dc)).toEqual(dc);
+  });
+
+  it('errors name the field under spec, through the kind and the panel type', () => {
+    const errorPaths = (spec: unknown) => paths(lockerItemInputSchema.safeParse({ name: 'x', countOwned: 1, spec }));
+    expect(errorPaths({ ...battery, capacityAh: 0 })).toEqual(['spec.capacityAh']);
+    expect(errorPaths({ ...controller, maxChargeA: undefined })).toEqual(['spec.maxChargeA']);
+    expect(errorPaths({ ...panel, openCircuitVolts: 17 })).toEqual(['spec.openCircuitVolts']);
+    expect(errorPaths({ ...panel, panelType: 'solar' })).toEqual(['spec.panelType']);
+    expect(errorPaths({ ...usbLead, gaugeAwg: 16.5 })).toEqual(['spec.gaugeAwg']);
+    // A 12 V panel described with a USB panel's fields is missing its datasheet values.
+    expect(errorPaths({ ...usbPanel, panelType: '12v' })).toEqual(
+      expect.arrayContaining(['spec.maxPowerVolts', 'spec.maxPowerAmps', 'spec.openCircuitVolts']),
+    );
   });
 });

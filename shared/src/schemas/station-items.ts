@@ -5,8 +5,8 @@ import { efficiencyShare, finiteNumber, massGSchema, portSchema } from './ports.
 
 /**
  * Item specs of the 12 V path: a battery pack, a charge controller, a 12 V panel, and the gauge and fuse of a DC
- * lead. Each parses into what the station engine (`src/station/`) takes. They are not yet members of
- * `itemSpecSchema`: joining the union (and the CSV columns, the locker forms and the server) is a separate step.
+ * lead. Each parses into what the station engine (`src/station/`) takes. The battery and the controller are
+ * members of `itemSpecSchema`, the 12 V panel of `panelSpecSchema`, and the DC fields are part of `leadSpecSchema`.
  */
 
 /** Largest gap allowed between the label's rated power and Vmp × Imp, share 0–1 (datasheets round both; a planning choice). */
@@ -64,7 +64,7 @@ export const controllerSpecSchema = z.object({
 });
 export type ControllerSpec = z.infer<typeof controllerSpecSchema>;
 
-/** A 12 V-class panel with its datasheet at STC; joins `panelSpecSchema` as `panelType: '12v'` later. */
+/** A 12 V-class panel with its datasheet at STC: the `panelType: '12v'` member of `panelSpecSchema`. */
 export const twelveVoltPanelSpecSchema = z
   .object({
     kind: z.literal('panel'),
@@ -125,7 +125,7 @@ export const twelveVoltPanelSpecSchema = z
   });
 export type TwelveVoltPanelSpec = z.infer<typeof twelveVoltPanelSpecSchema>;
 
-/** The DC fields of a lead (copper gauge and inline fuse), to extend `leadSpecSchema` with. Both optional. */
+/** The DC fields of a lead (copper gauge and inline fuse), part of `leadSpecSchema`. Both optional. */
 export const dcLeadFieldsSchema = z.object({
   gaugeAwg: finiteNumber('Wire gauge')
     .int({ error: 'Wire gauge is a whole AWG number' })

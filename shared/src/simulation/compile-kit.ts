@@ -113,7 +113,8 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     const spec = entry.spec;
     if (spec.kind === 'lead') leads.push({ itemId: entry.itemId, spec });
     else if (spec.kind === 'converter') converters.push({ itemId: entry.itemId, spec });
-    else if (spec.kind === 'panel') panels.push({ itemId: entry.itemId, count: entry.count, spec });
+    // 12 V panels, batteries and controllers are not simulated yet: they stay out of every path, hence unused.
+    else if (spec.kind === 'panel' && spec.panelType === 'usb') panels.push({ itemId: entry.itemId, count: entry.count, spec });
     else if (spec.kind === 'bank')
       for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
   }

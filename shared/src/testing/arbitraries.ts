@@ -3,6 +3,7 @@ import { bankSpecSchema, converterSpecSchema, leadSpecSchema, usbPanelSpecSchema
 import { deviceSpecSchema, type DeviceSpec } from '../schemas/devices.js';
 import type { KitEntry, KitItemSpec, TripDevice } from '../schemas/kit.js';
 import type { Connector } from '../schemas/ports.js';
+import { batterySpecSchema, controllerSpecSchema, twelveVoltPanelSpecSchema } from '../schemas/station-items.js';
 import { syntheticTripSolar } from './synthetic-solar.js';
 
 /** fast-check generators of schema-valid items, devices, kits and synthetic trips for property tests. */
@@ -71,6 +72,79 @@ export const leadArb = fc
     toConnector: fc.constantFrom<Connector>(...usbConnectors, 'usb-c', 'barrel-5.5x2.1', 'radio-dc'),
     lengthM: share(0.1, 2),
     massG: fc.integer({ min: 5, max: 80 }),
+  })
+  .map((l) => leadSpecSchema.parse({ kind: 'lead', ...l }));
+
+// The 12 V path's gear. Not in `kitItemArb` yet: the simulation does not use it.
+
+const dcConnector = fc.constantFrom<Connector>('ring-terminal', '12v-accessory', 'barrel-5.5x2.1', 'radio-dc', 'other');
+const dcPort = fc.record({ connector: dcConnector, captiveCable: fc.boolean() });
+
+/** A 12 V battery pack of any chemistry, with or without the maker's ratings. */
+export const batteryArb = fc
+  .record({
+    chemistry: fc.constantFrom('lipo', 'li-ion', 'lifepo4', 'lead-acid') as fc.Arbitrary<
+      'lipo' | 'li-ion' | 'lifepo4' | 'lead-acid'
+    >,
+    cellsInSeries: fc.integer({ min: 1, max: 12 }),
+    capacityAh: share(0.5, 40),
+    chargeCRate: fc.option(share(0.05, 3), { nil: undefined }),
+    dischargeCRate: fc.option(share(0.2, 30), { nil: undefined }),
+    ratedHours: fc.option(share(1, 20), { nil: undefined }),
+    peukertExponent: fc.option(share(1, 1.4), { nil: undefined }),
+    port: dcPort,
+    massG: fc.integer({ min: 100, max: 5000 }),
+  })
+  .map((b) => batterySpecSchema.parse({ kind: 'battery', ...b }));
+
+/** A PWM or MPPT charge controller. */
+export const controllerArb = fc
+  .record({
+    controllerType: fc.constantFrom('pwm', 'mppt') as fc.Arbitrary<'pwm' | 'mppt'>,
+    maxInputVolts: share(20, 100),
+    maxChargeA: share(1, 30),
+    efficiency: share(0.85, 0.99),
+    inputPort: dcPort,
+    outputPort: dcPort,
+    massG: fc.integer({ min: 30, max: 800 }),
+  })
+  .map((c) => controllerSpecSchema.parse({ kind: 'controller', ...c }));
+
+/** A 12 V panel whose Vmp × Imp matches its rating (within the schema's 10 %). */
+export const twelveVoltPanelArb = fc
+  .record({
+    ratedW: share(5, 120),
+    maxPowerVolts: share(15, 19),
+    vocOverVmp: share(1.1, 1.35),
+    labelSlack: share(0.95, 1.05),
+    iscOverImp: fc.option(share(1, 1.15), { nil: undefined }),
+    tempCoeffPctPerC: share(-0.5, -0.3),
+    tempCoeffVocPctPerC: share(-0.4, -0.25),
+    dropoutIrradianceWm2: share(0, 100),
+    outputPort: dcPort,
+    massG: fc.integer({ min: 200, max: 4000 }),
+  })
+  .map(({ vocOverVmp, labelSlack, iscOverImp, ...p }) => {
+    const maxPowerAmps = (p.ratedW / p.maxPowerVolts) * labelSlack;
+    return twelveVoltPanelSpecSchema.parse({
+      kind: 'panel',
+      panelType: '12v',
+      ...p,
+      maxPowerAmps,
+      openCircuitVolts: p.maxPowerVolts * vocOverVmp,
+      ...(iscOverImp === undefined ? {} : { shortCircuitAmps: maxPowerAmps * iscOverImp }),
+    });
+  });
+
+/** A DC lead with its gauge and fuse (each sometimes left out). */
+export const dcLeadArb = fc
+  .record({
+    fromConnector: dcConnector,
+    toConnector: dcConnector,
+    lengthM: share(0.2, 5),
+    gaugeAwg: fc.option(fc.integer({ min: 10, max: 24 }), { nil: undefined }),
+    fuseA: fc.option(fc.constantFrom(3, 5, 7.5, 10, 15, 20), { nil: undefined }),
+    massG: fc.integer({ min: 10, max: 300 }),
   })
   .map((l) => leadSpecSchema.parse({ kind: 'lead', ...l }));
 

@@ -173,7 +173,7 @@ export function PortFields({
   name,
   legend,
 }: {
-  name: 'spec.outputPort' | 'spec.inputPort' | 'spec.chargePort';
+  name: 'spec.outputPort' | 'spec.inputPort' | 'spec.chargePort' | 'spec.port';
   legend: string;
 }) {
   return (

@@ -11,12 +11,22 @@ import { cn } from '@/components/ui/cn';
 import { isApiError } from '@/lib/api-client';
 import { emptyItemFormValues, itemFormSchema, type ItemFormValues } from '../utils/item-form-values';
 import { kindLabels } from '../utils/labels';
-import { BankFields, ConverterFields, DeviceFields, LeadFields, PanelFields } from './kind-fields';
+import {
+  BankFields,
+  BatteryFields,
+  ControllerFields,
+  ConverterFields,
+  DeviceFields,
+  LeadFields,
+  PanelFields,
+} from './kind-fields';
 
 const kindFields: Record<ItemKind, () => ReactNode> = {
   panel: PanelFields,
   bank: BankFields,
+  battery: BatteryFields,
   converter: ConverterFields,
+  controller: ControllerFields,
   lead: LeadFields,
   device: DeviceFields,
 };

@@ -1,9 +1,15 @@
-import { chargeInputs, deviceKinds } from '@gramwatt/shared';
+import { batteryChemistries, chargeInputs, controllerTypes, deviceKinds } from '@gramwatt/shared';
 import { useEffect } from 'react';
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { newOutputPort, type ItemFormValues } from '../utils/item-form-values';
-import { chargeInputLabels, deviceKindLabels } from '../utils/labels';
+import {
+  chargeInputLabels,
+  chemistryLabels,
+  controllerTypeLabels,
+  deviceKindLabels,
+  panelTypeLabels,
+} from '../utils/labels';
 import {
   CheckboxField,
   connectorOptions,
@@ -32,17 +38,58 @@ function MassField({ optional = false }: { optional?: boolean }) {
 }
 
 export function PanelFields() {
+  const { control } = useFormContext<ItemFormValues>();
+  const panelType = useWatch({ control, name: 'spec.panelType' });
   return (
     <>
       <FieldGroup legend="Rating">
+        <SelectField
+          name="spec.panelType"
+          label="Panel type"
+          options={[
+            { value: 'usb', label: `${panelTypeLabels.usb}: a regulated USB output` },
+            { value: '12v', label: `${panelTypeLabels['12v']}: about 18 V at maximum power, for a charge controller` },
+          ]}
+        />
         <FieldRow>
           <NumberField name="spec.ratedW" label="Rated power" unit="W" required hint="The label's figure at STC." />
           <MassField />
         </FieldRow>
-        <FieldRow>
-          <NumberField name="spec.portVolts" label="USB port voltage" unit="V" required />
-          <NumberField name="spec.portMaxA" label="USB port maximum current" unit="A" required />
-        </FieldRow>
+        {panelType === '12v' ? (
+          <>
+            <FieldRow>
+              <NumberField
+                name="spec.maxPowerVolts"
+                label="Maximum-power voltage"
+                unit="V"
+                required
+                hint="Vmp on the datasheet, at STC; about 17–18 V for a 12 V panel."
+              />
+              <NumberField
+                name="spec.maxPowerAmps"
+                label="Maximum-power current"
+                unit="A"
+                required
+                hint="Imp at STC; Vmp × Imp is close to the rated power."
+              />
+            </FieldRow>
+            <FieldRow>
+              <NumberField
+                name="spec.openCircuitVolts"
+                label="Open-circuit voltage"
+                unit="V"
+                required
+                hint="Voc at STC; about 21–22 V. It rises in the cold: the controller must take it."
+              />
+              <NumberField name="spec.shortCircuitAmps" label="Short-circuit current" unit="A" hint="Isc, if given." />
+            </FieldRow>
+          </>
+        ) : (
+          <FieldRow>
+            <NumberField name="spec.portVolts" label="USB port voltage" unit="V" required />
+            <NumberField name="spec.portMaxA" label="USB port maximum current" unit="A" required />
+          </FieldRow>
+        )}
         <FieldRow>
           <NumberField
             name="spec.dropoutIrradianceWm2"
@@ -57,8 +104,122 @@ export function PanelFields() {
             hint="Negative: power falls as the cells warm. About −0.4 for crystalline silicon."
           />
         </FieldRow>
+        {panelType === '12v' && (
+          <NumberField
+            name="spec.tempCoeffVocPctPerC"
+            label="Temperature coefficient of open-circuit voltage"
+            unit={'%\u2060/\u2060°C'}
+            hint="Negative: Voc rises as the cells cool. About −0.3 for crystalline silicon."
+          />
+        )}
       </FieldGroup>
       <PortFields name="spec.outputPort" legend="Output port" />
+    </>
+  );
+}
+
+export function BatteryFields() {
+  return (
+    <>
+      <FieldGroup
+        legend="Pack"
+        hint="A 12 V pack for the 12 V path: the cells, their chemistry and the Ah on the label."
+      >
+        <FieldRow>
+          <SelectField
+            name="spec.chemistry"
+            label="Chemistry"
+            options={batteryChemistries.map((chemistry) => ({ value: chemistry, label: chemistryLabels[chemistry] }))}
+          />
+          <NumberField
+            name="spec.cellsInSeries"
+            label="Cells in series"
+            unit="cells"
+            required
+            hint="4 for a 12.8 V LiFePO4 pack, 3 for an 11.1 V LiPo, 6 for a 12 V lead-acid battery."
+          />
+        </FieldRow>
+        <FieldRow>
+          <NumberField name="spec.capacityAh" label="Capacity" unit="Ah" required />
+          <MassField />
+        </FieldRow>
+      </FieldGroup>
+      <FieldGroup
+        legend="Maker's ratings"
+        hint="Leave empty when the maker gives none: a typical charge rate for the chemistry is used instead."
+      >
+        <FieldRow>
+          <NumberField
+            name="spec.chargeCRate"
+            label="Charge rate"
+            unit="C"
+            hint="The most it may be charged at; 0.5 C on a 6 Ah pack is 3 A."
+          />
+          <NumberField
+            name="spec.dischargeCRate"
+            label="Continuous discharge rate"
+            unit="C"
+            hint="The most it may give without pause."
+          />
+        </FieldRow>
+        <FieldRow>
+          <NumberField
+            name="spec.ratedHours"
+            label="Rated over"
+            unit="h"
+            hint="The hours the Ah figure is rated over; 20 for most lead-acid batteries."
+          />
+          <NumberField
+            name="spec.peukertExponent"
+            label="Peukert exponent"
+            unit="—"
+            hint="From the maker's rate table, if you have worked it out."
+          />
+        </FieldRow>
+      </FieldGroup>
+      <PortFields name="spec.port" legend="Terminal" />
+    </>
+  );
+}
+
+export function ControllerFields() {
+  return (
+    <>
+      <FieldGroup legend="Charge controller" hint="Sits between a 12 V panel and a battery.">
+        <SelectField
+          name="spec.controllerType"
+          label="Type"
+          options={controllerTypes.map((type) => ({
+            value: type,
+            label:
+              type === 'pwm'
+                ? `${controllerTypeLabels.pwm}: pulls the panel down to the battery's voltage`
+                : `${controllerTypeLabels.mppt}: tracks the panel's maximum power`,
+          }))}
+        />
+        <FieldRow>
+          <NumberField
+            name="spec.maxInputVolts"
+            label="Input voltage limit"
+            unit="V"
+            required
+            hint="The highest panel voltage it takes; a cold panel's open-circuit voltage must stay below it."
+          />
+          <NumberField name="spec.maxChargeA" label="Charge current limit" unit="A" required />
+        </FieldRow>
+        <FieldRow>
+          <NumberField
+            name="spec.efficiency"
+            label="Efficiency"
+            unit="%"
+            percent
+            hint="Used for MPPT; about 95 % is common."
+          />
+          <MassField />
+        </FieldRow>
+      </FieldGroup>
+      <PortFields name="spec.inputPort" legend="Panel input" />
+      <PortFields name="spec.outputPort" legend="Battery output" />
     </>
   );
 }
@@ -224,16 +385,27 @@ export function ConverterFields() {
 
 export function LeadFields() {
   return (
-    <FieldGroup legend="Ends and length">
-      <FieldRow>
-        <SelectField name="spec.fromConnector" label="From connector" options={connectorOptions} />
-        <SelectField name="spec.toConnector" label="To connector" options={connectorOptions} />
-      </FieldRow>
-      <FieldRow>
-        <NumberField name="spec.lengthM" label="Length" unit="m" required hint="One way, end to end." />
-        <MassField />
-      </FieldRow>
-    </FieldGroup>
+    <>
+      <FieldGroup legend="Ends and length">
+        <FieldRow>
+          <SelectField name="spec.fromConnector" label="From connector" options={connectorOptions} />
+          <SelectField name="spec.toConnector" label="To connector" options={connectorOptions} />
+        </FieldRow>
+        <FieldRow>
+          <NumberField name="spec.lengthM" label="Length" unit="m" required hint="One way, end to end." />
+          <MassField />
+        </FieldRow>
+      </FieldGroup>
+      <FieldGroup
+        legend="DC wiring"
+        hint="For a 12 V lead: its copper gauge and inline fuse. Fuse the positive wire close to the battery."
+      >
+        <FieldRow>
+          <NumberField name="spec.gaugeAwg" label="Wire gauge" unit="AWG" hint="Smaller numbers are thicker wire." />
+          <NumberField name="spec.fuseA" label="Inline fuse" unit="A" />
+        </FieldRow>
+      </FieldGroup>
+    </>
   );
 }
 

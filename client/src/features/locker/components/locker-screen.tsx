@@ -12,7 +12,7 @@ import { useLockerItems } from '../api/get-locker-items';
 import type { LockerItem } from '../api/types';
 import { undoWindowMs, useDeferredDelete } from '../hooks/use-deferred-delete';
 import { formatGrams } from '../utils/format';
-import { kindLabels } from '../utils/labels';
+import { kindPluralLabels } from '../utils/labels';
 import { totalGramsOf } from '../utils/power-roles';
 import { ImportDialog } from './import-dialog';
 import { ItemPanel, type ItemPanelState } from './item-panel';
@@ -28,7 +28,7 @@ export interface LockerScreenProps {
 
 const kindFilterOptions = [
   { value: 'all', label: 'All kinds' },
-  ...lockerItemKinds.map((kind) => ({ value: kind, label: `${kindLabels[kind]}s` })),
+  ...lockerItemKinds.map((kind) => ({ value: kind, label: kindPluralLabels[kind] })),
 ] as const;
 
 function ShelfIllustration() {

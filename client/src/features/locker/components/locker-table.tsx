@@ -14,7 +14,7 @@ import { Button } from '@/components/ui/button';
 import { cn } from '@/components/ui/cn';
 import type { LockerItem } from '../api/types';
 import { formatGrams, formatNumber } from '../utils/format';
-import { kindLabels } from '../utils/labels';
+import { kindLabels, kindPluralLabels } from '../utils/labels';
 import { countsTowardGrams, groupByPowerRole, totalGramsOf } from '../utils/power-roles';
 import { specSummary } from '../utils/spec-summary';
 import { ItemThumb } from './item-thumb';
@@ -191,7 +191,7 @@ export function LockerTable({ items, search, kind, onEdit, onDelete }: LockerTab
     return (
       <p role="status" className="rounded-xl border-2 border-scree-200 bg-white px-4 py-8 text-center text-scree-700">
         No items match{search.trim() ? ` “${search.trim()}”` : ''}
-        {kind !== 'all' ? ` among the ${kindLabels[kind].toLowerCase()}s` : ''}.
+        {kind !== 'all' ? ` among the ${kindPluralLabels[kind].toLowerCase()}` : ''}.
       </p>
     );
 

@@ -1,12 +1,17 @@
-import type {
-  ChargeInput,
-  Connector,
-  DeviceKind,
-  ItemKind,
-  ItemSpec,
-  OutputPort,
-  Port,
-  UseProfile,
+import {
+  defaultMpptEfficiency,
+  defaultPanelVocTempCoeffPctPerC,
+  type BatteryChemistry,
+  type ChargeInput,
+  type Connector,
+  type ControllerSpec,
+  type DeviceKind,
+  type ItemKind,
+  type ItemSpec,
+  type OutputPort,
+  type PanelSpec,
+  type Port,
+  type UseProfile,
 } from '@gramwatt/shared';
 import { z } from 'zod';
 
@@ -42,13 +47,28 @@ export interface UseProfileFormValues {
 export interface SpecFormValues {
   kind: ItemKind;
   massG: string;
-  // panel
+  // panel (USB and 12 V)
+  panelType: PanelSpec['panelType'];
   ratedW: string;
   portVolts: string;
   portMaxA: string;
+  maxPowerVolts: string;
+  maxPowerAmps: string;
+  openCircuitVolts: string;
+  shortCircuitAmps: string;
   dropoutIrradianceWm2: string;
   tempCoeffPctPerC: string;
+  tempCoeffVocPctPerC: string;
   outputPort: PortFormValues;
+  // battery
+  chemistry: BatteryChemistry;
+  cellsInSeries: string;
+  capacityAh: string;
+  chargeCRate: string;
+  dischargeCRate: string;
+  ratedHours: string;
+  peukertExponent: string;
+  port: PortFormValues;
   // bank
   capacityMah: string;
   cellVolts: string;
@@ -65,12 +85,18 @@ export interface SpecFormValues {
   inputVolts: string;
   outputVolts: string;
   maxOutputA: string;
-  /** Percent. */
+  /** Percent (converters and controllers). */
   efficiency: string;
+  // controller
+  controllerType: ControllerSpec['controllerType'];
+  maxInputVolts: string;
+  maxChargeA: string;
   // lead
   fromConnector: Connector;
   toConnector: Connector;
   lengthM: string;
+  gaugeAwg: string;
+  fuseA: string;
   // device
   deviceKind: DeviceKind;
   ownBatteryWh: string;
@@ -95,6 +121,7 @@ export interface ItemFormValues {
   countOwned: string;
   /** How a bank's capacity is given; not sent (only the chosen field is). */
   capacityUnit: 'mah' | 'wh';
+
   spec: SpecFormValues;
 }
 
@@ -131,17 +158,31 @@ export const emptyItemFormValues = (kind: ItemKind): ItemFormValues => ({
   spec: {
     kind,
     massG: '',
+    panelType: 'usb',
     ratedW: '',
     portVolts: '5',
     portMaxA: '',
+    maxPowerVolts: '',
+    maxPowerAmps: '',
+    openCircuitVolts: '',
+    shortCircuitAmps: '',
     dropoutIrradianceWm2: '0',
     tempCoeffPctPerC: '-0.4',
-    outputPort: defaultPort('usb-a'),
+    tempCoeffVocPctPerC: String(defaultPanelVocTempCoeffPctPerC),
+    outputPort: defaultPort(kind === 'controller' ? 'ring-terminal' : 'usb-a'),
+    chemistry: 'lifepo4',
+    cellsInSeries: '4',
+    capacityAh: '',
+    chargeCRate: '',
+    dischargeCRate: '',
+    ratedHours: '',
+    peukertExponent: '',
+    port: defaultPort('ring-terminal'),
     capacityMah: '',
     cellVolts: '3.7',
     capacityWh: '',
     inputMaxW: '',
-    inputPort: defaultPort('usb-c'),
+    inputPort: defaultPort(kind === 'controller' ? 'barrel-5.5x2.1' : 'usb-c'),
     outputPorts: [newOutputPort()],
     outputEfficiency: '85',
     chargeEfficiency: kind === 'device' ? '85' : '90',
@@ -149,10 +190,15 @@ export const emptyItemFormValues = (kind: ItemKind): ItemFormValues => ({
     inputVolts: '5',
     outputVolts: '12',
     maxOutputA: '',
-    efficiency: '85',
+    efficiency: kind === 'controller' ? percentText(defaultMpptEfficiency) : '85',
+    controllerType: 'mppt',
+    maxInputVolts: '',
+    maxChargeA: '',
     fromConnector: 'usb-a',
     toConnector: 'usb-c',
     lengthM: '',
+    gaugeAwg: '',
+    fuseA: '',
     deviceKind: 'phone',
     ownBatteryWh: '',
     chargesVia: 'usb-5v',
@@ -200,17 +246,57 @@ export const itemToFormValues = (item: {
   const base = { ...values, name: item.name, notes: item.notes, countOwned: text(item.countOwned ?? 1) };
   const spec = item.spec;
   switch (spec.kind) {
-    case 'panel':
+    case 'panel': {
+      const common = {
+        ...s,
+        panelType: spec.panelType,
+        massG: text(spec.massG),
+        ratedW: text(spec.ratedW),
+        dropoutIrradianceWm2: text(spec.dropoutIrradianceWm2),
+        tempCoeffPctPerC: text(spec.tempCoeffPctPerC),
+        outputPort: portToForm(spec.outputPort),
+      };
+      return spec.panelType === 'usb'
+        ? { ...base, spec: { ...common, portVolts: text(spec.portVolts), portMaxA: text(spec.portMaxA) } }
+        : {
+            ...base,
+            spec: {
+              ...common,
+              maxPowerVolts: text(spec.maxPowerVolts),
+              maxPowerAmps: text(spec.maxPowerAmps),
+              openCircuitVolts: text(spec.openCircuitVolts),
+              shortCircuitAmps: text(spec.shortCircuitAmps),
+              tempCoeffVocPctPerC: text(spec.tempCoeffVocPctPerC),
+            },
+          };
+    }
+    case 'battery':
       return {
         ...base,
         spec: {
           ...s,
           massG: text(spec.massG),
-          ratedW: text(spec.ratedW),
-          portVolts: text(spec.portVolts),
-          portMaxA: text(spec.portMaxA),
-          dropoutIrradianceWm2: text(spec.dropoutIrradianceWm2),
-          tempCoeffPctPerC: text(spec.tempCoeffPctPerC),
+          chemistry: spec.chemistry,
+          cellsInSeries: text(spec.cellsInSeries),
+          capacityAh: text(spec.capacityAh),
+          chargeCRate: text(spec.chargeCRate),
+          dischargeCRate: text(spec.dischargeCRate),
+          ratedHours: text(spec.ratedHours),
+          peukertExponent: text(spec.peukertExponent),
+          port: portToForm(spec.port),
+        },
+      };
+    case 'controller':
+      return {
+        ...base,
+        spec: {
+          ...s,
+          massG: text(spec.massG),
+          controllerType: spec.controllerType,
+          maxInputVolts: text(spec.maxInputVolts),
+          maxChargeA: text(spec.maxChargeA),
+          efficiency: percentText(spec.efficiency),
+          inputPort: portToForm(spec.inputPort),
           outputPort: portToForm(spec.outputPort),
         },
       };
@@ -255,6 +341,8 @@ export const itemToFormValues = (item: {
           fromConnector: spec.fromConnector,
           toConnector: spec.toConnector,
           lengthM: text(spec.lengthM),
+          gaugeAwg: text(spec.gaugeAwg),
+          fuseA: text(spec.fuseA),
         },
       };
     case 'device': {
@@ -334,12 +422,43 @@ export const toItemBody = (values: ItemFormValues): Record<string, unknown> => {
       case 'panel':
         return {
           kind: 'panel',
-          panelType: 'usb',
+          panelType: s.panelType,
           ratedW: num(s.ratedW),
-          portVolts: num(s.portVolts),
-          portMaxA: num(s.portMaxA),
+          ...(s.panelType === 'usb'
+            ? { portVolts: num(s.portVolts), portMaxA: num(s.portMaxA) }
+            : {
+                maxPowerVolts: num(s.maxPowerVolts),
+                maxPowerAmps: num(s.maxPowerAmps),
+                openCircuitVolts: num(s.openCircuitVolts),
+                shortCircuitAmps: num(s.shortCircuitAmps),
+                tempCoeffVocPctPerC: num(s.tempCoeffVocPctPerC),
+              }),
           dropoutIrradianceWm2: num(s.dropoutIrradianceWm2),
           tempCoeffPctPerC: num(s.tempCoeffPctPerC),
+          outputPort: s.outputPort,
+          massG: num(s.massG),
+        };
+      case 'battery':
+        return {
+          kind: 'battery',
+          chemistry: s.chemistry,
+          cellsInSeries: num(s.cellsInSeries),
+          capacityAh: num(s.capacityAh),
+          chargeCRate: num(s.chargeCRate),
+          dischargeCRate: num(s.dischargeCRate),
+          ratedHours: num(s.ratedHours),
+          peukertExponent: num(s.peukertExponent),
+          port: s.port,
+          massG: num(s.massG),
+        };
+      case 'controller':
+        return {
+          kind: 'controller',
+          controllerType: s.controllerType,
+          maxInputVolts: num(s.maxInputVolts),
+          maxChargeA: num(s.maxChargeA),
+          efficiency: share(s.efficiency),
+          inputPort: s.inputPort,
           outputPort: s.outputPort,
           massG: num(s.massG),
         };
@@ -380,6 +499,8 @@ export const toItemBody = (values: ItemFormValues): Record<string, unknown> => {
           fromConnector: s.fromConnector,
           toConnector: s.toConnector,
           lengthM: num(s.lengthM),
+          gaugeAwg: num(s.gaugeAwg),
+          fuseA: num(s.fuseA),
           massG: num(s.massG),
         };
       case 'device': {

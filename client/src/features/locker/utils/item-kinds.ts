@@ -1,4 +1,4 @@
 import type { ItemKind } from '@gramwatt/shared';
 
-/** The kinds a member can add today, in power-role order (batteries and controllers come with the 12 V path). */
-export const itemKinds: readonly ItemKind[] = ['panel', 'bank', 'converter', 'lead', 'device'];
+/** The kinds a member can add, in power-role order (Collect, Store, Convert, Connect, Use). */
+export const itemKinds: readonly ItemKind[] = ['panel', 'bank', 'battery', 'converter', 'controller', 'lead', 'device'];

@@ -1,4 +1,12 @@
-import type { ChargeInput, Connector, DeviceKind, ItemKind } from '@gramwatt/shared';
+import type {
+  BatteryChemistry,
+  ChargeInput,
+  Connector,
+  ControllerSpec,
+  DeviceKind,
+  ItemKind,
+  PanelSpec,
+} from '@gramwatt/shared';
 
 /** Plain names for the shared connector list, as a hiker would say them. */
 export const connectorLabels: Record<Connector, string> = {
@@ -16,9 +24,40 @@ export const connectorLabels: Record<Connector, string> = {
 export const kindLabels: Record<ItemKind, string> = {
   panel: 'Panel',
   bank: 'Bank',
+  battery: 'Battery',
   converter: 'Converter',
+  controller: 'Controller',
   lead: 'Lead',
   device: 'Device',
+};
+
+/** Plural kind names, for filters and "none among the …" lines. */
+export const kindPluralLabels: Record<ItemKind, string> = {
+  panel: 'Panels',
+  bank: 'Banks',
+  battery: 'Batteries',
+  converter: 'Converters',
+  controller: 'Controllers',
+  lead: 'Leads',
+  device: 'Devices',
+};
+
+export const panelTypeLabels: Record<PanelSpec['panelType'], string> = {
+  usb: 'USB panel',
+  '12v': '12 V panel',
+};
+
+/** Chemistry names as the trade writes them. */
+export const chemistryLabels: Record<BatteryChemistry, string> = {
+  lipo: 'LiPo',
+  'li-ion': 'Li-ion',
+  lifepo4: 'LiFePO4',
+  'lead-acid': 'Lead-acid',
+};
+
+export const controllerTypeLabels: Record<ControllerSpec['controllerType'], string> = {
+  pwm: 'PWM',
+  mppt: 'MPPT',
 };
 
 export const deviceKindLabels: Record<DeviceKind, string> = {

@@ -13,8 +13,17 @@ export interface PowerRoleInfo {
 /** The groups in the order energy flows: from the sun, into storage, through converters and leads, to devices. */
 export const powerRoles: readonly PowerRoleInfo[] = [
   { role: 'collect', label: 'Collect', blurb: 'Panels that turn sunlight into charge.' },
-  { role: 'store', label: 'Store', blurb: 'Banks that hold charge for the night and the cloudy days.' },
-  { role: 'convert', label: 'Convert', blurb: 'Converters that change one voltage into another.' },
+  {
+    role: 'store',
+    label: 'Store',
+    blurb: 'Banks and 12 V batteries that hold charge for the night and the cloudy days.',
+  },
+  {
+    role: 'convert',
+    label: 'Convert',
+    blurb:
+      'Converters that change one voltage into another, and charge controllers between a 12 V panel and a battery.',
+  },
   { role: 'connect', label: 'Connect', blurb: 'Leads and adapters between two connectors.' },
   {
     role: 'use',
@@ -23,11 +32,13 @@ export const powerRoles: readonly PowerRoleInfo[] = [
   },
 ];
 
-/** Each kind's group. Batteries join Store and controllers Convert when the 12 V path arrives. */
+/** Each kind's group: batteries store like banks, controllers convert like converters. */
 export const powerRoleOfKind: Record<ItemKind, PowerRole> = {
   panel: 'collect',
   bank: 'store',
+  battery: 'store',
   converter: 'convert',
+  controller: 'convert',
   lead: 'connect',
   device: 'use',
 };

@@ -130,7 +130,9 @@ export const installPlanApi = (overrides: Partial<Omit<FakePlanApi, 'requests'>>
       fake.requests.solves += 1;
       const answer = await fake.solve();
       if (answer instanceof Response) return answer;
-      const plan = buildPlanRecord(answer, { createdAt: new Date().toISOString() });
+      // Solved after the fixture trip's last change, a minute after the plan before it.
+      const createdAt = new Date(Date.UTC(2027, 1, 20, 10, 20 + fake.plans.length)).toISOString();
+      const plan = buildPlanRecord(answer, { createdAt });
       fake.plans.unshift(plan);
       return HttpResponse.json({ plan }, { status: 201 });
     }),

@@ -24,3 +24,13 @@ export const useTripParty = (tripId: string) =>
       devices: trip.devices,
     }),
   });
+
+/** When the trip or one of its devices last changed (ISO), to tell whether a plan still fits the trip. */
+export const useTripChangedAt = (tripId: string) =>
+  useQuery({
+    ...getTripQueryOptions(tripId),
+    select: (trip) =>
+      [trip.updatedAt, ...trip.devices.map((device) => device.updatedAt)].reduce((latest, at) =>
+        Date.parse(at) > Date.parse(latest) ? at : latest,
+      ),
+  });

@@ -42,6 +42,7 @@ describe('PlanTab', () => {
     expect(within(strip).getAllByRole('listitem')).toHaveLength(6);
     expect(within(strip).getByText(/^Day 3, Fri 12 Mar: 69 % stored at the day's end \(103 Wh\)$/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Find the lightest kit again' })).toBeEnabled();
+    expect(screen.queryByText('The trip changed after this plan was made')).toBeNull();
   });
 
   it('shows the newest stored plan on load, with gram prices, swaps, the ledger and the cautions', async () => {
@@ -66,6 +67,18 @@ describe('PlanTab', () => {
       /Day 1, Wed 10 Mar: the sun is up about \d+ h and stands highest at 78° around/,
     );
     expect(screen.getAllByText(/estimates, not a guarantee/).length).toBeGreaterThan(0);
+  });
+
+  it('says when the trip changed after the plan was made, and not before', async () => {
+    const trip = buildPlanTrip();
+    const plan = buildPlanRecord();
+    const changed = {
+      ...trip,
+      devices: trip.devices.map((d, i) => (i === 0 ? { ...d, updatedAt: '2027-02-21T09:00:00.000Z' } : d)),
+    };
+    installPlanApi({ trip: changed, plans: [plan] });
+    renderPlanTab();
+    expect(await screen.findByText('The trip changed after this plan was made')).toBeInTheDocument();
   });
 
   it('switches the ledger between the tightest sky and the expected sky', async () => {

@@ -1,8 +1,10 @@
 import { useState } from 'react';
+import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { usePlan } from '../api/get-plan';
 import { usePlans } from '../api/get-plans';
+import { useTripChangedAt } from '../api/get-trip-party';
 import type { PlanTabProps } from '../types';
 import { PlanView } from './plan-view';
 import { SolveAction } from './solve-action';
@@ -14,6 +16,9 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const [solvedId, setSolvedId] = useState<string | null>(null);
   const latestId = plans.data?.[0]?.id;
   const plan = usePlan(tripId, latestId);
+  const changedAt = useTripChangedAt(tripId).data;
+  const isOutdated =
+    plan.data !== undefined && changedAt !== undefined && Date.parse(changedAt) > Date.parse(plan.data.createdAt);
 
   const solve = canSolve && (
     <SolveAction tripId={tripId} hasPlan={latestId !== undefined} onSolved={(p) => setSolvedId(p.id)} />
@@ -46,6 +51,14 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
 
   return (
     <div className="flex flex-col gap-6">
+      {isOutdated && (
+        <Alert tone="caution" title="The trip changed after this plan was made">
+          Its devices or their use are not what the planner weighed.{' '}
+          {canSolve
+            ? 'Find the lightest kit again for the trip as it is now.'
+            : 'The leader or a partner can solve it again.'}
+        </Alert>
+      )}
       {solve}
       {plan.isPending ? (
         <TabLoading label="Loading the plan" />

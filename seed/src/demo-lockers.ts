@@ -2,13 +2,16 @@ import type { LockerItemInputRaw } from '@gramwatt/shared';
 
 /**
  * The demo members' lockers: invented gear with invented names (no real brands), with specs in the range
- * such gear has. Fern is the radio operator (both power paths' USB side: panels, banks, two boost
- * converters to charge a 12 V handheld); Tobin carries a phone, a camera and a watch. Trips refer to
+ * such gear has. Fern is the radio operator with both power paths: the USB path (panels, banks, two boost
+ * converters to charge a 12 V handheld) and the 12 V path (a 12 V panel, an MPPT controller, a small LiFePO4
+ * pack and a fused DC lead); Tobin carries a phone, a camera and a watch. Trips refer to
  * these items by name, so the names are stable: change them only together with the demo trips.
  */
 
 /** USB port of a panel or a charge input without a fixed cable. */
-const socket = (connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc' | '12v-accessory') => ({
+const socket = (
+  connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc' | '12v-accessory' | 'ring-terminal',
+) => ({
   connector,
   captiveCable: false,
 });
@@ -279,7 +282,79 @@ const fernLocker: LockerItemInputRaw[] = [
     name: 'Barrel to radio DC lead, 1 m',
     notes: 'Fused on the positive side (3 A blade fuse).',
     countOwned: 1,
-    spec: { kind: 'lead', fromConnector: 'barrel-5.5x2.1', toConnector: 'radio-dc', lengthM: 1, massG: 45 },
+    spec: {
+      kind: 'lead',
+      fromConnector: 'barrel-5.5x2.1',
+      toConnector: 'radio-dc',
+      lengthM: 1,
+      gaugeAwg: 20,
+      fuseA: 3,
+      massG: 45,
+    },
+  },
+  // The 12 V path: panel → controller → LiFePO4 pack → fused lead → the handheld, run live or charging.
+  {
+    name: 'Bivouac 30 W 12 V panel',
+    notes: 'Two-fold 12 V sheet with a fixed barrel lead; for the controller, not for USB.',
+    countOwned: 1,
+    spec: {
+      kind: 'panel',
+      panelType: '12v',
+      ratedW: 30,
+      maxPowerVolts: 18,
+      maxPowerAmps: 1.67,
+      openCircuitVolts: 21.6,
+      shortCircuitAmps: 1.8,
+      tempCoeffPctPerC: -0.4,
+      tempCoeffVocPctPerC: -0.3,
+      dropoutIrradianceWm2: 0,
+      outputPort: cable('barrel-5.5x2.1'),
+      massG: 950,
+    },
+  },
+  {
+    name: 'Meander 5 A MPPT controller',
+    notes: 'Set to the LiFePO4 profile. Connect it to the pack before the panel.',
+    countOwned: 1,
+    spec: {
+      kind: 'controller',
+      controllerType: 'mppt',
+      maxInputVolts: 30,
+      maxChargeA: 5,
+      efficiency: 0.95,
+      inputPort: socket('barrel-5.5x2.1'),
+      outputPort: socket('ring-terminal'),
+      massG: 110,
+    },
+  },
+  {
+    name: 'Tarn 6 Ah LiFePO4 pack',
+    notes: 'Four cells in series (12.8 V nominal) with a protection board; charge at 3 A at most, never below 0 °C.',
+    countOwned: 1,
+    spec: {
+      kind: 'battery',
+      chemistry: 'lifepo4',
+      cellsInSeries: 4,
+      capacityAh: 6,
+      chargeCRate: 0.5,
+      dischargeCRate: 1,
+      port: socket('ring-terminal'),
+      massG: 760,
+    },
+  },
+  {
+    name: 'Ring to radio DC lead, 1.5 m, fused',
+    notes: '5 A blade fuse in the positive wire, next to the pack.',
+    countOwned: 1,
+    spec: {
+      kind: 'lead',
+      fromConnector: 'ring-terminal',
+      toConnector: 'radio-dc',
+      lengthM: 1.5,
+      gaugeAwg: 18,
+      fuseA: 5,
+      massG: 55,
+    },
   },
   {
     name: 'Dual-band handheld radio, 5 W',

@@ -71,7 +71,7 @@ function expectConsistentSplit(answer: Extract<PartyAnswer, { kit: unknown }>, r
 }
 
 describe('party solver vs exhaustive search (200 seeded small parties)', () => {
-  const outcomes = { fits: 0, heavierThanLightest: 0, overLimits: 0, nothing: 0 };
+  const outcomes = { fits: 0, heavierThanLightest: 0, overLimits: 0, nothing: 0, tripLimited: 0, overTripLimit: 0 };
   let seed = 0;
   for (let n = 1; n <= caseCount; n++) {
     // Draw worlds until the pool holds at most 6 units (the brute force's 3⁶ assignments per kit); keep a pool that
@@ -96,9 +96,13 @@ describe('party solver vs exhaustive search (200 seeded small parties)', () => {
       const judge = syntheticJudge(world);
       const problem = syntheticProblem(world);
       const poolG = problem.candidates.reduce((g, c) => g + c.massG * c.ownedCount, 0);
-      const rules = partyRules(world, caseSeed, exhaustiveLightestKit(problem.candidates, judge).best?.massG ?? poolG);
-      const party: PartyProblem = { problem, ...rules };
-      const oracle = exhaustivePartyAnswer(party.problem.candidates, judge, rules);
+      const scaleG = exhaustiveLightestKit(problem.candidates, judge).best?.massG ?? poolG;
+      const rules = partyRules(world, caseSeed, scaleG);
+      // On about a third of the cases the trip also caps the whole kit's grams.
+      const random = seededRandom(caseSeed * 104_729);
+      const tripLimitG = random() < 0.35 ? Math.round(scaleG * (0.9 + 0.6 * random())) : null;
+      const party: PartyProblem = { problem, ...rules, tripLimitG };
+      const oracle = exhaustivePartyAnswer(party.problem.candidates, judge, rules, tripLimitG);
       const answer = optimisePartyKit(party, judge);
       const massGById = new Map(party.problem.candidates.map((c) => [c.itemId, c.massG]));
       if (oracle.kind === 'nothing-feasible') {
@@ -112,6 +116,8 @@ describe('party solver vs exhaustive search (200 seeded small parties)', () => {
         expect(answer.kit.massG).toBe(oracle.massG);
         expect(judge(kitCounts(answer.kit.lines)).feasible).toBe(true);
         expect(answer.split.withinLimits).toBe(true);
+        expect(answer.kit.massG).toBeLessThanOrEqual(tripLimitG ?? Infinity);
+        if (tripLimitG !== null) outcomes.tripLimited++;
         for (const c of answer.split.carriers)
           if (c.gramLimitG !== null) expect(c.massG).toBeLessThanOrEqual(c.gramLimitG);
         expectConsistentSplit(answer, rules);
@@ -131,8 +137,11 @@ describe('party solver vs exhaustive search (200 seeded small parties)', () => {
         answer.split.lentUnits,
       ]).toEqual(reference);
       const over = answer.split.carriers.filter((c) => c.overG > 0);
-      // Over the limits, someone is named; or no split keeps the walking rule at all, and the note says so.
-      if (answer.split.walkingRuleHeld) expect(over.length).toBeGreaterThan(0);
+      // Over the limits, someone is named, or the kit is over the trip's limit by the grams said; or no split keeps the
+      // walking rule at all, and the note says so.
+      expect(answer.overTripLimitG).toBe(Math.max(0, answer.kit.massG - (tripLimitG ?? Infinity)));
+      if (answer.overTripLimitG > 0) outcomes.overTripLimit++;
+      else if (answer.split.walkingRuleHeld) expect(over.length).toBeGreaterThan(0);
       else expect(answer.notes.join(' ')).toMatch(/walking/);
       for (const c of over) expect(c.overG).toBe(c.massG - (c.gramLimitG ?? 0));
       expectConsistentSplit(answer, rules);
@@ -145,5 +154,7 @@ describe('party solver vs exhaustive search (200 seeded small parties)', () => {
     expect(outcomes.heavierThanLightest).toBeGreaterThan(3);
     expect(outcomes.overLimits).toBeGreaterThan(10);
     expect(outcomes.nothing).toBeGreaterThan(3);
+    expect(outcomes.tripLimited).toBeGreaterThan(5);
+    expect(outcomes.overTripLimit).toBeGreaterThan(3);
   });
 });

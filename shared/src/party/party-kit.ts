@@ -25,6 +25,11 @@ export function partyLimitG(party: PartyProblem): number {
   return party.carriers.reduce((sum, c) => sum + (c.gramLimitG ?? Infinity), 0);
 }
 
+/** The most a kit may weigh: Σ limits and the trip's own limit, whichever is lower (Infinity: no cap). */
+function kitCapG(party: PartyProblem): number {
+  return Math.min(partyLimitG(party), party.tripLimitG ?? Infinity);
+}
+
 function choiceOf(counts: KitCounts, problem: OptimisationProblem, verdict: KitChoice['verdict']): KitChoice {
   return { lines: kitLines(counts), massG: kitMassG(counts, problem.candidates), verdict };
 }
@@ -50,6 +55,7 @@ export function bestSplit(party: PartyProblem, counts: KitCounts, options: Party
  * the walking rule is cut off alone: adding a bank can mend it.
  */
 function tooHeavyForAnySuperset(party: PartyProblem, counts: KitCounts, options: PartyOptions): boolean {
+  if (kitMassG(counts, party.problem.candidates) > kitCapG(party)) return true;
   const split = splitKit(counts, party, {
     massGById: new Map(party.problem.candidates.map((c) => [c.itemId, c.massG])),
     walkingRule: false,
@@ -74,7 +80,8 @@ function statsOf(search: KitSearch, party: { unsplittableKits: number; supersetC
  * assume — a kit too heavy to share makes every LARGER kit too heavy, not every smaller one — so the limits are not
  * put into the model. Instead the optimiser proposes the lightest feasible kit not yet excluded; the exact split
  * checks it; a kit that cannot be shared is cut off (with every kit holding it when grams alone rule it out, alone
- * otherwise) and the next lightest is tried, in bounded rounds. A proposed kit heavier than Σ limits ends the search:
+ * otherwise) and the next lightest is tried, in bounded rounds. A kit heavier than the trip's own limit is cut off
+ * with every kit holding it. A proposed kit heavier than Σ limits (or the trip's limit) ends the search:
  * no kit from there on can be shared. When no kit fits, the answer is the lightest feasible kit with its best split,
  * naming each person's overage. Pass the search to go on with it afterwards (the swaps do).
  * @example optimisePartyKit(party, judge).status // 'optimal'
@@ -117,7 +124,10 @@ export function optimisePartyKit(
       notes: [...first.notes, ...walkingNote(lightest.split), ...splitNote(lightest.split)],
     };
   }
-  if (lightest.split.withinLimits && lightest.split.walkingRuleHeld) {
+  const capG = kitCapG(party);
+  const fits = (split: KitSplit, massG: number): boolean =>
+    split.withinLimits && split.walkingRuleHeld && massG <= capG;
+  if (fits(lightest.split, lightest.kit.massG)) {
     return {
       status: 'optimal',
       kit: lightest.kit,
@@ -133,6 +143,7 @@ export function optimisePartyKit(
     kit: lightest.kit,
     split: lightest.split,
     partyLimitG: Number.isFinite(limitG) ? limitG : null,
+    overTripLimitG: Math.max(0, lightest.kit.massG - (party.tripLimitG ?? Infinity)),
     stats: statsOf(search, counters),
     notes: [...reason, ...walkingNote(lightest.split), ...splitNote(lightest.split)],
   });
@@ -152,10 +163,14 @@ export function optimisePartyKit(
       return overLimits(['No kit that keeps every device charged can be shared within everyone’s limits.']);
     if (step.kind === 'stopped')
       return overLimits([`The search for a kit that fits everyone’s limits stopped (${step.reason}).`]);
-    if (step.massG > limitG)
-      return overLimits(['Every kit that keeps every device charged weighs more than the party’s limits together.']);
+    if (step.massG > capG)
+      return overLimits([
+        capG < limitG
+          ? 'Every kit that keeps every device charged weighs more than the trip’s limit.'
+          : 'Every kit that keeps every device charged weighs more than the party’s limits together.',
+      ]);
     const split = bestSplit(party, step.counts, options);
-    if (split.withinLimits && split.walkingRuleHeld) {
+    if (fits(split, step.massG)) {
       const kit = choiceOf(step.counts, problem, step.verdict);
       const proven = step.proven && everyCutProven && split.proven;
       return {

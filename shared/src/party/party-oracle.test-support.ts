@@ -78,13 +78,14 @@ export type PartyOracleAnswer =
 
 /**
  * Every kit (Π (owned + 1)), judged; among the feasible ones the lightest that splits within the limits under the
- * walking rule. With none, the lightest feasible kits (several may tie) and the least split cost of each are the
+ * walking rule and weighs no more than the trip's own limit. With none, the lightest feasible kits (several may tie) and the least split cost of each are the
  * reference for the "over the limits" answer.
  */
 export function exhaustivePartyAnswer(
   candidates: readonly KitCandidate[],
   judge: KitJudge,
   rules: SplitRules,
+  tripLimitG: number | null = null,
 ): PartyOracleAnswer {
   const items = candidates.filter((c) => c.ownedCount > 0);
   const massGById = new Map(candidates.map((c) => [c.itemId, c.massG]));
@@ -108,7 +109,7 @@ export function exhaustivePartyAnswer(
   feasible.sort((a, b) => a.massG - b.massG);
   for (const f of feasible) {
     const cost = bruteForceSplitCost(f.kit, rules, massGById);
-    if (cost && cost[0] === 0) return { kind: 'fits', massG: f.massG };
+    if (cost && cost[0] === 0 && f.massG <= (tripLimitG ?? Infinity)) return { kind: 'fits', massG: f.massG };
   }
   const lightestG = feasible[0]?.massG ?? 0;
   const lightestKits = feasible.filter((f) => f.massG === lightestG).map((f) => f.kit);

@@ -45,6 +45,8 @@ export interface SplitRules {
 /** A party's kit problem: the pooled candidates and daily model (gram limit unused), and the split rules. */
 export interface PartyProblem extends SplitRules {
   problem: OptimisationProblem;
+  /** The trip's own limit on the whole kit's grams, on top of each person's (absent or null: none). */
+  tripLimitG?: number | null;
 }
 
 /** One carrier's share of a kit. */
@@ -92,7 +94,8 @@ export type PartyAnswer =
     }
   | {
       /**
-       * No feasible kit splits within the limits: the lightest feasible kit and its best split (least total grams over,
+       * No feasible kit splits within the limits (or fits the trip's own limit): the lightest feasible kit and its best
+       * split (least total grams over,
        * then the least over for any one person, then the fewest lent items); each carrier's `overG` says by how much.
        */
       status: 'over-limits';
@@ -100,6 +103,8 @@ export type PartyAnswer =
       split: KitSplit;
       /** Σ limits (null when someone has none). */
       partyLimitG: number | null;
+      /** Grams the kit weighs over the trip's own limit on the whole kit (0 within it or with none). */
+      overTripLimitG: number;
       stats: PartyStats;
       notes: string[];
     }

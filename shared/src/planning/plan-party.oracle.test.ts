@@ -60,13 +60,17 @@ describe('planParty vs exhaustive search on 120 seeded real trips', () => {
   const outcomes = { fits: 0, overLimits: 0, nothing: 0, withPanel: 0 };
   for (let seed = 1; seed <= caseCount; seed++) {
     it(`case ${seed}`, () => {
-      const { input, random } = smallPool(seed);
-      const context = planningContext(input);
+      const pool = smallPool(seed);
+      const random = pool.random;
+      const context = planningContext(pool.input);
       const lightest = exhaustiveLightestKit(context.problem.candidates, context.judge).best;
-      const poolG = input.gear.reduce((g, i) => g + i.massG * i.countOwned, 0);
-      const party = randomParty(input, random, lightest?.massG || poolG);
+      const poolG = pool.input.gear.reduce((g, i) => g + i.massG * i.countOwned, 0);
+      const party = randomParty(pool.input, random, lightest?.massG || poolG);
+      // On about a third of the cases the trip also caps the whole kit's grams.
+      const tripLimitG = random() < 0.35 ? Math.round((lightest?.massG || poolG) * (0.9 + 0.6 * random())) : null;
+      const input = { ...pool.input, gramLimitG: tripLimitG };
       const rules = partyProblemOf(context, party);
-      const oracle = exhaustivePartyAnswer(context.problem.candidates, context.judge, rules);
+      const oracle = exhaustivePartyAnswer(context.problem.candidates, context.judge, rules, tripLimitG);
       const plan = planParty(input, party, { withExtras: false });
       if (oracle.kind === 'nothing-feasible') {
         expect(plan.status).toBe('nothing-feasible');
@@ -94,6 +98,7 @@ describe('planParty vs exhaustive search on 120 seeded real trips', () => {
         expect(plan.status).toBe('optimal');
         expect(plan.kit?.massG).toBe(oracle.massG);
         expect(context.judge(counts).feasible).toBe(true);
+        expect(plan.kit?.massG).toBeLessThanOrEqual(tripLimitG ?? Infinity);
         for (const c of carriers) {
           expect(c.overG).toBe(0);
           if (c.gramLimitG !== null) expect(c.massG).toBeLessThanOrEqual(c.gramLimitG);
@@ -110,6 +115,8 @@ describe('planParty vs exhaustive search on 120 seeded real trips', () => {
         expect([carriers.reduce((g, c) => g + c.overG, 0), Math.max(0, ...carriers.map((c) => c.overG))]).toEqual(
           reference.slice(0, 2),
         );
+        if (tripLimitG !== null && oracle.massG > tripLimitG)
+          expect(plan.headline).toContain(`${(oracle.massG - tripLimitG).toLocaleString('en-GB')} g over`);
         // The headline names each person over their limit, with the grams over it.
         for (const c of carriers.filter((x) => x.overG > 0)) {
           expect(plan.headline).toContain(c.name);

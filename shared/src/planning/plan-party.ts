@@ -45,6 +45,7 @@ export function partyProblemOf(context: PlanningContext, party: PartyPlanning): 
     carriers: party.members.map((m) => ({ memberId: m.memberId, gramLimitG: m.gramLimitG })),
     ownerByItemId: new Map(Object.entries(party.ownerByItemId)),
     walkingFeeds: walkingFeedsOf(context.input.gear),
+    tripLimitG: context.input.gramLimitG,
   };
 }
 
@@ -149,9 +150,11 @@ export function planParty(
   const carriers = planCarriers(context, party, answer.split);
   const headline =
     answer.status === 'over-limits'
-      ? answer.split.walkingRuleHeld && carriers.some((c) => c.overG > 0)
-        ? `No kit that works can be shared within everyone’s limits: the lightest that does weighs ${gramsText(answer.kit.massG)}, and at best ${overageText(carriers)}.`
-        : `No kit that works can be shared so that every panel rides with a bank it can fill; the lightest that works weighs ${gramsText(answer.kit.massG)}.`
+      ? answer.overTripLimitG > 0
+        ? `Nothing that works fits under the trip’s ${gramsText(context.input.gramLimitG ?? 0)}: the lightest kit that does weighs ${gramsText(answer.kit.massG)}, ${gramsText(answer.overTripLimitG)} over${carriers.some((c) => c.overG > 0) ? `, and at best ${overageText(carriers)}` : ''}.`
+        : answer.split.walkingRuleHeld && carriers.some((c) => c.overG > 0)
+          ? `No kit that works can be shared within everyone’s limits: the lightest that does weighs ${gramsText(answer.kit.massG)}, and at best ${overageText(carriers)}.`
+          : `No kit that works can be shared so that every panel rides with a bank it can fill; the lightest that works weighs ${gramsText(answer.kit.massG)}.`
       : answer.status === 'optimal'
         ? `The lightest kit the party can share within everyone’s limits weighs ${gramsText(answer.kit.massG)}. ${result.evaluation?.verdict.text ?? ''}`.trim()
         : result.headline;

@@ -1,6 +1,14 @@
 import { lockerItemInputSchema } from '@gramwatt/shared';
 import { describe, expect, it } from 'vitest';
-import { bankSpec, leadSpec, panelSpec, phoneSpec } from '@/testing/locker-data';
+import {
+  bankSpec,
+  batterySpec,
+  controllerSpec,
+  leadSpec,
+  panelSpec,
+  phoneSpec,
+  twelveVoltPanelSpec,
+} from '@/testing/locker-data';
 import { emptyItemFormValues, itemFormSchema, itemToFormValues, parseNumberText, toItemBody } from './item-form-values';
 
 const schema = itemFormSchema(lockerItemInputSchema);
@@ -29,6 +37,22 @@ describe('item form values', () => {
     ['bank', bankSpec()],
     ['lead', leadSpec()],
     ['device', phoneSpec()],
+    ['12 V panel', twelveVoltPanelSpec()],
+    ['battery', batterySpec()],
+    [
+      'lead-acid battery with its rate table',
+      batterySpec({
+        chemistry: 'lead-acid',
+        cellsInSeries: 6,
+        capacityAh: 7,
+        chargeCRate: 0.1,
+        dischargeCRate: 3,
+        ratedHours: 20,
+        peukertExponent: 1.15,
+      }),
+    ],
+    ['controller', controllerSpec()],
+    ['fused DC lead', leadSpec({ fromConnector: 'ring-terminal', toConnector: 'radio-dc', gaugeAwg: 16, fuseA: 7.5 })],
   ] as const)('gives back the same %s spec after a trip through the form', (_kind, spec) => {
     const item = { name: 'Round trip', notes: 'kept', countOwned: 2, spec };
     const body = schema.parse(itemToFormValues(item));
@@ -50,6 +74,26 @@ describe('item form values', () => {
     });
     expect(body.spec).toMatchObject({ capacityWh: 20 });
     expect(body.spec).not.toHaveProperty('capacityMah');
+  });
+
+  it('sends a panel only its own type’s fields: a 12 V panel no USB port, a USB panel no datasheet', () => {
+    const usb = itemToFormValues({ name: 'P', notes: '', countOwned: 1, spec: panelSpec() });
+    const asTwelveVolt = toItemBody({
+      ...usb,
+      spec: { ...usb.spec, panelType: '12v', maxPowerVolts: '18', maxPowerAmps: '0.56', openCircuitVolts: '21.6' },
+    });
+    expect(asTwelveVolt.spec).toMatchObject({ panelType: '12v', maxPowerVolts: 18 });
+    expect(asTwelveVolt.spec).not.toHaveProperty('portVolts');
+    const twelve = itemToFormValues({ name: 'P', notes: '', countOwned: 1, spec: twelveVoltPanelSpec() });
+    const asUsb = toItemBody({ ...twelve, spec: { ...twelve.spec, panelType: 'usb', portMaxA: '2' } });
+    expect(asUsb.spec).not.toHaveProperty('openCircuitVolts');
+    expect(asUsb.spec).not.toHaveProperty('tempCoeffVocPctPerC');
+  });
+
+  it('starts a controller at the MPPT default efficiency and a battery as a 4-cell LiFePO4 pack', () => {
+    expect(emptyItemFormValues('controller').spec.efficiency).toBe('95');
+    expect(emptyItemFormValues('converter').spec.efficiency).toBe('85');
+    expect(emptyItemFormValues('battery').spec).toMatchObject({ chemistry: 'lifepo4', cellsInSeries: '4' });
   });
 
   it('reports an empty rated power at spec.ratedW', () => {

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { bankSpec, leadSpec, panelSpec, phoneSpec } from '@/testing/locker-data';
+import {
+  bankSpec,
+  batterySpec,
+  controllerSpec,
+  leadSpec,
+  panelSpec,
+  phoneSpec,
+  twelveVoltPanelSpec,
+} from '@/testing/locker-data';
 import { groupByPowerRole, totalGramsOf } from './power-roles';
 import { specSummary } from './spec-summary';
 
@@ -21,6 +29,25 @@ describe('specSummary', () => {
     );
   });
 
+  it('gives a 12 V panel its maximum-power point and open-circuit voltage', () => {
+    expect(specSummary(twelveVoltPanelSpec())).toBe('30 W 12 V · 18 V 1.67 A at max power · 21.6 V open circuit');
+  });
+
+  it('gives a battery its chemistry, cells in series and Ah, and a controller its type and limits', () => {
+    expect(specSummary(batterySpec({ chemistry: 'lead-acid', cellsInSeries: 6, capacityAh: 7 }))).toBe(
+      'Lead-acid 6S · 7 Ah',
+    );
+    expect(specSummary(controllerSpec())).toBe('PWM · up to 25 V in · 5 A charge');
+  });
+
+  it('adds a DC lead’s gauge and fuse when given', () => {
+    expect(
+      specSummary(
+        leadSpec({ fromConnector: 'ring-terminal', toConnector: 'radio-dc', lengthM: 1.5, gaugeAwg: 16, fuseA: 7.5 }),
+      ),
+    ).toBe('Ring terminal → Radio DC plug · 1.5 m · 16 AWG · 7.5 A fuse');
+  });
+
   it('shows a device by what it is, its battery and how it charges', () => {
     expect(specSummary(phoneSpec())).toBe('Phone · 15 Wh battery · charges by USB 5 V');
   });
@@ -40,6 +67,19 @@ describe('groupByPowerRole and totalGramsOf', () => {
 
   it('sums grams × count over the power gear only (devices are carried anyway)', () => {
     expect(totalGramsOf(items)).toBe(300 * 2 + 200 + 30 * 3);
+  });
+
+  it('puts batteries in Store beside banks and controllers in Convert, and counts their grams', () => {
+    const twelveVolt = [
+      ...items,
+      { kind: 'controller' as const, massG: 110, countOwned: 1 },
+      { kind: 'battery' as const, massG: 760, countOwned: 1 },
+    ];
+    const groups = groupByPowerRole(twelveVolt);
+    expect(groups.map((group) => group.label)).toEqual(['Collect', 'Store', 'Convert', 'Connect', 'Use']);
+    expect(groups.find((g) => g.role === 'store')?.items.map((i) => i.kind)).toEqual(['bank', 'battery']);
+    expect(groups.find((g) => g.role === 'convert')?.items.map((i) => i.kind)).toEqual(['controller']);
+    expect(totalGramsOf(twelveVolt)).toBe(300 * 2 + 200 + 30 * 3 + 110 + 760);
   });
 
   it('is 0 for an empty locker', () => {

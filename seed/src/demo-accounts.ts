@@ -14,6 +14,8 @@ export const demoAccounts: readonly DemoAccount[] = [
   { email: 'warden@gramwatt.example', displayName: 'Demo Warden', role: 'admin' },
   { email: 'fern@gramwatt.example', displayName: 'Fern Altmoor', role: 'member' },
   { email: 'tobin@gramwatt.example', displayName: 'Tobin Quarry', role: 'member' },
+  // The contact at home: a viewer on the demo party's trip, who receives the plan by e-mail.
+  { email: 'hollis@gramwatt.example', displayName: 'Hollis Brae', role: 'member' },
 ];
 
 /**

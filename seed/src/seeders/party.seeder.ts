@@ -3,7 +3,10 @@ import { and, eq, inArray, notInArray } from 'drizzle-orm';
 import { type DemoParty, demoParty } from '../demo-party';
 
 async function accountId(db: Database, email: string): Promise<string> {
-  const [row] = await db.select({ id: schema.accounts.id }).from(schema.accounts).where(eq(schema.accounts.email, email));
+  const [row] = await db
+    .select({ id: schema.accounts.id })
+    .from(schema.accounts)
+    .where(eq(schema.accounts.email, email));
   if (!row) throw new Error(`demo account ${email} is missing: seed the accounts first`);
   return row.id;
 }
@@ -16,7 +19,8 @@ async function itemsByName(db: Database, ownerId: string, names: readonly string
     .from(schema.lockerItems)
     .where(and(eq(schema.lockerItems.ownerId, ownerId), inArray(schema.lockerItems.name, [...names])));
   const byName = new Map(rows.map((row) => [row.name, row.id]));
-  for (const name of names) if (!byName.has(name)) throw new Error(`demo item ${name} is not in the locker: seed the lockers first`);
+  for (const name of names)
+    if (!byName.has(name)) throw new Error(`demo item ${name} is not in the locker: seed the lockers first`);
   return byName;
 }
 
@@ -56,7 +60,11 @@ export async function seedParty(db: Database, party: DemoParty = demoParty): Pro
           set: { role: member.role, gramLimitG: member.gramLimitG },
         });
 
-      const poolItems = await itemsByName(tx, memberId, member.pool.map((p) => p.itemName));
+      const poolItems = await itemsByName(
+        tx,
+        memberId,
+        member.pool.map((p) => p.itemName),
+      );
       const pooledIds = [...poolItems.values()];
       await tx
         .delete(schema.tripPoolItems)

@@ -116,6 +116,64 @@ const itemsOfEveryKind: LockerItemInputRaw[] = [
       massG: 75,
     },
   },
+  // The 12 V path: a 12 V panel, a controller, a lead-acid battery with its rate table, a fused DC lead.
+  {
+    name: '12 V sheet',
+    countOwned: 1,
+    spec: {
+      kind: 'panel',
+      panelType: '12v',
+      ratedW: 30,
+      maxPowerVolts: 17.6,
+      maxPowerAmps: 1.7,
+      openCircuitVolts: 21.8,
+      shortCircuitAmps: 1.85,
+      tempCoeffVocPctPerC: -0.28,
+      outputPort: { connector: 'barrel-5.5x2.1', captiveCable: true },
+      massG: 950,
+    },
+  },
+  {
+    name: 'PWM controller',
+    countOwned: 1,
+    spec: {
+      kind: 'controller',
+      controllerType: 'pwm',
+      maxInputVolts: 25,
+      maxChargeA: 5,
+      inputPort: { connector: 'barrel-5.5x2.1', captiveCable: false },
+      outputPort: { connector: 'ring-terminal', captiveCable: false },
+      massG: 70,
+    },
+  },
+  {
+    name: 'Sealed lead-acid 7 Ah',
+    countOwned: 1,
+    spec: {
+      kind: 'battery',
+      chemistry: 'lead-acid',
+      cellsInSeries: 6,
+      capacityAh: 7,
+      chargeCRate: 0.3,
+      ratedHours: 20,
+      peukertExponent: 1.15,
+      port: { connector: 'ring-terminal', captiveCable: false },
+      massG: 2100,
+    },
+  },
+  {
+    name: 'Fused ring to radio lead',
+    countOwned: 1,
+    spec: {
+      kind: 'lead',
+      fromConnector: 'ring-terminal',
+      toConnector: 'radio-dc',
+      lengthM: 1.5,
+      gaugeAwg: 18,
+      fuseA: 5,
+      massG: 55,
+    },
+  },
 ];
 
 describe('locker CSV import and export', () => {

@@ -1,6 +1,8 @@
 // `npm run bench`: every benchmark of the shared engine and solver, printing median and p95 per case.
 import { benchEngine } from './engine.js';
 import { benchOptimise } from './optimise.js';
+import { benchParty } from './party.js';
 
 benchEngine();
 benchOptimise();
+benchParty();

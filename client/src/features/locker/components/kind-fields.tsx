@@ -1,5 +1,5 @@
 import { batteryChemistries, chargeInputs, controllerTypes, deviceKinds } from '@gramwatt/shared';
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { newOutputPort, type ItemFormValues } from '../utils/item-form-values';
@@ -37,9 +37,21 @@ function MassField({ optional = false }: { optional?: boolean }) {
   );
 }
 
+/** Connectors a USB panel's port can have; a 12 V panel starting from one of these is given a DC barrel instead. */
+const usbConnectors: readonly string[] = ['usb-a', 'usb-c', 'micro-usb'];
+
 export function PanelFields() {
-  const { control } = useFormContext<ItemFormValues>();
+  const { control, getValues, setValue } = useFormContext<ItemFormValues>();
   const panelType = useWatch({ control, name: 'spec.panelType' });
+  const shownType = useRef(panelType);
+  useEffect(() => {
+    // Only a change of type made in this form moves the port: a stored panel opens with its own connector.
+    if (shownType.current === panelType) return;
+    shownType.current = panelType;
+    const isUsb = usbConnectors.includes(getValues('spec.outputPort.connector'));
+    if (panelType === '12v' && isUsb) setValue('spec.outputPort.connector', 'barrel-5.5x2.1');
+    if (panelType === 'usb' && !isUsb) setValue('spec.outputPort.connector', 'usb-a');
+  }, [panelType, getValues, setValue]);
   return (
     <>
       <FieldGroup legend="Rating">

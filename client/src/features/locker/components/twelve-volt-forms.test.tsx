@@ -132,6 +132,8 @@ describe('12 V gear in the item form', () => {
 
       await user.selectOptions(panel.getByRole('combobox', { name: 'Panel type' }), '12v');
       expect(panel.queryByRole('textbox', { name: /^USB port voltage/ })).not.toBeInTheDocument();
+      // The USB-A socket a new panel starts with becomes a DC barrel.
+      expect(panel.getByRole('combobox', { name: 'Output port: connector' })).toHaveValue('barrel-5.5x2.1');
       await user.type(panel.getByRole('textbox', { name: /^Name/ }), 'Slope 30 W');
       await user.type(panel.getByRole('textbox', { name: /^Rated power/ }), '30');
       await user.type(panel.getByRole('textbox', { name: /^Mass/ }), '900');
@@ -139,7 +141,6 @@ describe('12 V gear in the item form', () => {
       await user.type(panel.getByRole('textbox', { name: /^Maximum-power current/ }), '1.67');
       const voc = panel.getByRole('textbox', { name: /^Open-circuit voltage/ });
       await user.type(voc, '17');
-      await user.selectOptions(panel.getByRole('combobox', { name: 'Output port: connector' }), 'barrel-5.5x2.1');
       await user.click(panel.getByRole('button', { name: 'Add to locker' }));
 
       expect(voc).toHaveAccessibleDescription(

@@ -4,7 +4,7 @@ import { timestamps } from './_helpers';
 import { accounts } from './accounts';
 
 /**
- * One piece of a member's own gear (a panel, bank, converter, lead or device). `spec` holds the shared
+ * One piece of a member's own gear (a panel, bank, battery, converter, controller, lead or device). `spec` holds the shared
  * `itemSpecSchema` value (validated by the service on every write); `kind` and `mass_g` are copied out of
  * it so the locker can be filtered, sorted and summed without reading the JSON.
  */
@@ -15,7 +15,7 @@ export const lockerItems = pgTable(
     ownerId: uuid('owner_id')
       .notNull()
       .references(() => accounts.id, { onDelete: 'cascade' }),
-    /** panel | bank | converter | lead | device (battery | controller later); equals `spec.kind`. */
+    /** panel | bank | battery | converter | controller | lead | device; equals `spec.kind`. */
     kind: text('kind').notNull(),
     name: text('name').notNull(),
     notes: text('notes').notNull().default(''),

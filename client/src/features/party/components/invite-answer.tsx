@@ -62,7 +62,8 @@ export function InviteAnswer({ token, account, renderSignIn, onSignOut, onAccept
           <strong className="font-semibold text-scree-950">{roleLabel[role].toLowerCase()}</strong>.
         </p>
         <p className="mt-2 text-sm text-scree-700">
-          {roleLabel[role]}: {roleMeaning[role]}
+          What a {role} does: {roleMeaning[role].charAt(0).toLowerCase()}
+          {roleMeaning[role].slice(1)}
         </p>
       </div>
 

@@ -220,7 +220,7 @@ export function PoolPanel({ tripId, myAccountId, myRole }: PoolPanelProps) {
               const ownerName = ownerId === myAccountId ? 'You' : (own[0]?.ownerName ?? 'Someone');
               return (
                 <div key={ownerId} className="flex flex-col gap-2">
-                  <h4 className="text-sm font-semibold text-scree-800">{ownerName} brought</h4>
+                  <h3 className="text-sm font-semibold text-scree-800">{ownerName} brought</h3>
                   <ul
                     aria-label={`Shared by ${ownerName === 'You' ? 'you' : ownerName}`}
                     className="flex flex-col gap-2"

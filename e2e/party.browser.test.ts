@@ -1,0 +1,159 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+// The demo accounts' source module, read directly (as the sign-in test does).
+import { demoAccounts, demoPassword } from '../seed/src/demo-accounts';
+import { appUrl, browserMissing, launchBrowser, newContext, saveScreenshot, signIn } from './browser';
+
+const leader = demoAccounts.find((a) => a.role === 'member')!;
+const admin = demoAccounts.find((a) => a.role === 'admin')!;
+
+/** An invented walker the leader invites; `.example` can never reach a real mailbox (RFC 2606). */
+const stamp = Date.now();
+const invitee = {
+  email: `rowan.fellgate.${stamp}@gramwatt.example`,
+  displayName: 'Rowan Fellgate',
+  password: 'cairn-and-cloud-42',
+};
+const tripName = `Invented Hollowmere crossing ${stamp}`;
+
+const scrollsSideways = (page: Page) =>
+  page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth + 1);
+
+const pathOf = (page: Page) => new URL(page.url()).pathname;
+
+/** The leader's trip, made through the API with the page's session: the trip form has its own browser test. */
+async function createTrip(page: Page): Promise<string> {
+  const response = await page.request.post(appUrl('/api/trips'), {
+    data: { name: tripName, latitudeDeg: 46.21, longitudeDeg: 8.31, startDate: '2027-08-10', nights: 3 },
+  });
+  expect(response.status()).toBe(201);
+  const { trip } = (await response.json()) as { trip: { id: string } };
+  return trip.id;
+}
+
+describe.skipIf(browserMissing)('a party in the built app', () => {
+  let browser: Browser;
+  let tripId = '';
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('the leader invites a partner by e-mail and makes a read-only link', async () => {
+    const page = await (await newContext(browser)).newPage();
+    await signIn(page, leader.email, demoPassword);
+    await expect.poll(() => pathOf(page)).not.toBe('/sign-in');
+    tripId = await createTrip(page);
+
+    await page.goto(appUrl(`/trips/${tripId}`));
+    await page.getByRole('tab', { name: 'Party' }).click();
+    await page.getByRole('heading', { name: `${leader.displayName} (you)` }).waitFor();
+    await page.getByLabel('E-mail address').fill(invitee.email);
+    await page.getByRole('radio', { name: /Partner/ }).check();
+    await page.getByRole('button', { name: 'Send invite' }).click();
+    await page.getByText(`${invitee.email} gets a link that works once`).waitFor();
+    await page.getByRole('list', { name: 'Waiting for an answer' }).getByText(invitee.email).first().waitFor();
+
+    // The leader shares one piece of power gear with the party.
+    await page.getByRole('button', { name: 'Share with the party' }).click();
+    await page.getByText(/shared with the party\./).waitFor();
+    await page.getByRole('list', { name: 'Shared by you' }).waitFor();
+
+    await page.getByRole('button', { name: 'Make a link' }).click();
+    const link = page.getByRole('textbox', { name: 'Read-only link' });
+    await link.waitFor();
+    expect(await link.inputValue()).toMatch(/\/share\/[A-Za-z0-9_.-]+$/);
+    await saveScreenshot(page, 'party-leader');
+
+    // The link opens the trip for someone with no account at all.
+    const sharedPath = new URL(await link.inputValue()).pathname;
+    const stranger = await (await newContext(browser, 'phone')).newPage();
+    await stranger.goto(appUrl(sharedPath));
+    await stranger.getByRole('heading', { level: 1, name: tripName }).waitFor();
+    await stranger.getByRole('region', { name: 'Cautions' }).waitFor();
+    expect(await stranger.getByText(leader.displayName).first().isVisible()).toBe(true);
+    expect(await scrollsSideways(stranger)).toBe(false);
+    await saveScreenshot(stranger, 'party-shared-trip-phone');
+  });
+
+  it('the invite arrives in the outbox; the invited walker signs in from the link, joins and sees the trip as partner', async () => {
+    expect(tripId).not.toBe('');
+    const page = await (await newContext(browser, 'phone')).newPage();
+
+    // A new account with the invited address; the outbox shows what was sent to it.
+    await page.goto(appUrl('/sign-up'));
+    await page.getByLabel('Name').fill(invitee.displayName);
+    await page.getByLabel('E-mail').fill(invitee.email);
+    await page.getByLabel('Password').fill(invitee.password);
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => pathOf(page)).toBe('/locker');
+
+    await page.getByRole('button', { name: 'Menu' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
+    const message = page.getByRole('link', { name: new RegExp(tripName) });
+    // The e-mail goes out through the local mail server a moment after the invite.
+    await expect
+      .poll(async () => {
+        if (await message.isVisible()) return true;
+        await page.reload();
+        return message.isVisible();
+      })
+      .toBe(true);
+    await message.click();
+    const openInvite = page.getByRole('link', { name: 'Open the invite' });
+    await openInvite.waitFor();
+    expect(await scrollsSideways(page)).toBe(false);
+    await saveScreenshot(page, 'party-outbox-phone');
+    const invitePath = (await openInvite.getAttribute('href')) ?? '';
+    expect(invitePath).toMatch(/^\/invites\/[A-Za-z0-9_-]{43}$/);
+
+    // Signed out, the link offers sign-in on the spot and joins straight after.
+    await page.getByRole('button', { name: /^Account:/ }).click();
+    await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    await expect.poll(() => pathOf(page)).toBe('/sign-in');
+    await page.goto(appUrl(invitePath));
+    await page.getByText(`asks you to join ${tripName} as a partner`).waitFor();
+    expect(await scrollsSideways(page)).toBe(false);
+    await saveScreenshot(page, 'party-invite-phone');
+    await page.getByRole('tab', { name: 'I have an account' }).click();
+    await page.getByLabel('E-mail').fill(invitee.email);
+    await page.getByLabel('Password').fill(invitee.password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+
+    await expect.poll(() => pathOf(page)).toBe(`/trips/${tripId}`);
+    await page.getByRole('heading', { name: /you are partner/ }).waitFor();
+    await page.getByRole('tab', { name: 'Party' }).click();
+    await page.getByText(/You are a partner here/).waitFor();
+    await page.getByRole('heading', { name: `${invitee.displayName} (you)` }).waitFor();
+    expect(await page.getByRole('button', { name: 'Send invite' }).count()).toBe(0);
+    await page.getByRole('list', { name: `Shared by ${leader.displayName}` }).waitFor();
+    expect(await scrollsSideways(page)).toBe(false);
+    await saveScreenshot(page, 'party-partner-phone');
+
+    // The link is used up.
+    await page.goto(appUrl(invitePath));
+    await page.getByText('This invite no longer works').waitFor();
+  });
+
+  it('the leader sees the partner joined; an admin sees the e-mail went out, not what it said', async () => {
+    const page = await (await newContext(browser)).newPage();
+    await signIn(page, leader.email, demoPassword);
+    await expect.poll(() => pathOf(page)).not.toBe('/sign-in');
+    await page.goto(appUrl(`/trips/${tripId}`));
+    await page.getByRole('tab', { name: 'Party' }).click();
+    await page.getByRole('heading', { name: invitee.displayName }).waitFor();
+    await page.getByText('Earlier invites (1)').waitFor();
+
+    const adminPage = await (await newContext(browser)).newPage();
+    await signIn(adminPage, admin.email, demoPassword);
+    await expect.poll(() => pathOf(adminPage)).not.toBe('/sign-in');
+    await adminPage.goto(appUrl('/admin/mail'));
+    const row = adminPage.getByRole('row', { name: new RegExp(invitee.email.replace(/\./g, '\\.')) });
+    await row.waitFor();
+    expect(await row.textContent()).toMatch(/Trip invite.*Sent/);
+    await saveScreenshot(adminPage, 'party-admin-mail');
+  });
+});

@@ -1,6 +1,14 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { bankSpec, leadSpec, panelSpec, seedCatalogueEntry } from '@/testing/locker-data';
+import {
+  bankSpec,
+  batterySpec,
+  controllerSpec,
+  leadSpec,
+  panelSpec,
+  seedCatalogueEntry,
+  twelveVoltPanelSpec,
+} from '@/testing/locker-data';
 import { seedAccount } from '@/testing/mocks/db';
 import { lockerDb } from '@/testing/mocks/locker-db';
 import { renderApp } from '@/testing/test-utils';
@@ -55,6 +63,26 @@ describe('Catalogue', () => {
       lengthM: 0.3,
       massG: 15,
     });
+  });
+
+  it('shows the 12 V gear in its power roles: a 12 V panel in Collect, a battery in Store, a controller in Convert', async () => {
+    seedAccount({ role: 'member' }, { signedIn: true });
+    seedCatalogueEntry({ name: 'Generic 30 W 12 V panel', spec: twelveVoltPanelSpec() });
+    seedCatalogueEntry({ name: 'Generic 6 Ah LiFePO4 pack', spec: batterySpec() });
+    seedCatalogueEntry({ name: 'Generic 5 A PWM controller', spec: controllerSpec() });
+    await renderApp('/catalogue');
+
+    const headings = (await screen.findAllByRole('heading', { level: 2 })).map((heading) => heading.textContent);
+    expect(headings).toEqual(['Collect', 'Store', 'Convert']);
+    expect(
+      within(screen.getByRole('region', { name: 'Collect' })).getByText(
+        '30 W 12 V · 18 V 1.67 A at max power · 21.6 V open circuit',
+      ),
+    ).toBeInTheDocument();
+    expect(within(screen.getByRole('region', { name: 'Store' })).getByText('LiFePO4 4S · 6 Ah')).toBeInTheDocument();
+    expect(
+      within(screen.getByRole('region', { name: 'Convert' })).getByText('PWM · up to 25 V in · 5 A charge'),
+    ).toBeInTheDocument();
   });
 
   it('keeps members out of the catalogue admin screen', async () => {

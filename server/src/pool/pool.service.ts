@@ -103,7 +103,8 @@ export class PoolService {
     if (!item) throw new NotFoundException('No such item in your locker');
     if (!isPoolable(item)) {
       throw new BadRequestException({
-        message: 'Devices go on the device list; the pool holds panels, banks, converters and leads',
+        message:
+          'Devices go on the device list; the pool holds power gear (panels, banks, batteries, converters, controllers and leads)',
         errors: [{ path: 'itemId', message: 'Only power gear can be pooled' }],
       });
     }

@@ -156,8 +156,8 @@ export function LockerScreen({ catalogueHref, undoMs = undoWindowMs }: LockerScr
           }
         >
           <p>
-            Put in the panels, banks, converters, leads and devices you own, with their grams and ports. Gramwatt plans
-            every trip from this shelf. The catalogue has generic examples to copy and adjust.
+            Put in the panels, banks, batteries, converters, controllers, leads and devices you own, with their grams
+            and ports. Gramwatt plans every trip from this shelf. The catalogue has generic examples to copy and adjust.
           </p>
         </EmptyState>
       ) : (

@@ -1,7 +1,17 @@
 import { useId } from 'react';
-import { CartesianGrid, Line, LineChart, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  CartesianGrid,
+  Line,
+  LineChart,
+  ReferenceArea,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { DesignSkyId, KitEvaluation } from '../api/types';
-import { dayStartMinutes, elapsedLabel, hoursPerDay, storedRows } from '../utils/chart-series';
+import { dayStartMinutes, elapsedLabel, hoursPerDay, niceTicks, storedRows } from '../utils/chart-series';
 import { formatWh, skyLabels } from '../utils/format';
 import { ChartFigure, FillSwatch, LineSwatch } from './chart-figure';
 import { chartColours, chartInitialSize, chartTick } from './chart-palette';
@@ -34,6 +44,7 @@ export function StoredEnergyChart({ evaluation }: { evaluation: Evaluation }) {
   const days = evaluation.dayStrip.length;
   const ticks = Array.from({ length: days + 1 }, (_, d) => d * hoursPerDay);
   const skies = evaluation.storedSeries.map((s) => s.skyId);
+  const yTicks = niceTicks(Math.max(...rows.flatMap((row) => skies.map((skyId) => row[skyId] ?? 0))));
   return (
     <ChartFigure
       title="Stored energy through the trip"
@@ -78,7 +89,16 @@ export function StoredEnergyChart({ evaluation }: { evaluation: Evaluation }) {
             tick={chartTick}
             tickLine={false}
           />
-          <YAxis tick={chartTick} width={56} tickFormatter={(wh: number) => `${Math.round(wh)} Wh`} />
+          <YAxis
+            tick={chartTick}
+            width={60}
+            domain={[0, yTicks.at(-1) ?? 'auto']}
+            ticks={yTicks}
+            tickFormatter={(wh: number) => `${wh} Wh`}
+          />
+          {ticks.slice(1, -1).map((h) => (
+            <ReferenceLine key={h} x={h} stroke={chartColours.grid} />
+          ))}
           <Tooltip
             labelFormatter={(h) => elapsedLabel(Number(h), startMinutes)}
             formatter={(wh, skyId) => [formatWh(Number(wh)), skyLabels[skyId as DesignSkyId] ?? String(skyId)]}

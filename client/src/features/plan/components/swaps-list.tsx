@@ -1,5 +1,5 @@
 import type { PlanSwap } from '../api/types';
-import { formatGrams, formatPercent } from '../utils/format';
+import { formatGrams } from '../utils/format';
 import { selectionOf } from '../utils/kit-selection';
 import { ChooseKitButton } from './choose-kit-button';
 
@@ -33,9 +33,6 @@ export function SwapsList({ tripId, planId, swaps, canChooseKit }: SwapsListProp
               {swap.extraG === 0 ? 'Same grams' : `${swap.extraG > 0 ? '+' : '−'}${formatGrams(Math.abs(swap.extraG))}`}
               <span className="font-normal text-scree-700"> · {formatGrams(swap.kit.massG)} in all</span>
             </p>
-            {swap.worstMarginShare !== null && (
-              <p className="text-sm text-scree-700">{formatPercent(swap.worstMarginShare)} to spare on the worst day</p>
-            )}
           </div>
           <p className="text-scree-900">{swap.text}</p>
           {canChooseKit && (

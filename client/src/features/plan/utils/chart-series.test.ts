@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildEvaluation } from '@/testing/plan-data';
-import { dayStartMinutes, elapsedLabel, storedRows, sunPeak, sunRows } from './chart-series';
+import { dayStartMinutes, elapsedLabel, niceTicks, storedRows, sunPeak, sunRows } from './chart-series';
 
 describe('storedRows', () => {
   const evaluation = buildEvaluation();
@@ -39,5 +39,14 @@ describe('sun paths', () => {
     expect(rows[0]?.minutes).toBe(30);
     expect(rows.every((r, i) => i === 0 || r.minutes > (rows[i - 1]?.minutes ?? 0))).toBe(true);
     expect(sunPeak(first)?.altitudeDeg).toBeGreaterThan(70);
+  });
+});
+
+describe('niceTicks', () => {
+  it('steps by 1, 2, 2.5 or 5 times a power of ten from 0 past the largest value', () => {
+    expect(niceTicks(204)).toEqual([0, 50, 100, 150, 200, 250]);
+    expect(niceTicks(33)).toEqual([0, 10, 20, 30, 40]);
+    expect(niceTicks(4.2)).toEqual([0, 1, 2, 3, 4, 5]);
+    expect(niceTicks(0)).toEqual([0, 1]);
   });
 });

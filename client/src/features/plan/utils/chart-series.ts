@@ -81,3 +81,12 @@ export const daylightHours = (path: SunPath): number => {
   const stepH = a && b ? (b.minutes - a.minutes) / 60 : 1;
   return rows.filter((r) => r.altitudeDeg > 0).length * stepH;
 };
+
+/** Round steps for an energy axis from 0 to at least `maxWh`: 1, 2, 2.5 or 5 × a power of ten, about five of them. */
+export function niceTicks(maxWh: number): number[] {
+  if (!(maxWh > 0)) return [0, 1];
+  const rough = maxWh / 5;
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const step = ([1, 2, 2.5, 5, 10].find((m) => m * power >= rough) ?? 10) * power;
+  return Array.from({ length: Math.ceil(maxWh / step) + 1 }, (_, i) => Math.round(i * step * 100) / 100);
+}

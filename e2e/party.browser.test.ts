@@ -21,6 +21,9 @@ const scrollsSideways = (page: Page) =>
 
 const pathOf = (page: Page) => new URL(page.url()).pathname;
 
+/** How long a page change or a delivered e-mail may take on a busy machine. */
+const patient = { timeout: 20_000, interval: 250 };
+
 /** The leader's trip, made through the API with the page's session: the trip form has its own browser test. */
 async function createTrip(page: Page): Promise<string> {
   const response = await page.request.post(appUrl('/api/trips'), {
@@ -45,7 +48,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
   it('the leader invites a partner by e-mail and makes a read-only link', async () => {
     const page = await (await newContext(browser)).newPage();
     await signIn(page, leader.email, demoPassword);
-    await expect.poll(() => pathOf(page)).not.toBe('/sign-in');
+    await expect.poll(() => pathOf(page), patient).not.toBe('/sign-in');
     tripId = await createTrip(page);
 
     await page.goto(appUrl(`/trips/${tripId}`));
@@ -89,7 +92,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
     await page.getByLabel('E-mail').fill(invitee.email);
     await page.getByLabel('Password').fill(invitee.password);
     await page.getByRole('button', { name: 'Create account' }).click();
-    await expect.poll(() => pathOf(page)).toBe('/locker');
+    await expect.poll(() => pathOf(page), patient).toBe('/locker');
 
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
@@ -100,20 +103,28 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
         if (await message.isVisible()) return true;
         await page.reload();
         return message.isVisible();
-      })
-      .toBe(true);
+      }, patient)
+      .toBe(true)
+      .catch(async (error: unknown) => {
+        // Say what the outbox held, so a miss can be told from a slow delivery.
+        const outbox = await (await page.request.get(appUrl('/api/outbox'))).text();
+        throw new Error(`${String(error)}; the outbox answered ${outbox}`);
+      });
     await message.click();
     const openInvite = page.getByRole('link', { name: 'Open the invite' });
     await openInvite.waitFor();
     expect(await scrollsSideways(page)).toBe(false);
     await saveScreenshot(page, 'party-outbox-phone');
+    await page.getByRole('tab', { name: 'As formatted' }).click();
+    await page.frameLocator('iframe[sandbox=""]').getByText('Open the invite').waitFor();
+    await saveScreenshot(page, 'party-outbox-formatted-phone');
     const invitePath = (await openInvite.getAttribute('href')) ?? '';
     expect(invitePath).toMatch(/^\/invites\/[A-Za-z0-9_-]{43}$/);
 
     // Signed out, the link offers sign-in on the spot and joins straight after.
     await page.getByRole('button', { name: /^Account:/ }).click();
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
-    await expect.poll(() => pathOf(page)).toBe('/sign-in');
+    await expect.poll(() => pathOf(page), patient).toBe('/sign-in');
     await page.goto(appUrl(invitePath));
     await page.getByText(`asks you to join ${tripName} as a partner`).waitFor();
     expect(await scrollsSideways(page)).toBe(false);
@@ -123,7 +134,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
     await page.getByLabel('Password').fill(invitee.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
 
-    await expect.poll(() => pathOf(page)).toBe(`/trips/${tripId}`);
+    await expect.poll(() => pathOf(page), patient).toBe(`/trips/${tripId}`);
     await page.getByRole('heading', { name: /you are partner/ }).waitFor();
     await page.getByRole('tab', { name: 'Party' }).click();
     await page.getByText(/You are a partner here/).waitFor();
@@ -141,7 +152,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
   it('the leader sees the partner joined; an admin sees the e-mail went out, not what it said', async () => {
     const page = await (await newContext(browser)).newPage();
     await signIn(page, leader.email, demoPassword);
-    await expect.poll(() => pathOf(page)).not.toBe('/sign-in');
+    await expect.poll(() => pathOf(page), patient).not.toBe('/sign-in');
     await page.goto(appUrl(`/trips/${tripId}`));
     await page.getByRole('tab', { name: 'Party' }).click();
     await page.getByRole('heading', { name: invitee.displayName }).waitFor();
@@ -149,7 +160,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
 
     const adminPage = await (await newContext(browser)).newPage();
     await signIn(adminPage, admin.email, demoPassword);
-    await expect.poll(() => pathOf(adminPage)).not.toBe('/sign-in');
+    await expect.poll(() => pathOf(adminPage), patient).not.toBe('/sign-in');
     await adminPage.goto(appUrl('/admin/mail'));
     const row = adminPage.getByRole('row', { name: new RegExp(invitee.email.replace(/\./g, '\\.')) });
     await row.waitFor();

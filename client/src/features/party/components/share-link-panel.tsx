@@ -11,13 +11,15 @@ import { useShareLink } from '../api/get-share-link';
 import { useRevokeShareLink } from '../api/revoke-share-link';
 import { describeShareLink } from '../utils/party-format';
 
-/** Lifetimes a leader picks from, in days; 30 matches the server's default link lifetime. */
+/** Lifetimes a leader picks from, in days (up to the server's longest, a year); 30 matches its default. */
 const lifetimeOptions = [
   { value: '7', label: '7 days' },
   { value: '14', label: '14 days' },
   { value: '30', label: '30 days' },
   { value: '60', label: '60 days' },
   { value: '90', label: '90 days' },
+  { value: '180', label: '180 days' },
+  { value: '365', label: 'a year' },
 ] as const;
 type LifetimeDays = (typeof lifetimeOptions)[number]['value'];
 
@@ -136,7 +138,9 @@ export function ShareLinkPanel({ tripId }: { tripId: string }) {
         </div>
       )}
       {share.isSuccess && share.data.state === 'active' && (
-        <p className="text-sm text-scree-600">A new link stops the one above.</p>
+        <p className="text-sm text-scree-600">
+          A new link stops the one above. Pick a time that lasts until you are home.
+        </p>
       )}
       <Dialog
         open={confirmRevoke}

@@ -1,4 +1,4 @@
-import type { TripMember } from '@gramwatt/shared';
+import type { InviteRole, TripMember } from '@gramwatt/shared';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -46,6 +46,9 @@ function MemberCard({
   const limitError =
     update.isError && update.variables.data.gramLimitG !== undefined ? update.error.message : undefined;
   const name = `${member.displayName}${isMe ? ' (you)' : ''}`;
+  // While a role change is on its way, show the role asked for (the leader's own role never changes here).
+  const shownRole: InviteRole =
+    (busy && update.variables.data.role) || (member.role === 'viewer' ? 'viewer' : 'partner');
 
   const save = (data: Parameters<typeof update.mutate>[0]['data'], done: string) =>
     update.mutate(
@@ -76,13 +79,7 @@ function MemberCard({
               Role<span className="sr-only"> of {member.displayName}</span>
               <Select
                 options={inviteRoleOptions}
-                value={
-                  busy && update.variables.data.role
-                    ? update.variables.data.role
-                    : member.role === 'viewer'
-                      ? 'viewer'
-                      : 'partner'
-                }
+                value={shownRole}
                 disabled={busy}
                 onValueChange={(role) =>
                   save({ role }, `${member.displayName} is now a ${roleLabel[role].toLowerCase()}.`)

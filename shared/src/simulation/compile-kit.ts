@@ -23,6 +23,8 @@ export interface CompiledKit {
   /** Hours from a camp step's start to the end of its camp window (0 outside camp). */
   stepCampLeftH: Float64Array;
   stepFrozen: Uint8Array;
+  /** Trip hours after the end of each step, h: a device's use for the rest of the trip is its hourly use × this. */
+  stepHoursAfter: Float64Array;
   /** Panels (kit lines), each series already × count: [sky][panel]. */
   panelCount: number;
   panelItemIds: string[];
@@ -58,6 +60,16 @@ export interface CompiledKit {
   hullPathEff: Float64Array;
   /** Devices that need a charging path (own battery short of the trip); only they are topped up. */
   deviceTopsUp: Uint8Array;
+  /**
+   * Per store: 1 when two or more of the trip's devices have a charging path from it (a shared store; whether they
+   * need charging does not matter, so the split does not move with demand). A device is topped up from the stores only
+   * it reaches first, to full; from shared stores only as far as it still needs for the rest of the trip.
+   */
+  storeShared: Uint8Array;
+  /** Per device: 1 when it is topped up and reaches a shared store (its battery is then filled only as far as it needs). */
+  deviceSharesStores: Uint8Array;
+  /** Whether any store is shared. */
+  anyShared: boolean;
   freezeBlocksDeviceTopUps: boolean;
   reserveShare: number;
   usedItemIds: Set<string>;
@@ -104,6 +116,9 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     left = stepCamp[i] === 1 ? left + (stepDurationH[i] ?? 0) : 0;
     stepCampLeftH[i] = left;
   }
+  const stepHoursAfter = new Float64Array(stepCount);
+  for (let i = stepCount - 2; i >= 0; i--)
+    stepHoursAfter[i] = (stepHoursAfter[i + 1] ?? 0) + (stepDurationH[i + 1] ?? 0);
 
   const leads: KitLead[] = [];
   const converters: KitConverter[] = [];
@@ -114,7 +129,8 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     if (spec.kind === 'lead') leads.push({ itemId: entry.itemId, spec });
     else if (spec.kind === 'converter') converters.push({ itemId: entry.itemId, spec });
     // 12 V panels, batteries and controllers are not simulated yet: they stay out of every path, hence unused.
-    else if (spec.kind === 'panel' && spec.panelType === 'usb') panels.push({ itemId: entry.itemId, count: entry.count, spec });
+    else if (spec.kind === 'panel' && spec.panelType === 'usb')
+      panels.push({ itemId: entry.itemId, count: entry.count, spec });
     else if (spec.kind === 'bank')
       for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
   }
@@ -216,6 +232,19 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     };
   });
 
+  const deviceTopsUp = Uint8Array.from(deviceUnits, (d) => (d.needsChargingPath ? 1 : 0));
+  const storeShared = new Uint8Array(storeCount);
+  const deviceSharesStores = new Uint8Array(deviceCount);
+  for (let si = 0; si < storeCount; si++) {
+    let reaching = 0;
+    for (let di = 0; di < deviceCount; di++) if ((hullCount[si * deviceCount + di] ?? 0) > 0) reaching++;
+    if (reaching < 2) continue;
+    storeShared[si] = 1;
+    for (let di = 0; di < deviceCount; di++) {
+      if (deviceTopsUp[di] === 1 && (hullCount[si * deviceCount + di] ?? 0) > 0) deviceSharesStores[di] = 1;
+    }
+  }
+
   return {
     stepCount,
     dayCount,
@@ -224,6 +253,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     stepCamp,
     stepCampLeftH,
     stepFrozen,
+    stepHoursAfter,
     panelCount,
     panelItemIds: panels.map((p) => p.itemId),
     panelSeries,
@@ -248,7 +278,10 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     hullGainW: Float64Array.from(hullGain),
     hullDrawW: Float64Array.from(hullDraw),
     hullPathEff: Float64Array.from(hullEff),
-    deviceTopsUp: Uint8Array.from(deviceUnits, (d) => (d.needsChargingPath ? 1 : 0)),
+    deviceTopsUp,
+    storeShared,
+    deviceSharesStores,
+    anyShared: storeShared.some((x) => x === 1),
     freezeBlocksDeviceTopUps: options.freezeBlocksDeviceTopUps ?? false,
     reserveShare,
     usedItemIds,

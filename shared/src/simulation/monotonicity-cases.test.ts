@@ -99,6 +99,80 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(broken).toEqual([]);
   }, 60_000);
 
+  it('a lead that lets one device also reach another device’s bank does not drain that bank (found by a soak)', () => {
+    // No sun. The lamp charges from its own bank, the phone from the phone bank; the added USB-C lead joins the lamp's
+    // captive USB-C plug to the phone bank's captive USB-C cable (two plugs never mate), so the lamp can reach the phone
+    // bank too, while the phone still cannot reach the lamp bank. Topped up to full from every bank it reached in merit
+    // order, the lamp took the phone bank's energy — first in merit order (phone bank 0.9 × 0.8 efficient) or, behind
+    // its own bank (0.7 × 0.8), once that was empty, energy its battery did not need for the rest of the trip — and the
+    // phone, on a bank just big enough without the lead, ran dry.
+    const phoneBankOf = (capacityMah: number, chargeEfficiency: number) =>
+      testBank({
+        capacityMah,
+        chargeEfficiency,
+        outputEfficiency: 0.8,
+        outputPorts: [port('usb-a'), { ...port('usb-c'), captiveCable: true }],
+      });
+    const lampBank = testBank({
+      capacityMah: 2000,
+      chargeEfficiency: 0.8,
+      outputEfficiency: 0.8,
+      outputPorts: [port('usb-c')],
+    });
+    const lead: KitEntry = { itemId: 'lead', count: 1, spec: testLead('usb-c', 'usb-c') };
+    let feasibleBase = 0;
+    const broken: Record<string, number>[] = [];
+    for (const nights of [2, 4, 7]) {
+      const solar = syntheticTripSolar({ nights, peakWm2: 0 });
+      for (const lampShare of [0.25, 0.5, 1]) {
+        for (const phoneShare of [0.3, 0.6]) {
+          for (const phoneEff of [0.7, 0.9]) {
+            const devices: TripDevice[] = [
+              {
+                deviceId: 'lamp',
+                spec: testPhone(lampShare, {
+                  deviceKind: 'headlamp',
+                  ownBatteryWh: 4,
+                  chargePowerW: 2,
+                  chargePort: { connector: 'usb-c', captiveCable: true },
+                }),
+              },
+              {
+                deviceId: 'phone',
+                spec: testPhone(phoneShare, {
+                  ownBatteryWh: 10,
+                  chargePort: { connector: 'usb-a', captiveCable: true },
+                }),
+              },
+            ];
+            const kitWith = (phoneCapMah: number): KitEntry[] => [
+              { itemId: 'phone-bank', count: 1, spec: phoneBankOf(phoneCapMah, phoneEff) },
+              { itemId: 'lamp-bank', count: 1, spec: lampBank },
+            ];
+            const feasible = (kit: KitEntry[]) => isKitFeasible({ solar, kit, devices, reserveShare: 0 });
+            // The smallest phone bank with which the kit without the lead lasts (bisection), then banks just above it.
+            let lo = 100;
+            let hi = 40_000;
+            if (!feasible(kitWith(hi))) continue;
+            for (let i = 0; i < 40; i++) {
+              const mid = (lo + hi) / 2;
+              if (feasible(kitWith(mid))) hi = mid;
+              else lo = mid;
+            }
+            for (const aboveMah of [0.01, 1, 10, 100, 300, 1000]) {
+              const kit = kitWith(hi + aboveMah);
+              if (!feasible(kit)) continue;
+              feasibleBase++;
+              if (!feasible([...kit, lead])) broken.push({ nights, lampShare, phoneShare, phoneEff, aboveMah });
+            }
+          }
+        }
+      }
+    }
+    expect(feasibleBase).toBe(120);
+    expect(broken).toEqual([]);
+  }, 60_000);
+
   it('a better bank for one device does not take the harvest another device’s bank needs', () => {
     // Merit-order harvest failed here: the new efficient bank, reachable only by the headlamp, outranked the phone's bank.
     const { feasibleBase, broken } = sweep(

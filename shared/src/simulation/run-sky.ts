@@ -1,4 +1,4 @@
-import { energyEpsilonWh } from '../constants/electrical.js';
+import { energyEpsilonWh, keepsUpToleranceShare } from '../constants/electrical.js';
 import type { CompiledKit } from './compile-kit.js';
 import type { DryReason } from './types.js';
 
@@ -49,9 +49,13 @@ export interface SkyDry {
 export interface SkyRun {
   dry: SkyDry | null;
   worstMarginShare: number;
-  /** Stored energy (stores + devices) at the start of each day, Wh (scratch-owned when `stopAtDry`, else a copy). */
+  /**
+   * Stored energy (stores + devices) at the start of each day as the verdict counts it, Wh: a device filled from shared
+   * stores only as far as it will still use counts as full when it holds all that and the stores feeding it are full
+   * (scratch-owned when `stopAtDry`, else a copy).
+   */
   storedStartByDayWh: Float64Array;
-  /** Energy above the floors (stores above their reserve + devices) at the start of each day, Wh. */
+  /** Energy above the floors (stores above their reserve + devices, counted as above) at the start of each day, Wh. */
   aboveFloorStartByDayWh: Float64Array;
 }
 
@@ -97,8 +101,9 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 /**
  * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
  * none below 0 °C), then each device uses its demand for the step from its own battery, then — in the camp window —
- * the devices that need charging are topped up from stores (merit order, down to each store's reserve, over the
- * paths' hull, within the device's charge power).
+ * the devices that need charging are topped up: from the stores only they reach first, to full, then from shared
+ * stores only as far as they will still use (merit order, down to each store's reserve, over the paths' hull, within the
+ * device's charge power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(
@@ -146,14 +151,39 @@ export function runSky(
     return { stores, devices, above: above + devices };
   };
 
+  let stepIndex = 0;
+  let dayIndexNow = 0;
+  let dt = 0;
+  let budgetInWh = 0;
+
   for (let i = 0; i < k.stepCount; i++) {
-    const dt = k.stepDurationH[i] ?? 0;
+    dt = k.stepDurationH[i] ?? 0;
+    stepIndex = i;
     const day = k.stepDay[i] ?? 0;
+    dayIndexNow = day;
     const row = day * columnCount;
     if (day !== currentDay) {
       const t = totals();
-      storedStartByDayWh[day] = t.stores + t.devices;
-      aboveFloorStartByDayWh[day] = t.above;
+      // A device topped up from shared stores is filled only as far as it will still use. For the verdict it counts as
+      // full when it holds all it will use for the rest of the trip and every shared store that feeds it is full
+      // (within the keeps-up tolerance): filling it then would only have taken harvest that the full stores spill.
+      let liftWh = 0;
+      if (k.anyShared) {
+        for (let d = 0; d < D; d++) {
+          if (k.deviceSharesStores[d] !== 1) continue;
+          const e = devE[d] ?? 0;
+          if (e < (k.deviceDemandWhPerH[d] ?? 0) * ((k.stepHoursAfter[i] ?? 0) + dt) - eps) continue;
+          let feedersFull = true;
+          for (let s = 0; s < S && feedersFull; s++) {
+            if (k.storeShared[s] !== 1 || (k.hullCount[s * D + d] ?? 0) === 0) continue;
+            const capWh = k.storeCapWh[s] ?? 0;
+            if ((E[s] ?? 0) < capWh * (1 - keepsUpToleranceShare)) feedersFull = false;
+          }
+          if (feedersFull) liftWh += Math.max(0, (k.deviceCapWh[d] ?? 0) - e);
+        }
+      }
+      storedStartByDayWh[day] = t.stores + t.devices + liftWh;
+      aboveFloorStartByDayWh[day] = t.above + liftWh;
       if (ledger) {
         ledger[row + C.storedStartWh] = t.stores + t.devices;
         ledger[row + C.storesStartWh] = t.stores;
@@ -234,60 +264,31 @@ export function runSky(
       }
     }
 
-    // 3. Camp top-ups of the devices that need charging, from stores in merit order, down to each store's reserve.
-    //    The device's own charge power is shared between stores (it may be moved from store to store within a
-    //    step); within a store it may be switched between paths (the hull), going faster than the most efficient
-    //    path only as far as needed to be full by the end of the camp window.
+    // 3. Camp top-ups of the devices that need charging, each store down to its reserve: first from the stores no other
+    //    device reaches (merit order), to full; then from the shared stores (merit order), only as far as the device
+    //    will still use for the rest of the trip — so a device that can also reach another's bank never takes from it
+    //    what it does not need. The device's own charge power is shared between stores (it may be moved from store to
+    //    store within a step); within a store it may be switched between paths (the hull), going faster than the most
+    //    efficient path only as far as needed to reach its target by the end of the camp window.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       for (let d = 0; d < D; d++) {
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
-        let want = cap - (devE[d] ?? 0);
-        if (want <= tiny) continue;
-        const etaDev = k.deviceChargeEff[d] ?? 1;
-        let budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
+        if (cap - (devE[d] ?? 0) <= tiny) continue;
+        budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
+        for (let s = 0; s < S && budgetInWh > tiny; s++) {
+          if (k.storeShared[s] === 1) continue;
+          const want = cap - (devE[d] ?? 0);
+          if (want <= tiny) break;
+          topUp(d, s, want);
+        }
+        if (k.deviceSharesStores[d] !== 1) continue;
+        // From shared stores, only up to what it will still use for the rest of the trip.
+        const useLeftWh = (k.deviceDemandWhPerH[d] ?? 0) * (k.stepHoursAfter[i] ?? 0);
+        let want = Math.min(cap, useLeftWh) - (devE[d] ?? 0);
         for (let s = 0; s < S && want > tiny && budgetInWh > tiny; s++) {
-          const idx = s * D + d;
-          const n = k.hullCount[idx] ?? 0;
-          if (n === 0) continue;
-          const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
-          if (avail <= tiny) continue;
-          const off = k.hullOffset[idx] ?? 0;
-          const span = dt;
-          // Gain rate x (W at the battery) and draw rate c(x) on the hull; cap x by want and the device's remaining
-          // charge power, then by what the store holds.
-          const maxGainW = k.hullGainW[off + n - 1] ?? 0;
-          // Pace: the most efficient path's full rate, or faster only as far as needed to be full when camp ends.
-          const paceW = Math.max(want / (k.stepCampLeftH[i] || dt), k.hullGainW[off] ?? 0);
-          let x = Math.min(want / span, maxGainW, paceW, (budgetInWh * etaDev) / span);
-          if (hullDrawAt(k, off, n, x) * span > avail) x = hullGainAtDraw(k, off, n, avail / span);
-          if (!(x > 0)) continue;
-          // Split the rate between the two hull points around x, each with its own efficiencies.
-          let seg = 0;
-          while (seg < n - 1 && (k.hullGainW[off + seg] ?? 0) < x) seg++;
-          const g1 = k.hullGainW[off + seg] ?? 0;
-          const e1 = k.hullPathEff[off + seg] ?? 1;
-          const g0 = seg > 0 ? (k.hullGainW[off + seg - 1] ?? 0) : 0;
-          const e0 = seg > 0 ? (k.hullPathEff[off + seg - 1] ?? 1) : 1;
-          const f1 = seg > 0 ? (x - g0) / (g1 - g0) : x / g1;
-          const gain1Wh = f1 * g1 * span;
-          const gain0Wh = seg > 0 ? (1 - f1) * g0 * span : 0;
-          const gain = gain0Wh + gain1Wh;
-          const draw0 = gain0Wh / (e0 * etaDev);
-          const draw1 = gain1Wh / (e1 * etaDev);
-          const draw = draw0 + draw1;
-          E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
-          devE[d] = (devE[d] ?? 0) + gain;
-          want -= gain;
-          budgetInWh -= gain / etaDev;
-          if (ledger) {
-            ledger[row + C.converterLossWh] =
-              (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
-            ledger[row + C.deviceChargeLossWh] =
-              (ledger[row + C.deviceChargeLossWh] ?? 0) + draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
-            ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
-          }
-          if (record?.onFlow) record.onFlow('top-up', i, s, d, gain);
+          if (k.storeShared[s] !== 1) continue;
+          want -= topUp(d, s, want);
         }
       }
     }
@@ -309,6 +310,53 @@ export function runSky(
     }
   }
   return finish();
+
+  /**
+   * Tops device d up from store s in step i (up to `want` Wh into its battery, within `budgetInWh` at its input);
+   * returns the Wh it gained. Gain rate x (W at the battery) and draw rate c(x) on the hull; x is capped by want and
+   * the device's remaining charge power, then by what the store holds above its reserve.
+   */
+  function topUp(d: number, s: number, want: number): number {
+    const idx = s * D + d;
+    const n = k.hullCount[idx] ?? 0;
+    if (n === 0) return 0;
+    const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
+    if (avail <= tiny) return 0;
+    const off = k.hullOffset[idx] ?? 0;
+    const etaDev = k.deviceChargeEff[d] ?? 1;
+    const maxGainW = k.hullGainW[off + n - 1] ?? 0;
+    // Pace: the most efficient path's full rate, or faster only as far as needed to reach `want` when camp ends.
+    const paceW = Math.max(want / (k.stepCampLeftH[stepIndex] || dt), k.hullGainW[off] ?? 0);
+    let x = Math.min(want / dt, maxGainW, paceW, (budgetInWh * etaDev) / dt);
+    if (hullDrawAt(k, off, n, x) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt);
+    if (!(x > 0)) return 0;
+    // Split the rate between the two hull points around x, each with its own efficiencies.
+    let seg = 0;
+    while (seg < n - 1 && (k.hullGainW[off + seg] ?? 0) < x) seg++;
+    const g1 = k.hullGainW[off + seg] ?? 0;
+    const e1 = k.hullPathEff[off + seg] ?? 1;
+    const g0 = seg > 0 ? (k.hullGainW[off + seg - 1] ?? 0) : 0;
+    const e0 = seg > 0 ? (k.hullPathEff[off + seg - 1] ?? 1) : 1;
+    const f1 = seg > 0 ? (x - g0) / (g1 - g0) : x / g1;
+    const gain1Wh = f1 * g1 * dt;
+    const gain0Wh = seg > 0 ? (1 - f1) * g0 * dt : 0;
+    const gain = gain0Wh + gain1Wh;
+    const draw0 = gain0Wh / (e0 * etaDev);
+    const draw1 = gain1Wh / (e1 * etaDev);
+    const draw = draw0 + draw1;
+    E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
+    devE[d] = (devE[d] ?? 0) + gain;
+    budgetInWh -= gain / etaDev;
+    if (ledger) {
+      const row = dayIndexNow * columnCount;
+      ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
+      ledger[row + C.deviceChargeLossWh] =
+        (ledger[row + C.deviceChargeLossWh] ?? 0) + draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
+      ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
+    }
+    if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);
+    return gain;
+  }
 
   function finish(): SkyRun {
     return {

@@ -235,3 +235,39 @@ describe('unused items', () => {
     expect(result.unusedItemIds.sort()).toEqual(['lonely', 'spare-lead']);
   });
 });
+
+describe('two devices sharing a bank (hand calculation)', () => {
+  // Two phones (15 Wh, 0.5 × 15 = 7.5 Wh/day = 0.3125 Wh/h, 85 % charge efficiency) both reach one bank (31.45 Wh
+  // usable, see above) through a USB-A → USB-C lead, so the bank is shared and each phone is filled from it only as far
+  // as it will still use. 2 nights: days of 24, 24 and 8 h, camp 16–08. At the end of day 0's camp a phone holds the
+  // 32 h it will still use, 32 × 0.3125 = 10 Wh (not 15), and is never topped up again; each took 10 − (15 − 7.5) =
+  // 2.5 Wh, so the bank gives 2 × 2.5 / 0.85 = 5.88235 Wh and ends the trip at 31.45 − 5.88235 = 25.56765 Wh.
+  const devices: TripDevice[] = [
+    { deviceId: 'phone-a', spec: testPhone(0.5) },
+    { deviceId: 'phone-b', spec: testPhone(0.5) },
+  ];
+  it('each phone holds what it will still use; the bank gives only that', () => {
+    const solar = syntheticTripSolar({ nights: 2, peakWm2: 0 });
+    const result = simulateKit({ solar, kit: [bankLine(), phoneLead], devices, reserveShare: 0.1 });
+    const ledger = result.skies[0]?.ledger ?? [];
+    expect(ledger[1]?.devicesStartWh).toBeCloseTo(20, 9);
+    expect(ledger[2]?.storesEndWh).toBeCloseTo(25.56765, 4);
+    expect(ledger[1]?.toppedUpWh).toBeCloseTo(0, 9);
+    // No sun: nothing refills the bank, so it lasts the trip (phones that hold all they need are not "keeping up").
+    expect(result.verdict.status).toBe('lasts-trip');
+  });
+  it('keeps up when a panel keeps the shared bank full, though the phones end the trip part-full', () => {
+    const solar = syntheticTripSolar({ nights: 5, cloudyShare: 0.5 });
+    const kit: KitEntry[] = [
+      bankLine(),
+      phoneLead,
+      { itemId: 'panel', count: 2, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) },
+    ];
+    const result = simulateKit({ solar, kit, devices, reserveShare: 0.1 });
+    const last = result.skies[0]?.ledger.at(-1);
+    // On the last day each phone holds only that day's 8 h of use, 2.5 Wh.
+    expect(last?.devicesStartWh).toBeCloseTo(5, 6);
+    expect(last?.storesStartWh).toBeCloseTo(31.45, 6);
+    expect(result.verdict.status).toBe('keeps-up');
+  });
+});

@@ -10,6 +10,7 @@ import {
   type PlanRecord,
   type PlanResult,
   type PlanSummary,
+  type PoolListResponse,
   type Trip,
 } from '@gramwatt/shared';
 import { http, HttpResponse } from 'msw';
@@ -84,6 +85,8 @@ export interface FakePlanApi {
   plans: PlanRecord[];
   chosen: ChosenKit | null;
   lockerItems: LockerItem[];
+  /** The party's pool; by default the leader has pooled nothing, so the leader's whole locker counts. */
+  pool: PoolListResponse;
   /** What the next solve answers: a result to store, or a response (503, 422, …). */
   solve: () => PlanResult | Response | Promise<PlanResult | Response>;
   /** What a check answers. */
@@ -105,6 +108,7 @@ export const installPlanApi = (overrides: Partial<Omit<FakePlanApi, 'requests'>>
     plans: [],
     chosen: null,
     lockerItems: fixtureLockerItems(),
+    pool: { items: [], leaderWholeLocker: true },
     solve: () => buildPlanResult(),
     check: (kit) => buildCheckResult(linesFor(kit)),
     ...overrides,
@@ -159,6 +163,9 @@ export const installPlanApi = (overrides: Partial<Omit<FakePlanApi, 'requests'>>
       });
       return HttpResponse.json({ kit: fake.chosen });
     }),
+    http.get<{ tripId: string }>('*/api/trips/:tripId/pool', ({ params }) =>
+      tripOf(params.tripId) ? HttpResponse.json(fake.pool) : apiError(404, 'No such trip'),
+    ),
     http.get('*/api/locker/items', () => HttpResponse.json({ items: fake.lockerItems, totalMassG: 0 })),
   );
   return fake;

@@ -10,7 +10,7 @@ export const getTripQueryOptions = (tripId: string) =>
     queryFn: async ({ signal }) => (await api.get<{ trip: Trip }>(tripPath(tripId), signal)).trip,
   });
 
-/** The trip's name and dates, who carries the kit (the leader, until the party carries gear) and its devices. */
+/** The trip's name and dates, its members (who carry the kit) and its devices (each with its carrier). */
 export const useTripParty = (tripId: string) =>
   useQuery({
     ...getTripQueryOptions(tripId),
@@ -20,7 +20,7 @@ export const useTripParty = (tripId: string) =>
       endDate: trip.endDate,
       days: trip.nights + 1,
       timeZone: trip.timeZone,
-      leader: trip.members.find((member) => member.role === 'leader') ?? null,
+      members: trip.members,
       devices: trip.devices,
     }),
   });

@@ -1,5 +1,5 @@
-import type { LockerItem } from '@gramwatt/shared';
 import { useId } from 'react';
+import type { PickableGear } from '../api/get-trip-gear';
 import { formatGrams } from '../utils/format';
 
 /** The power roles of gear, in the order energy flows; devices are carried anyway and are not picked. */
@@ -11,7 +11,7 @@ const roles: ReadonlyArray<{ label: string; kinds: readonly string[] }> = [
 ];
 
 export interface KitPickerProps {
-  gear: readonly LockerItem[];
+  gear: readonly PickableGear[];
   counts: Readonly<Record<string, number>>;
   onCountChange: (itemId: string, count: number) => void;
 }
@@ -21,12 +21,12 @@ function Stepper({
   count,
   onCountChange,
 }: {
-  item: LockerItem;
+  item: PickableGear;
   count: number;
   onCountChange: (itemId: string, count: number) => void;
 }) {
   const inputId = useId();
-  const set = (next: number) => onCountChange(item.id, Math.max(0, Math.min(item.countOwned, Math.round(next))));
+  const set = (next: number) => onCountChange(item.itemId, Math.max(0, Math.min(item.maxCount, Math.round(next))));
   const stepClasses =
     'flex size-11 items-center justify-center rounded-lg border-2 border-scree-300 bg-white text-xl font-semibold text-scree-900 hover:border-scree-500 disabled:cursor-not-allowed disabled:opacity-40';
   return (
@@ -36,7 +36,8 @@ function Stepper({
           {item.name}
         </label>
         <p className="text-sm text-scree-600">
-          {formatGrams(item.massG)} each · {item.countOwned} owned
+          {formatGrams(item.massG)} each · up to {item.maxCount}
+          {item.ownerName && ` · ${item.ownerName}’s`}
         </p>
       </div>
       <div className="flex shrink-0 items-center gap-1.5">
@@ -54,20 +55,20 @@ function Stepper({
           type="number"
           inputMode="numeric"
           min={0}
-          max={item.countOwned}
+          max={item.maxCount}
           value={count}
           onChange={(e) => set(Number(e.target.value) || 0)}
           aria-describedby={`${inputId}-owned`}
           className="h-11 w-12 rounded-lg border-2 border-scree-300 bg-white text-center text-base tabular-nums"
         />
         <span id={`${inputId}-owned`} className="sr-only">
-          how many to take, up to {item.countOwned}
+          how many to take, up to {item.maxCount}
         </span>
         <button
           type="button"
           className={stepClasses}
           aria-label={`One more ${item.name}`}
-          disabled={count >= item.countOwned}
+          disabled={count >= item.maxCount}
           onClick={() => set(count + 1)}
         >
           +
@@ -77,7 +78,7 @@ function Stepper({
   );
 }
 
-/** The locker's power gear by role, each with a stepper bounded by the units owned. */
+/** The trip's power gear by role, each with a stepper bounded by the units that may go. */
 export function KitPicker({ gear, counts, onCountChange }: KitPickerProps) {
   const groups = roles
     .map((role) => ({ ...role, items: gear.filter((item) => role.kinds.includes(item.kind)) }))
@@ -89,7 +90,7 @@ export function KitPicker({ gear, counts, onCountChange }: KitPickerProps) {
           <legend className="text-sm font-semibold tracking-wide text-scree-700 uppercase">{group.label}</legend>
           <ul className="divide-y divide-firn-200">
             {group.items.map((item) => (
-              <Stepper key={item.id} item={item} count={counts[item.id] ?? 0} onCountChange={onCountChange} />
+              <Stepper key={item.itemId} item={item} count={counts[item.itemId] ?? 0} onCountChange={onCountChange} />
             ))}
           </ul>
         </fieldset>

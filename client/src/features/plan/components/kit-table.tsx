@@ -3,6 +3,34 @@ import type { PlanKit } from '../api/types';
 import { formatGrams, kindLabel } from '../utils/format';
 import { GramMeter } from './gram-meter';
 
+type Carrier = NonNullable<PlanKit['carriers']>[number];
+
+const carrierGrams = (c: Carrier): string =>
+  c.gramLimitG === null
+    ? formatGrams(c.massG)
+    : c.overG > 0
+      ? `${formatGrams(c.massG)}, ${formatGrams(c.overG)} over their ${formatGrams(c.gramLimitG)} limit`
+      : `${formatGrams(c.massG)} of their ${formatGrams(c.gramLimitG)} limit`;
+
+/** A party's kit: who carries which lines, and their grams against their own limits. */
+function CarriersSummary({ carriers }: { carriers: readonly Carrier[] }) {
+  return (
+    <div className="flex flex-col gap-1.5">
+      <h3 className="text-sm font-semibold text-scree-900">Who carries what</h3>
+      <ul className="flex flex-col gap-1 text-sm text-scree-800">
+        {carriers.map((c) => (
+          <li key={c.memberId}>
+            <span className="font-medium text-scree-950">{c.name}</span>: {carrierGrams(c)}
+            {c.lines.length > 0
+              ? ` — ${c.lines.map((l) => (l.count > 1 ? `${l.count} × ${l.name}` : l.name)).join(', ')}`
+              : ' — nothing'}
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
 export interface KitTableProps {
   kit: PlanKit;
   caption: string;
@@ -66,6 +94,7 @@ export function KitTable({ kit, caption, unusedItemIds = [], actions }: KitTable
         </table>
       </div>
       <GramMeter kit={kit} />
+      {kit.carriers && kit.carriers.length > 0 && <CarriersSummary carriers={kit.carriers} />}
       {actions}
     </div>
   );

@@ -52,7 +52,7 @@ export function LedgerTable({ ledgers, bindingSkyId }: Pick<KitEvaluation, 'ledg
         tabIndex={0}
         className="overflow-x-auto rounded-lg border-2 border-firn-200 bg-white"
       >
-        <table className="w-full min-w-[44rem] text-right text-sm tabular-nums">
+        <table className="w-full text-right text-sm whitespace-nowrap tabular-nums">
           <caption className="sr-only">{caption}, in Wh and hours</caption>
           <thead className="bg-firn-100 text-scree-700">
             <tr>

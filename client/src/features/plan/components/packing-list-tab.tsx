@@ -39,7 +39,7 @@ export function PackingListTab({ tripId }: PlanTabProps) {
           Print
         </Button>
       </div>
-      <PackingList chosen={chosen.data} carrier={party.data.leader} devices={party.data.devices} />
+      <PackingList chosen={chosen.data} members={party.data.members} devices={party.data.devices} />
     </article>
   );
 }

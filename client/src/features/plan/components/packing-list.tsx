@@ -1,8 +1,8 @@
 import type { Trip } from '@gramwatt/shared';
 import { useId, type ReactNode } from 'react';
 import type { ChosenKit } from '../api/types';
-import { dayLabel, formatGrams, formatWh } from '../utils/format';
-import { hopsOf, scheduleRows, sparesAmongLeads } from '../utils/packing';
+import { dayLabel, formatDate, formatGrams, formatWh } from '../utils/format';
+import { hopsOf, packsByCarrier, scheduleRows, sparesAmongLeads } from '../utils/packing';
 import { CautionsList } from './cautions-list';
 import { GramMeter } from './gram-meter';
 import { VerdictSentence } from './verdict-sentence';
@@ -32,88 +32,105 @@ function ListSection({ title, children }: { title: string; children: ReactNode }
 
 export interface PackingListProps {
   chosen: ChosenKit;
-  /** Who carries the kit (the trip's leader until the party carries gear), or null if unknown. */
-  carrier: Trip['members'][number] | null;
+  /** The trip's members: who carries the gear (the leader, or a party plan's carriers) and the devices. */
+  members: Trip['members'];
   devices: Trip['devices'];
 }
 
 /** What to pack from the chosen kit, by carrier; the leads of every hop; the charging schedule; the cautions. */
-export function PackingList({ chosen, carrier, devices }: PackingListProps) {
+export function PackingList({ chosen, members, devices }: PackingListProps) {
   const { kit, evaluation } = chosen;
   const hops = hopsOf(evaluation, kit.lines);
   const spares = sparesAmongLeads(evaluation, kit.lines);
   const rows = scheduleRows(evaluation, kit.lines);
-  const deviceGrams = devices.reduce((sum, d) => sum + d.massG, 0);
+  const packs = packsByCarrier(kit, members, devices);
 
   return (
     <div className="flex flex-col gap-6">
       <div className="flex flex-col gap-1">
         <VerdictSentence verdict={evaluation.verdict} size="md" />
         <p className="text-sm text-scree-700">
-          From {sourceWords[chosen.source]}, chosen {new Date(chosen.updatedAt).toLocaleDateString('en-GB')}.
+          From {sourceWords[chosen.source]}, chosen {formatDate(chosen.updatedAt.slice(0, 10))}.
         </p>
       </div>
 
-      <ListSection title={`Carried by ${carrier ? `${carrier.displayName} (leader)` : 'the leader'}`}>
-        <div role="region" aria-label="Power gear to pack (scrolls sideways)" tabIndex={0} className="overflow-x-auto">
-          <table className="w-full text-left text-sm sm:text-base">
-            <caption className="sr-only">Power gear to pack</caption>
-            <thead className="border-b-2 border-scree-200 text-sm text-scree-600">
-              <tr>
-                <th scope="col" className="py-1.5 pr-3 font-medium">
-                  Power gear
-                </th>
-                <th scope="col" className="py-1.5 pr-3 text-right font-medium">
-                  Count
-                </th>
-                <th scope="col" className="py-1.5 text-right font-medium">
-                  Grams
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {kit.lines.map((line) => (
-                <tr key={line.itemId} className="border-b border-firn-200">
-                  <th scope="row" className="py-1.5 pr-3 font-medium text-scree-950">
-                    <span className="flex items-start gap-2">
-                      <Tick />
-                      {line.name}
+      {packs.map((pack) => (
+        <ListSection
+          key={pack.accountId ?? pack.name}
+          title={`Carried by ${pack.name}${pack.role ? ` (${pack.role})` : ''}`}
+        >
+          {pack.lines.length > 0 && pack.kit && (
+            <>
+              <div
+                role="region"
+                aria-label={`Power gear ${pack.name} packs (scrolls sideways)`}
+                tabIndex={0}
+                className="overflow-x-auto"
+              >
+                <table className="w-full text-left text-sm sm:text-base">
+                  <caption className="sr-only">Power gear {pack.name} packs</caption>
+                  <thead className="border-b-2 border-scree-200 text-sm text-scree-600">
+                    <tr>
+                      <th scope="col" className="py-1.5 pr-3 font-medium">
+                        Power gear
+                      </th>
+                      <th scope="col" className="py-1.5 pr-3 text-right font-medium">
+                        Count
+                      </th>
+                      <th scope="col" className="py-1.5 text-right font-medium">
+                        Grams
+                      </th>
+                    </tr>
+                  </thead>
+                  <tbody>
+                    {pack.lines.map((line) => (
+                      <tr key={line.itemId} className="border-b border-firn-200">
+                        <th scope="row" className="py-1.5 pr-3 font-medium text-scree-950">
+                          <span className="flex items-start gap-2">
+                            <Tick />
+                            {line.name}
+                          </span>
+                        </th>
+                        <td className="py-1.5 pr-3 text-right tabular-nums">× {line.count}</td>
+                        <td className="py-1.5 text-right whitespace-nowrap tabular-nums">{formatGrams(line.massG)}</td>
+                      </tr>
+                    ))}
+                  </tbody>
+                  <tfoot>
+                    <tr className="font-semibold">
+                      <th scope="row" colSpan={2} className="py-1.5 pr-3">
+                        Power gear in all
+                      </th>
+                      <td className="py-1.5 text-right whitespace-nowrap tabular-nums">
+                        {formatGrams(pack.kit.massG)}
+                      </td>
+                    </tr>
+                  </tfoot>
+                </table>
+              </div>
+              <GramMeter kit={pack.kit} />
+            </>
+          )}
+          {pack.devices.length > 0 && (
+            <div className="mt-2">
+              <p className="text-sm font-medium text-scree-800">
+                Devices ({formatGrams(pack.devices.reduce((sum, d) => sum + d.massG, 0))}, carried anyway and not in the
+                gear&rsquo;s grams)
+              </p>
+              <ul className="mt-1 flex flex-col gap-1">
+                {pack.devices.map((device) => (
+                  <li key={device.id} className="flex items-start gap-2 text-scree-900">
+                    <Tick />
+                    <span>
+                      {device.name} <span className="text-sm text-scree-600">· {formatGrams(device.massG)}</span>
                     </span>
-                  </th>
-                  <td className="py-1.5 pr-3 text-right tabular-nums">× {line.count}</td>
-                  <td className="py-1.5 text-right whitespace-nowrap tabular-nums">{formatGrams(line.massG)}</td>
-                </tr>
-              ))}
-            </tbody>
-            <tfoot>
-              <tr className="font-semibold">
-                <th scope="row" colSpan={2} className="py-1.5 pr-3">
-                  Power gear in all
-                </th>
-                <td className="py-1.5 text-right whitespace-nowrap tabular-nums">{formatGrams(kit.massG)}</td>
-              </tr>
-            </tfoot>
-          </table>
-        </div>
-        <GramMeter kit={kit} />
-        {devices.length > 0 && (
-          <div className="mt-2">
-            <p className="text-sm font-medium text-scree-800">
-              Devices ({formatGrams(deviceGrams)}, carried anyway and not in the gear&rsquo;s grams)
-            </p>
-            <ul className="mt-1 flex flex-col gap-1">
-              {devices.map((device) => (
-                <li key={device.id} className="flex items-start gap-2 text-scree-900">
-                  <Tick />
-                  <span>
-                    {device.name} <span className="text-sm text-scree-600">· {formatGrams(device.massG)}</span>
-                  </span>
-                </li>
-              ))}
-            </ul>
-          </div>
-        )}
-      </ListSection>
+                  </li>
+                ))}
+              </ul>
+            </div>
+          )}
+        </ListSection>
+      ))}
 
       <ListSection title="Leads for each hop">
         {hops.length === 0 ? (
@@ -179,7 +196,11 @@ export function PackingList({ chosen, carrier, devices }: PackingListProps) {
                     <td className="px-3 py-1.5 whitespace-nowrap">{dayLabel(row.dayIndex)}</td>
                     <td className="px-3 py-1.5 whitespace-nowrap tabular-nums">
                       {row.start}–{row.end.time}
-                      {row.end.daysLater > 0 && <span className="text-scree-600"> next day</span>}
+                      {(row.startsNextMorning || row.end.daysLater > 0) && (
+                        <span className="block text-xs text-scree-600">
+                          {row.startsNextMorning ? 'the next morning' : 'ends the next morning'}
+                        </span>
+                      )}
                     </td>
                     <td className="px-3 py-1.5">
                       <span className="text-scree-600">{row.kind === 'harvest' ? 'Sun: ' : 'Top-up: '}</span>

@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
-import { installPlanApi, linesFor } from '@/testing/mocks/plan-handlers';
+import { fixtureLockerItems, installPlanApi, linesFor } from '@/testing/mocks/plan-handlers';
 import { buildCheckResult, buildChosenKit, buildPlanTrip, fixtureGear, planTripId } from '@/testing/plan-data';
 import { renderWithProviders } from '@/testing/test-utils';
 import { TryKitTab } from './try-kit-tab';
@@ -98,6 +98,38 @@ describe('TryKitTab', () => {
     await user.click(screen.getByRole('button', { name: `One more ${fixtureGear.panel.name}` }));
     expect(await screen.findByText(/The planner is busy, try again in/)).toHaveTextContent(/in [67] s\./);
     expect(screen.getByRole('button', { name: 'Check again' })).toBeDisabled();
+  });
+
+  it('lets a partner pick from the shared gear, naming whose it is, and says the leader’s locker is the leader’s', async () => {
+    const panel = fixtureLockerItems().find((item) => item.spec.kind === 'panel');
+    if (panel?.spec.kind !== 'panel') throw new Error('the fixture locker has a panel');
+    installPlanApi({
+      trip: buildPlanTrip('partner'),
+      pool: {
+        leaderWholeLocker: true,
+        items: [
+          {
+            id: '00000000-0000-4000-a000-000000000050',
+            itemId: panel.id,
+            name: panel.name,
+            kind: 'panel',
+            massG: panel.massG,
+            count: 1,
+            countOwned: 1,
+            ownerAccountId: '00000000-0000-4000-a000-000000000051',
+            ownerName: 'Test Partner',
+            spec: panel.spec,
+            createdAt: '2027-02-01T08:00:00.000Z',
+            updatedAt: '2027-02-01T08:00:00.000Z',
+          },
+        ],
+      },
+    });
+    renderTryKit({ canChooseKit: false });
+    expect(await screen.findByText(/which only the leader can pick from/)).toBeInTheDocument();
+    expect(screen.getAllByRole('spinbutton')).toHaveLength(1);
+    expect(screen.getByText(/Test Partner’s/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Use this kit' })).toBeNull();
   });
 
   it('leaves a viewer without steppers', async () => {

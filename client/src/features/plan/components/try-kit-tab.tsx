@@ -8,7 +8,7 @@ import { useCheckKit } from '../api/check-kit';
 import { useChosenKit } from '../api/get-chosen-kit';
 import { usePlan } from '../api/get-plan';
 import { usePlans } from '../api/get-plans';
-import { usePowerGear } from '../api/get-power-gear';
+import { useTripGear } from '../api/get-trip-gear';
 import type { CheckResult, KitSelection } from '../api/types';
 import { useDebouncedValue } from '../hooks/use-debounced-value';
 import type { PlanTabProps } from '../types';
@@ -90,7 +90,7 @@ function CheckAnswer({
  * the ledger and the changes that shave grams. "Use this kit" makes it the trip's chosen kit.
  */
 export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
-  const gear = usePowerGear();
+  const gear = useTripGear(tripId, canChooseKit);
   const start = useStartingKit(tripId);
   const [counts, setCounts] = useState<Counts | null>(null);
   useEffect(() => {
@@ -100,7 +100,7 @@ export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const selection = useMemo(() => selectionFrom(counts ?? {}), [counts]);
   const settled = useDebouncedValue(selection, checkDebounceMs);
   const check = useCheckKit(tripId, settled);
-  const gearById = useMemo(() => new Map((gear.data ?? []).map((item) => [item.id, item])), [gear.data]);
+  const gearById = useMemo(() => new Map((gear.data?.gear ?? []).map((item) => [item.itemId, item])), [gear.data]);
 
   if (!canSolve)
     return (
@@ -108,12 +108,14 @@ export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
         As a viewer you see the plan and the packing list; the leader and partners try kits from their lockers.
       </EmptyState>
     );
-  if (gear.isPending || counts === null) return <TabLoading label="Loading your gear" />;
-  if (gear.isError) return <TabError title="Your locker could not be loaded" error={gear.error} />;
-  if (gear.data.length === 0)
+  if (gear.error) return <TabError title="The trip's gear could not be loaded" error={gear.error} />;
+  if (!gear.data || counts === null) return <TabLoading label="Loading the trip's gear" />;
+  if (gear.data.gear.length === 0)
     return (
-      <EmptyState title="No power gear in your locker">
-        Add panels, banks, converters and leads to your locker, then pick a kit from them here.
+      <EmptyState title="No power gear for this trip yet">
+        {gear.data.leaderLockerHidden
+          ? 'The plan draws on the leader’s locker, which only the leader can pick from. Share gear on the Party tab to try kits here.'
+          : 'Add panels, banks, converters and leads to the locker or share them on the Party tab, then pick a kit from them here.'}
       </EmptyState>
     );
 
@@ -122,7 +124,7 @@ export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
     setCounts((c) => {
       const next = { ...c, [change.itemId]: Math.max(0, (c?.[change.itemId] ?? 0) - 1) };
       if (change.kind === 'replace') {
-        const owned = gearById.get(change.withItemId)?.countOwned ?? 1;
+        const owned = gearById.get(change.withItemId)?.maxCount ?? 1;
         next[change.withItemId] = Math.min(owned, (c?.[change.withItemId] ?? 0) + 1);
       }
       return next;
@@ -135,12 +137,12 @@ export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
       <PlanSection
         title="Pick the kit"
         intro={
-          canChooseKit
-            ? 'From the power gear in your locker, up to the units you own.'
-            : 'From your own locker: the plan itself weighs the leader’s gear.'
+          gear.data.leaderLockerHidden
+            ? 'From the gear shared for this trip. The plan also weighs the leader’s locker, which only the leader can pick from.'
+            : 'From the gear this trip’s plan weighs, up to the units that may go.'
         }
       >
-        <KitPicker gear={gear.data} counts={counts} onCountChange={setCount} />
+        <KitPicker gear={gear.data.gear} counts={counts} onCountChange={setCount} />
         <div className="flex flex-wrap gap-2">
           <Button variant="quiet" size="sm" onClick={() => setCounts(countsOf(start.selection))}>
             Start again from the {start.selection.length ? 'plan’s kit' : 'empty kit'}

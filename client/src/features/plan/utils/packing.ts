@@ -1,5 +1,6 @@
-import type { ChargeSessionJson, KitEvaluation, PlanKitLine } from '../api/types';
-import { localEnd, type LocalClock } from './local-time';
+import type { Trip } from '@gramwatt/shared';
+import type { ChargeSessionJson, KitEvaluation, PlanKit, PlanKitLine } from '../api/types';
+import { localEnd, minutesOfDay, type LocalClock } from './local-time';
 
 /** A store or device id in the schedule may carry its unit (`bank-id#2`); the item id is before the `#`. */
 const itemIdOf = (id: string): string => id.split('#')[0] ?? id;
@@ -65,6 +66,8 @@ export interface ScheduleRow {
   dayIndex: number;
   kind: ChargeSessionJson['kind'];
   start: string;
+  /** Whether it starts after midnight, in the small hours of the trip day's night (a trip day runs morning to morning). */
+  startsNextMorning: boolean;
   end: LocalClock;
   from: string;
   to: string;
@@ -74,10 +77,13 @@ export interface ScheduleRow {
 
 /** The charging schedule by day and start, local time, with names for every store and device. */
 export const scheduleRows = (
-  evaluation: Pick<KitEvaluation, 'schedule'>,
+  evaluation: Pick<KitEvaluation, 'schedule' | 'sunPaths'>,
   lines: readonly PlanKitLine[],
 ): ScheduleRow[] => {
   const name = nameIn(lines);
+  // A trip day starts at the walking window's start; the first sun path's first point is that moment.
+  const firstPoint = evaluation.sunPaths[0]?.points[0]?.localTime;
+  const dayStartMin = firstPoint ? minutesOfDay(firstPoint) : 0;
   const counts = new Map(lines.map((line) => [line.itemId, line.count]));
   return [...evaluation.schedule]
     .sort((a, b) => a.dayIndex - b.dayIndex || Date.parse(a.start) - Date.parse(b.start))
@@ -85,10 +91,70 @@ export const scheduleRows = (
       dayIndex: s.dayIndex,
       kind: s.kind,
       start: s.startLocalTime,
+      startsNextMorning: minutesOfDay(s.startLocalTime) < dayStartMin,
       end: localEnd(s.startLocalTime, s.start, s.end),
       from: unitName(s.fromName, s.fromId, counts),
       to: unitName(s.toName, s.toId, counts),
       via: s.converterItemId ? name(s.converterItemId) : null,
       energyWh: s.energyWh,
     }));
+};
+
+type Member = Trip['members'][number];
+type Device = Trip['devices'][number];
+
+/** One person's part of the packing list: the power gear they carry (grams against their own limit) and their devices. */
+export interface CarrierPack {
+  accountId: string | null;
+  name: string;
+  role: Member['role'] | null;
+  lines: PlanKitLine[];
+  kit: Pick<PlanKit, 'massG' | 'gramLimitG' | 'overLimitG'> | null;
+  devices: Device[];
+}
+
+/**
+ * The chosen kit by carrier: a party plan's carriers with their lines and own limits, or else the whole kit with the
+ * leader; every device with the member who carries it. Carriers with nothing to pack are left out; the leader first.
+ */
+export const packsByCarrier = (kit: PlanKit, members: readonly Member[], devices: readonly Device[]): CarrierPack[] => {
+  const leader = members.find((m) => m.role === 'leader');
+  const memberOf = (accountId: string) => members.find((m) => m.accountId === accountId);
+  const packs: CarrierPack[] = kit.carriers?.length
+    ? kit.carriers.map((c) => ({
+        accountId: c.memberId,
+        name: c.name,
+        role: memberOf(c.memberId)?.role ?? null,
+        lines: c.lines,
+        kit: { massG: c.massG, gramLimitG: c.gramLimitG, overLimitG: c.overG > 0 ? c.overG : null },
+        devices: [],
+      }))
+    : [
+        {
+          accountId: leader?.accountId ?? null,
+          name: leader?.displayName ?? 'The leader',
+          role: 'leader',
+          lines: kit.lines,
+          kit,
+          devices: [],
+        },
+      ];
+  for (const device of devices) {
+    let pack = packs.find((p) => p.accountId === device.carrierAccountId);
+    if (!pack) {
+      const member = memberOf(device.carrierAccountId);
+      pack = {
+        accountId: device.carrierAccountId,
+        name: member?.displayName ?? 'Another member',
+        role: member?.role ?? null,
+        lines: [],
+        kit: null,
+        devices: [],
+      };
+      packs.push(pack);
+    }
+    pack.devices.push(device);
+  }
+  const rank = (p: CarrierPack) => (p.role === 'leader' ? 0 : 1);
+  return packs.filter((p) => p.lines.length > 0 || p.devices.length > 0).sort((a, b) => rank(a) - rank(b));
 };

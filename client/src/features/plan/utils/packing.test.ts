@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { buildEvaluation, buildPlanKit, buildPlanTrip, fixtureGear, kitLines, optimumLines } from '@/testing/plan-data';
+import { packsByCarrier, scheduleRows } from './packing';
+
+const trip = buildPlanTrip();
+const leader = trip.members[0]!;
+const partner = {
+  ...leader,
+  accountId: '00000000-0000-4000-a000-000000000099',
+  displayName: 'Test Partner',
+  role: 'partner' as const,
+};
+const [radio, phone] = trip.devices;
+
+describe('packsByCarrier', () => {
+  it('gives a solo trip’s whole kit and every device to the leader', () => {
+    const packs = packsByCarrier(buildPlanKit(optimumLines()), trip.members, trip.devices);
+    expect(packs).toHaveLength(1);
+    expect(packs[0]).toMatchObject({ name: 'Test Leader', role: 'leader', kit: { massG: 893 } });
+    expect(packs[0]?.devices.map((d) => d.name)).toEqual(['Test handheld radio', 'Test phone']);
+  });
+
+  it('follows a party plan’s carriers, their own limits, and each device’s carrier; the leader first', () => {
+    const theirs = kitLines({ smallBank: 1, usbLead: 1 });
+    const kit = {
+      ...buildPlanKit(optimumLines()),
+      carriers: [
+        { memberId: partner.accountId, name: 'Test Partner', lines: theirs, massG: 133, gramLimitG: 100, overG: 33 },
+        {
+          memberId: leader.accountId,
+          name: 'Test Leader',
+          lines: kitLines({ panel: 1 }),
+          massG: 320,
+          gramLimitG: null,
+          overG: 0,
+        },
+      ],
+    };
+    const packs = packsByCarrier(kit, [leader, partner], [radio!, { ...phone!, carrierAccountId: partner.accountId }]);
+    expect(packs.map((p) => [p.name, p.lines.length, p.devices.map((d) => d.name)])).toEqual([
+      ['Test Leader', 1, ['Test handheld radio']],
+      ['Test Partner', 2, ['Test phone']],
+    ]);
+    expect(packs[1]?.kit).toEqual({ massG: 133, gramLimitG: 100, overLimitG: 33 });
+  });
+
+  it('adds a member who carries only devices', () => {
+    const packs = packsByCarrier(
+      buildPlanKit(optimumLines()),
+      [leader, partner],
+      [{ ...phone!, carrierAccountId: partner.accountId }],
+    );
+    expect(packs[1]).toMatchObject({ name: 'Test Partner', role: 'partner', lines: [], kit: null });
+  });
+});
+
+describe('scheduleRows', () => {
+  it('marks what starts in the small hours as the next morning of the trip day', () => {
+    const evaluation = buildEvaluation();
+    const lines = optimumLines();
+    const early = {
+      ...evaluation.schedule[0]!,
+      startLocalTime: '05:30',
+      start: '2027-03-11T03:30:00.000Z',
+      end: '2027-03-11T06:30:00.000Z',
+    };
+    const rows = scheduleRows({ ...evaluation, schedule: [early, evaluation.schedule[1]!] }, lines);
+    expect(rows.map((r) => [r.start, r.startsNextMorning, r.end])).toEqual([
+      ['16:00', false, { time: '08:30', daysLater: 1 }],
+      ['05:30', true, { time: '08:30', daysLater: 0 }],
+    ]);
+    expect(rows[0]?.via).toBe(fixtureGear.boost.name);
+  });
+});

@@ -50,7 +50,9 @@ const signature = (spec: object, omit: readonly string[]): DominanceAttribute =>
  *   starts full) over its best path's efficiency — for the reserve rows, and the MOST (everything it used, over its
  *   worst path, since a battery is never topped up past full) for the room rows;
  * - the first camp step of each day: before it no store gives energy to a device, so a full bank spills the morning;
- * - charging paths: every bank, converter and lead combination `chargePaths` accepts, each lead needed once.
+ * - charging paths: from every bank, converter and lead combination `chargePaths` accepts (each lead needed once), the
+ *   device needs one of the minimal converter-and-lead sets and one bank some path starts from (a relaxation of the
+ *   pairs, far smaller in big lockers).
  * @example planningContext(input).problem.candidates.length // input.gear.length
  */
 export function planningContext(input: PlanningInput, solarOptions: TripSolarOptions = {}): PlanningContext {
@@ -153,14 +155,28 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
   for (const d of input.devices) {
     if (!needsChargingPath(d.spec, tripHours / 24)) continue;
     const alternatives = new Map<string, { itemIds: string[]; efficiency: number }>();
-    const leadSets: KitLead[][] = [[], ...leads.map((l) => [l])];
-    if (d.spec.chargesVia === '12v-dc') for (let a = 0; a < leads.length; a++) for (let b = a + 1; b < leads.length; b++) leadSets.push([leads[a] as KitLead, leads[b] as KitLead]);
+    /** What a path needs besides its bank (converter and leads), by key; and the banks some path starts from. */
+    const tails = new Map<string, string[]>();
+    const banksWithPath = new Set<string>();
+    // Only leads that fit some hop of this device's paths can be part of one: pairs of those for a 12 V device.
+    const hopPorts = banks.flatMap((b) => b.spec.outputPorts.map((p) => p.connector));
+    const fits = (l: KitLead, from: readonly string[], to: readonly string[]): boolean =>
+      (from.includes(l.spec.fromConnector) && to.includes(l.spec.toConnector)) || (from.includes(l.spec.toConnector) && to.includes(l.spec.fromConnector));
+    const usableLeads =
+      d.spec.chargesVia === '12v-dc'
+        ? leads.filter((l) => fits(l, hopPorts, converters.map((c) => c.spec.inputPort.connector)) || fits(l, converters.map((c) => c.spec.outputPort.connector), [d.spec.chargePort.connector]))
+        : leads.filter((l) => fits(l, hopPorts, [d.spec.chargePort.connector]));
+    const leadSets: KitLead[][] = [[], ...usableLeads.map((l) => [l])];
+    if (d.spec.chargesVia === '12v-dc') for (let a = 0; a < usableLeads.length; a++) for (let b = a + 1; b < usableLeads.length; b++) leadSets.push([usableLeads[a] as KitLead, usableLeads[b] as KitLead]);
     const converterSets: KitConverter[][] = d.spec.chargesVia === '12v-dc' ? converters.map((c) => [c]) : [[]];
     for (const bank of banks) {
       for (const cs of converterSets) {
         for (const ls of leadSets) {
           for (const path of chargePaths(bank.spec, d.spec, cs, ls).paths) {
-            const itemIds = [...new Set([bank.itemId, ...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds])].sort();
+            const tail = [...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds])].sort();
+            tails.set(tail.join('|'), tail);
+            banksWithPath.add(bank.itemId);
+            const itemIds = [bank.itemId, ...tail].sort();
             const key = itemIds.join('|');
             const known = alternatives.get(key);
             if (!known || known.efficiency < path.pathEfficiency) alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
@@ -169,11 +185,17 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
       }
     }
     const list = [...alternatives.values()];
-    needs.push({
-      needId: d.deviceId,
-      label: input.deviceNames?.[d.deviceId] ?? d.deviceId,
-      alternatives: list.map((a): PathAlternative => ({ itemIds: a.itemIds, pathId: a.itemIds.join(' + ') })),
-    });
+    const label = input.deviceNames?.[d.deviceId] ?? d.deviceId;
+    // The need is split in two (a relaxation of "some bank with some tail that fits it", which keeps the model small:
+    // banks × tails alternatives grow into the hundreds): some tail, and some bank that starts a path. The judge rejects
+    // a kit whose bank and tail do not fit together. A tail holding another tail is left out (it adds nothing).
+    const minimalTails = [...tails.values()].filter((t) => ![...tails.values()].some((o) => o.length < t.length && o.every((id) => t.includes(id))));
+    if (list.length === 0 || !minimalTails.some((t) => t.length === 0)) {
+      needs.push({ needId: d.deviceId, label, alternatives: minimalTails.map((t): PathAlternative => ({ itemIds: t, pathId: t.join(' + ') })) });
+    }
+    if (list.length > 0 && banksWithPath.size < banks.length) {
+      needs.push({ needId: `${d.deviceId}:store`, label, alternatives: [...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })) });
+    }
     if (list.length === 0) continue;
     const best = Math.max(...list.map((a) => a.efficiency));
     const worst = Math.min(...list.map((a) => a.efficiency));

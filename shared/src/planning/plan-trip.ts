@@ -159,10 +159,24 @@ function missingSentences(context: PlanningContext, answer: Extract<OptimiseAnsw
   for (const p of answer.missingPaths) {
     if (!simulation.devices.some((d) => d.deviceId === p.needId && d.missing.length > 0)) missing.push(`No charging path reaches ${p.label ?? name(p.needId)}.`);
   }
-  for (const s of answer.shortfalls) missing.push(`Even with all this gear packed, the stores run ${s.shortWh.toFixed(1)} Wh short on ${dayLabel(s.dayIndex)} in ${skyName(s.skyId)}.`);
   const v = simulation.verdict;
   const runsDry = v.status === 'runs-dry' ? { dayIndex: v.dayIndex, deviceId: v.deviceId, skyId: v.skyId } : null;
-  if (missing.length === 0 && runsDry) missing.push(`With all this gear packed, ${name(runsDry.deviceId)} runs dry on ${dayLabel(runsDry.dayIndex)} in ${skyName(runsDry.skyId)}.`);
+  // Which device runs dry first, unless a sentence above already says it cannot be charged at all.
+  if (runsDry && !simulation.devices.some((d) => d.deviceId === runsDry.deviceId && d.missing.length > 0))
+    missing.push(`With all this gear packed, ${name(runsDry.deviceId)} runs dry on ${dayLabel(runsDry.dayIndex)} in ${skyName(runsDry.skyId)}.`);
+  // One sentence per shortfall, naming every sky it holds in (with no panel, every sky is short alike).
+  const skyCount = context.solar.skies.length;
+  const bySize = new Map<string, { dayIndex: number; shortWh: number; skyIds: string[] }>();
+  for (const s of answer.shortfalls) {
+    const key = `${s.dayIndex}|${s.shortWh.toFixed(1)}`;
+    const known = bySize.get(key);
+    if (known) known.skyIds.push(s.skyId);
+    else bySize.set(key, { dayIndex: s.dayIndex, shortWh: s.shortWh, skyIds: [s.skyId] });
+  }
+  for (const s of bySize.values()) {
+    const skies = s.skyIds.length === skyCount && skyCount > 1 ? 'every design sky' : listText(s.skyIds.map(skyName));
+    missing.push(`Even with all this gear packed, the stores run ${s.shortWh.toFixed(1)} Wh short on ${dayLabel(s.dayIndex)} in ${skies}.`);
+  }
   return { missing, runsDry };
 }
 

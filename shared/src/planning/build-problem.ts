@@ -158,28 +158,35 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     /** What a path needs besides its bank (converter and leads), by key; and the banks some path starts from. */
     const tails = new Map<string, string[]>();
     const banksWithPath = new Set<string>();
-    // Only leads that fit some hop of this device's paths can be part of one: pairs of those for a 12 V device.
+    // Only leads that fit some hop of this device's paths can be part of one; a 12 V device's paths pair a lead into
+    // the converter with a lead out of it. Banks with the same output ports have the same paths: found once.
     const hopPorts = banks.flatMap((b) => b.spec.outputPorts.map((p) => p.connector));
     const fits = (l: KitLead, from: readonly string[], to: readonly string[]): boolean =>
       (from.includes(l.spec.fromConnector) && to.includes(l.spec.toConnector)) || (from.includes(l.spec.toConnector) && to.includes(l.spec.fromConnector));
-    const usableLeads =
-      d.spec.chargesVia === '12v-dc'
-        ? leads.filter((l) => fits(l, hopPorts, converters.map((c) => c.spec.inputPort.connector)) || fits(l, converters.map((c) => c.spec.outputPort.connector), [d.spec.chargePort.connector]))
-        : leads.filter((l) => fits(l, hopPorts, [d.spec.chargePort.connector]));
-    const leadSets: KitLead[][] = [[], ...usableLeads.map((l) => [l])];
-    if (d.spec.chargesVia === '12v-dc') for (let a = 0; a < usableLeads.length; a++) for (let b = a + 1; b < usableLeads.length; b++) leadSets.push([usableLeads[a] as KitLead, usableLeads[b] as KitLead]);
-    const converterSets: KitConverter[][] = d.spec.chargesVia === '12v-dc' ? converters.map((c) => [c]) : [[]];
+    const twelveVolt = d.spec.chargesVia === '12v-dc';
+    const intoDevice = leads.filter((l) => fits(l, twelveVolt ? converters.map((c) => c.spec.outputPort.connector) : hopPorts, [d.spec.chargePort.connector]));
+    const intoConverter = twelveVolt ? leads.filter((l) => fits(l, hopPorts, converters.map((c) => c.spec.inputPort.connector))) : [];
+    const leadSets: KitLead[][] = [[], ...[...new Set([...intoDevice, ...intoConverter])].map((l) => [l])];
+    for (const a of intoConverter) for (const b of intoDevice) if (a !== b) leadSets.push([a, b]);
+    const converterSets: KitConverter[][] = twelveVolt ? converters.map((c) => [c]) : [[]];
+    const banksByPorts = new Map<string, (PlanningGear & { spec: BankSpec })[]>();
     for (const bank of banks) {
+      const key = JSON.stringify(bank.spec.outputPorts);
+      banksByPorts.set(key, [...(banksByPorts.get(key) ?? []), bank]);
+    }
+    for (const sameBanks of banksByPorts.values()) {
       for (const cs of converterSets) {
         for (const ls of leadSets) {
-          for (const path of chargePaths(bank.spec, d.spec, cs, ls).paths) {
+          for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls).paths) {
             const tail = [...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds])].sort();
             tails.set(tail.join('|'), tail);
-            banksWithPath.add(bank.itemId);
-            const itemIds = [bank.itemId, ...tail].sort();
-            const key = itemIds.join('|');
-            const known = alternatives.get(key);
-            if (!known || known.efficiency < path.pathEfficiency) alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+            for (const bank of sameBanks) {
+              banksWithPath.add(bank.itemId);
+              const itemIds = [bank.itemId, ...tail].sort();
+              const key = itemIds.join('|');
+              const known = alternatives.get(key);
+              if (!known || known.efficiency < path.pathEfficiency) alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+            }
           }
         }
       }

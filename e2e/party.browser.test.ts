@@ -149,14 +149,17 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
     await page.getByText('This invite no longer works').waitFor();
   });
 
-  it('the leader sees the partner joined; an admin sees the e-mail went out, not what it said', async () => {
-    const page = await (await newContext(browser)).newPage();
+  it('the leader sees the partner joined (at phone width); an admin sees the e-mail went out, not what it said', async () => {
+    const page = await (await newContext(browser, 'phone')).newPage();
     await signIn(page, leader.email, demoPassword);
     await expect.poll(() => pathOf(page), patient).not.toBe('/sign-in');
     await page.goto(appUrl(`/trips/${tripId}`));
     await page.getByRole('tab', { name: 'Party' }).click();
     await page.getByRole('heading', { name: invitee.displayName }).waitFor();
     await page.getByText('Earlier invites (1)').waitFor();
+    await page.getByRole('combobox', { name: `Role of ${invitee.displayName}` }).waitFor();
+    expect(await scrollsSideways(page)).toBe(false);
+    await saveScreenshot(page, 'party-leader-phone');
 
     const adminPage = await (await newContext(browser)).newPage();
     await signIn(adminPage, admin.email, demoPassword);

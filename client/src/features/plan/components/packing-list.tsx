@@ -67,8 +67,13 @@ export function PackingList({ chosen, members, devices }: PackingListProps) {
                 tabIndex={0}
                 className="overflow-x-auto"
               >
-                <table className="w-full text-left text-sm sm:text-base">
+                <table className="w-full table-fixed text-left text-sm sm:text-base">
                   <caption className="sr-only">Power gear {pack.name} packs</caption>
+                  <colgroup>
+                    <col />
+                    <col className="w-16 sm:w-24" />
+                    <col className="w-20 sm:w-28" />
+                  </colgroup>
                   <thead className="border-b-2 border-scree-200 text-sm text-scree-600">
                     <tr>
                       <th scope="col" className="py-1.5 pr-3 font-medium">

@@ -48,7 +48,7 @@ export function PlanView({ tripId, plan, canChooseKit, focusAnswer = false }: Pl
           id="plan-answer"
           ref={answerRef}
           tabIndex={-1}
-          className="text-xl font-semibold text-scree-950 focus:outline-none sm:text-2xl"
+          className="text-lg font-semibold text-scree-950 focus:outline-none sm:text-2xl"
         >
           {result.headline}
         </h2>

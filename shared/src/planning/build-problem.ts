@@ -15,6 +15,8 @@ import type { PlanningGear, PlanningInput } from './planning-input.js';
 /** A planning input made ready for the optimiser and the simulation: sun series, problem, judge, kit builder. */
 export interface PlanningContext {
   input: PlanningInput;
+  /** The solar options the sun series was computed with. */
+  solarOptions: TripSolarOptions;
   solar: TripSolarSeries;
   gearById: ReadonlyMap<string, PlanningGear>;
   /** One panel's power per step, per sky, by panel item id (computed once for every kit tried). */
@@ -53,10 +55,14 @@ const signature = (spec: object, omit: readonly string[]): DominanceAttribute =>
  * - charging paths: from every bank, converter and lead combination `chargePaths` accepts (each lead needed once), the
  *   device needs one of the minimal converter-and-lead sets and one bank some path starts from (a relaxation of the
  *   pairs, far smaller in big lockers).
+ * `reuse`: a context of the same trip (same `solarInput` object and solar options) whose sun series and panels' power
+ * this one may share — the gram prices change only demand or the reserve.
  * @example planningContext(input).problem.candidates.length // input.gear.length
  */
-export function planningContext(input: PlanningInput, solarOptions: TripSolarOptions = {}): PlanningContext {
-  const solar = computeTripSolar(input.solarInput, solarOptions);
+export function planningContext(input: PlanningInput, solarOptions: TripSolarOptions = {}, reuse?: PlanningContext): PlanningContext {
+  // A context for the same trip's sun (a changed demand or reserve) shares its sun series and panels' power.
+  const sameSun = reuse !== undefined && reuse.input.solarInput === input.solarInput && (reuse.solarOptions.extraCloudyRunDays ?? 0) === (solarOptions.extraCloudyRunDays ?? 0);
+  const solar = sameSun ? reuse.solar : computeTripSolar(input.solarInput, solarOptions);
   const gearById = new Map(input.gear.map((g) => [g.itemId, g]));
   const owned = input.gear.filter((g) => g.countOwned > 0);
   const skyCount = solar.skies.length;
@@ -103,7 +109,8 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
             return hop.joined && hop.leadItemId === l.itemId;
           }));
     if (directBanks.length === 0 && viaLeads.length === 0) continue;
-    const series = panelPowerSeries(spec, solar);
+    const known = sameSun && reuse.gearById.get(g.itemId)?.spec === g.spec ? reuse.panelSeriesCache.get(g.itemId) : undefined;
+    const series = known ? [...known] : panelPowerSeries(spec, solar);
     panelSeriesCache.set(g.itemId, series);
     const byStep = gridOf(skyCount, stepCount);
     series.forEach((one, s) => {
@@ -263,7 +270,7 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     const verdict = simulate(counts).verdict;
     return { feasible: true, margin: verdict.status === 'runs-dry' ? 0 : verdict.worstMarginShare };
   };
-  return { input, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
+  return { input, solarOptions, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
 }
 
 /** What makes one unit better or worse in the simulation's eyes beyond the daily coefficients. */

@@ -118,7 +118,7 @@ function requirements(context: PlanningContext): Requirement[] {
 
 function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requirement, options: { now: () => number; timeBudgetMs?: number }): PlanGramPrice {
   const one = req.changed(1);
-  const changed = planningContext(one.input, one.solarOptions);
+  const changed = planningContext(one.input, one.solarOptions, context);
   const price = gramPrice(base, changed.problem, changed.judge, options);
   const cap = (s: string): string => s.charAt(0).toUpperCase() + s.slice(1);
   switch (price.kind) {
@@ -126,7 +126,7 @@ function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requiremen
       const kit = base.status === 'nothing-feasible' ? new Map<string, number>() : kitCounts(base.kit.lines);
       const judgeFor = (n: number) => {
         const c = req.changed(n);
-        return planningContext(c.input, c.solarOptions).judge;
+        return planningContext(c.input, c.solarOptions, context).judge;
       };
       const free = freeSteps(judgeFor, kit, maxFreeSteps);
       const upTo = free >= maxFreeSteps ? `at least ${req.unit(free)}` : req.unit(free);

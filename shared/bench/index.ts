@@ -2,7 +2,9 @@
 import { benchEngine } from './engine.js';
 import { benchOptimise } from './optimise.js';
 import { benchParty } from './party.js';
+import { benchPlanning } from './planning.js';
 
 benchEngine();
 benchOptimise();
 benchParty();
+benchPlanning();

@@ -1,0 +1,120 @@
+/**
+ * Planning timings on real trips: the real sun, sky and temperatures and the real hour-by-hour simulation as the judge,
+ * for a 50-item locker over 14 nights and a 200-item locker over 30 nights of invented gear (a realistic mix of USB
+ * panels, banks, boost converters and leads, up to 2 owned each; a phone, a headlamp and a 12 V radio). Goals on this
+ * 2-core machine: the optimum ≤ 100 ms and ≤ 1 s; the full plan (swaps and gram prices) ≤ 2 s more. Then the speed-up
+ * over exhaustive search at 10 item types.
+ */
+import { exhaustiveLightestKit } from '../src/optimisation/oracle.js';
+import { optimiseKit } from '../src/optimisation/optimise.js';
+import { seededRandom } from '../src/optimisation/synthetic-problem.js';
+import { planningContext } from '../src/planning/build-problem.js';
+import type { PlanningInput } from '../src/planning/planning-input.js';
+import { planTrip } from '../src/planning/plan-trip.js';
+import { tripSolarInputSchema } from '../src/schemas/trip-solar.js';
+import type { TripDevice } from '../src/schemas/kit.js';
+import { randomHeadlamp, randomLocker, randomPhone, randomRadio, type Random } from '../src/testing/random-planning.js';
+import { measure } from './measure.js';
+
+const clock = (): number => performance.now();
+
+/** A summer trip at 46.5° N in the "mixed" sky, with a phone, a headlamp and a 12 V radio, and a locker of `items` types. */
+export function benchPlanningInput(random: Random, items: number, nights: number): PlanningInput {
+  const devices: TripDevice[] = [
+    { deviceId: 'phone', spec: randomPhone(random) },
+    { deviceId: 'headlamp', spec: randomHeadlamp(random) },
+    { deviceId: 'radio', spec: randomRadio(random) },
+  ];
+  return {
+    solarInput: tripSolarInputSchema.parse({
+      latitudeDeg: 46.5,
+      longitudeDeg: 9.8,
+      timeZone: 'Europe/Zurich',
+      startDate: '2027-07-10',
+      nights,
+      temperatures: { lowC: 4, highC: 19 },
+    }),
+    devices,
+    deviceNames: { phone: 'the phone', headlamp: 'the headlamp', radio: 'the radio' },
+    gear: randomLocker(random, {
+      itemTypes: items,
+      maxOwned: 2,
+      firstKinds: ['bank', 'phone-lead', 'converter', 'panel'],
+      mix: { panel: 0.25, bank: 0.35, converter: 0.12, lead: 0.28 },
+    }),
+    reserveShare: 0.1,
+    gramLimitG: null,
+  };
+}
+
+/** Time for one plan in the bench, ms: a plan that needs more stops with its best kit so far (and says so). */
+const optimumBudgetMs = { 50: 30_000, 200: 60_000 } as const;
+
+export function benchPlanning(): void {
+  console.log(
+    '\nPlanning on real trips (real sun and simulation; invented gear; each plan capped in time, see the status)',
+  );
+  for (const { items, nights, seed } of [
+    { items: 50, nights: 14, seed: 50 },
+    { items: 200, nights: 30, seed: 200 },
+  ] as const) {
+    const input = benchPlanningInput(seededRandom(seed), items, nights);
+    const budgetMs = optimumBudgetMs[items];
+    const runs = { warmupRuns: 0, runs: items > 100 ? 1 : 3, budgetMs: 600_000 };
+    let last = '';
+    const describe = (plan: ReturnType<typeof planTrip>): string =>
+      `${plan.status}, ${plan.kit?.massG ?? '-'} g, ${plan.stats.rounds} rounds, ${plan.stats.judgedKits} kits judged, ${plan.stats.activeItems} of ${plan.stats.candidateItems} items after presolve${plan.notes.length ? ` — ${plan.notes.join(' ')}` : ''}`;
+    measure(
+      `planningContext (sun, harvest, paths, coefficients), ${items} items, ${nights} nights`,
+      () => planningContext(input),
+      {
+        warmupRuns: 1,
+        runs: items > 100 ? 3 : 10,
+      },
+    );
+    measure(
+      `optimum alone (planTrip without extras, cap ${budgetMs / 1000} s), ${items} items, ${nights} nights`,
+      () => {
+        last = describe(planTrip(input, { withExtras: false, now: clock, timeBudgetMs: budgetMs }));
+      },
+      runs,
+    );
+    console.log(`  → ${last}`);
+    measure(
+      `full plan (optimum, 5 swaps, gram prices; cap ${(2 * budgetMs) / 1000} s), ${items} items, ${nights} nights`,
+      () => {
+        const plan = planTrip(input, { now: clock, timeBudgetMs: 2 * budgetMs });
+        last = `${describe(plan)}; optimum ${plan.stats.optimumMs.toFixed(0)} ms; ${plan.swaps.length} swaps; gram prices: ${plan.gramPrices.map((p) => `${p.requirement} ${p.kind}${p.extraG ? ` ${p.extraG} g` : ''}`).join(', ')}`;
+      },
+      runs,
+    );
+    console.log(`  → ${last}`);
+  }
+
+  // Speed-up over exhaustive search at 10 item types (3^10 kits at most): a few slow runs are enough.
+  const input = benchPlanningInput(seededRandom(10), 10, 14);
+  const context = planningContext(input);
+  let found = '';
+  const fast = measure(
+    'optimum (optimiseKit on a built context), 10 item types, 14 nights',
+    () => {
+      const answer = optimiseKit(context.problem, context.judge, { now: clock });
+      found = `${answer.status}, ${answer.status === 'nothing-feasible' ? '-' : answer.kit.massG} g`;
+    },
+    { warmupRuns: 1, runs: 10, budgetMs: 60_000 },
+  );
+  console.log(`  → ${found}`);
+  let judged = 0;
+  const slow = measure(
+    'exhaustive search (ascending grams, skipping kits below a rejected one), 10 item types, 14 nights',
+    () => {
+      const answer = exhaustiveLightestKit(context.problem.candidates, context.judge);
+      judged = answer.judged;
+      found = `${answer.best?.massG ?? '-'} g`;
+    },
+    { warmupRuns: 0, runs: 3, budgetMs: 120_000 },
+  );
+  console.log(
+    `  → ${found}, ${judged} kits simulated; the optimiser is ${(slow.medianMs / fast.medianMs).toFixed(1)}× faster than exhaustive search at 10 item types`,
+  );
+}

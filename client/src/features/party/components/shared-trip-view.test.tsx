@@ -32,7 +32,10 @@ const sharedTrip: SharedTrip = {
         ],
       },
     ],
-    cautions: ['Fuse DC leads on the positive side close to the battery.'],
+    cautions: [
+      'Fuse DC leads on the positive side close to the battery.',
+      'Figures are estimates, not a guarantee: carry a margin.',
+    ],
   },
   linkExpiresAt: '2027-08-01T10:00:00.000Z',
 };
@@ -55,14 +58,17 @@ describe('the shared trip page', () => {
     expect(kit.getByText('2 × Invented bank')).toBeInTheDocument();
     const cautions = screen.getByRole('region', { name: 'Cautions' });
     expect(cautions).toHaveTextContent('Fuse DC leads');
-    expect(cautions).toHaveTextContent('Figures are estimates');
+    expect(within(cautions).getAllByRole('listitem')).toHaveLength(2);
     expect(screen.queryByRole('navigation')).toBeNull();
   });
 
-  it('says when the leader has not chosen a kit yet', async () => {
+  it('says when the leader has not chosen a kit yet, and shows the standing cautions', async () => {
     partyDb.sharedTrips.set('no-plan', { ...sharedTrip, plan: null });
     await renderApp('/share/no-plan');
     expect(await screen.findByText(/has not chosen a kit yet/)).toBeInTheDocument();
+    const cautions = screen.getByRole('region', { name: 'Cautions' });
+    expect(cautions).toHaveTextContent('Figures are estimates');
+    expect(cautions).toHaveTextContent('Lithium batteries can burn');
   });
 
   it('says a revoked link no longer works, and an unknown one is not recognised', async () => {

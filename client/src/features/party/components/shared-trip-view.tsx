@@ -15,7 +15,7 @@ const deviceKindWords: Record<DeviceKind, string> = {
   other: 'device',
 };
 
-/** Shown whether or not a plan exists: the product's standing cautions in short (PRODUCT.md, "Cautions"). */
+/** Shown until the leader chooses a kit: the product's standing cautions in short (PRODUCT.md, "Cautions"). */
 const standingCautions = [
   'Figures are estimates, not a guarantee: the party carries a margin.',
   'Lithium batteries can burn: protected packs, the right charger, no charging below freezing, not left cooking in the sun.',
@@ -106,7 +106,8 @@ export function SharedTripView({ token }: { token: string }) {
   }
 
   const trip = query.data;
-  const cautions = [...(trip.plan?.cautions ?? []), ...standingCautions];
+  // A chosen kit carries the cautions that apply to it (always ending with the estimates one); before that, the standing ones.
+  const cautions = trip.plan ? trip.plan.cautions : standingCautions;
   return (
     <article aria-labelledby="shared-trip-heading" className="flex flex-col gap-5">
       <header>

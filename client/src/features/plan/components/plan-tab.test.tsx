@@ -81,6 +81,27 @@ describe('PlanTab', () => {
     expect(await screen.findByText('The trip changed after this plan was made')).toBeInTheDocument();
   });
 
+  it('says who carries what on a party’s kit', async () => {
+    const result = buildPlanResult();
+    const kit = result.kit!;
+    const carriers = [
+      { memberId: 'm1', name: 'Test Leader', lines: kit.lines.slice(0, 2), massG: 670, gramLimitG: 600, overG: 70 },
+      { memberId: 'm2', name: 'Test Partner', lines: kit.lines.slice(2), massG: 223, gramLimitG: null, overG: 0 },
+    ];
+    installPlanApi({ plans: [buildPlanRecord({ ...result, kit: { ...kit, carriers } })] });
+    renderPlanTab();
+    const who = await screen.findByRole('heading', { name: 'Who carries what' });
+    const list = within(who.parentElement!).getByRole('list');
+    expect(
+      within(list)
+        .getAllByRole('listitem')
+        .map((li) => li.textContent),
+    ).toEqual([
+      'Test Leader: 670 g, 70 g over their 600 g limit — Test fold-out panel 12 W, Test bank 20 000 mAh',
+      expect.stringMatching(/^Test Partner: 223 g — Test bank 5 000 mAh, /),
+    ]);
+  });
+
   it('switches the ledger between the tightest sky and the expected sky', async () => {
     installPlanApi({ plans: [buildPlanRecord()] });
     const { user } = renderPlanTab();

@@ -42,7 +42,7 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
       <div className="flex flex-col gap-4">
         <EmptyState title="No plan yet — find the lightest kit">
           {canSolve
-            ? 'Gramwatt weighs the gear in your locker against this trip’s sun, sky and devices, and stores the lightest kit that keeps every device charged.'
+            ? 'Gramwatt weighs the trip’s gear (the leader’s locker and anything shared on the Party tab) against its sun, sky and devices, and stores the lightest kit that keeps every device charged.'
             : 'The trip’s leader or a partner finds the lightest kit; it will show here.'}
         </EmptyState>
         {solve}

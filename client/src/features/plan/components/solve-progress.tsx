@@ -24,7 +24,7 @@ export function SolveProgress({ seconds }: { seconds: number }) {
         ))}
       </div>
       <p className="text-scree-800">
-        Weighing kits from your locker against every design sky… <span className="tabular-nums">{seconds} s</span>
+        Weighing kits from the trip’s gear against every design sky… <span className="tabular-nums">{seconds} s</span>
       </p>
     </div>
   );

@@ -96,6 +96,7 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
 
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
+    await expect.poll(() => pathOf(page), patient).toBe('/outbox');
     const message = page.getByRole('link', { name: new RegExp(tripName) });
     // The e-mail goes out through the local mail server a moment after the invite.
     await expect
@@ -108,7 +109,8 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
       .catch(async (error: unknown) => {
         // Say what the outbox held, so a miss can be told from a slow delivery.
         const outbox = await (await page.request.get(appUrl('/api/outbox'))).text();
-        throw new Error(`${String(error)}; the outbox answered ${outbox}`);
+        await saveScreenshot(page, 'party-outbox-miss');
+        throw new Error(`${String(error)} at ${page.url()}; the outbox answered ${outbox}`);
       });
     await message.click();
     const openInvite = page.getByRole('link', { name: 'Open the invite' });

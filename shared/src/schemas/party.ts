@@ -22,11 +22,7 @@ export const inviteCreateSchema = z.object({
     .string({ error: 'E-mail is required' })
     .trim()
     .toLowerCase()
-    .pipe(
-      z
-        .email({ error: 'Enter a valid e-mail address' })
-        .max(maxEmailLength, { error: 'E-mail is too long' }),
-    ),
+    .pipe(z.email({ error: 'Enter a valid e-mail address' }).max(maxEmailLength, { error: 'E-mail is too long' })),
   role: inviteRoleSchema,
 });
 export type InviteCreate = z.infer<typeof inviteCreateSchema>;

@@ -63,7 +63,7 @@ export function benchPlanning(): void {
     const runs = { warmupRuns: 0, runs: items > 100 ? 1 : 3, budgetMs: 600_000 };
     let last = '';
     const describe = (plan: ReturnType<typeof planTrip>): string =>
-      `${plan.status}, ${plan.kit?.massG ?? '-'} g, ${plan.stats.rounds} rounds, ${plan.stats.judgedKits} kits judged, ${plan.stats.activeItems} of ${plan.stats.candidateItems} items after presolve${plan.notes.length ? ` — ${plan.notes.join(' ')}` : ''}`;
+      `${plan.status}, ${plan.kit?.massG ?? '-'} g, ${plan.stats.rounds} rounds, ${plan.stats.judgedKits} kits judged, ${plan.stats.activeItems} of ${plan.stats.candidateItems} items after presolve${plan.notes.length ? ` — ${plan.notes.map((n) => n.replace(/\.$/, '')).join('; ')}` : ''}`;
     measure(
       `planningContext (sun, harvest, paths, coefficients), ${items} items, ${nights} nights`,
       () => planningContext(input),
@@ -92,8 +92,15 @@ export function benchPlanning(): void {
   }
 
   // Speed-up over exhaustive search at 10 item types (3^10 kits at most): a few slow runs are enough.
-  const input = benchPlanningInput(seededRandom(10), 10, 14);
-  const context = planningContext(input);
+  // The first seed from 10 on whose whole locker keeps every device going (a locker that fails is answered at once).
+  let seed = 10;
+  let input = benchPlanningInput(seededRandom(seed), 10, 14);
+  let context = planningContext(input);
+  while (seed < 200 && !context.judge(new Map(input.gear.map((g) => [g.itemId, g.countOwned]))).feasible) {
+    seed++;
+    input = benchPlanningInput(seededRandom(seed), 10, 14);
+    context = planningContext(input);
+  }
   let found = '';
   const fast = measure(
     'optimum (optimiseKit on a built context), 10 item types, 14 nights',

@@ -26,12 +26,12 @@ export interface DemoParty {
 export const demoParty: DemoParty = {
   leaderEmail: 'fern@gramwatt.example',
   tripName: 'Lantern Tarns high route',
-  leaderGramLimitG: 900,
+  leaderGramLimitG: 1000,
   members: [
     {
       email: 'tobin@gramwatt.example',
       role: 'partner',
-      gramLimitG: 600,
+      gramLimitG: 700,
       pool: [
         { itemName: 'Cairn 10 000 mAh bank', count: 1 },
         { itemName: 'Scree 6 W mini panel', count: 1 },

@@ -39,7 +39,7 @@ export const demoTrips: readonly DemoTrip[] = [
       skyPresetId: 'mixed',
       temperatures: { lowC: 2, highC: 16 },
       elevationM: 2800,
-      gramLimitG: 1200,
+      gramLimitG: 1700,
     },
     devices: [
       // The evening net needs more air time than the locker's everyday 20 minutes.

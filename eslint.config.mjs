@@ -2,6 +2,7 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import globals from 'globals';
 
 /**
  * House rules (../shared/STYLE.md): no `any`, no import cycles, dependencies point one way
@@ -28,12 +29,25 @@ export default tseslint.config(
     },
   },
   {
+    // Plain Node scripts (start, dev, the solver's worker) run outside any bundler.
+    files: ['scripts/**/*.mjs', 'server/workers/**/*.mjs'],
+    languageOptions: { globals: globals.node },
+  },
+  {
     files: ['shared/**/*.ts'],
+    ignores: ['shared/**/*.test.ts', 'shared/bench/**'],
     rules: {
+      // shared/ is pure computation: no I/O (tests and benches may read their fixture files).
       'no-restricted-imports': [
         'error',
         { patterns: ['@gramwatt/server*', '@gramwatt/client*', '@gramwatt/seed*', 'node:*', 'fs', 'path'] },
       ],
+    },
+  },
+  {
+    files: ['shared/**/*.test.ts', 'shared/bench/**'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: ['@gramwatt/server*', '@gramwatt/client*', '@gramwatt/seed*'] }],
     },
   },
   {

@@ -9,6 +9,7 @@ const extensionsByType: Record<LockerFileContentType, readonly string[]> = {
 };
 
 /** C0 and C1 control characters, and the bidirectional overrides that can make a name read backwards. */
+// eslint-disable-next-line no-control-regex -- matching control characters is the point: they are stripped from names.
 const unsafeCharacters = /[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g;
 
 /**

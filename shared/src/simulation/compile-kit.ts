@@ -70,6 +70,13 @@ export interface CompiledKit {
   deviceSharesStores: Uint8Array;
   /** Whether any store is shared. */
   anyShared: boolean;
+  /**
+   * store × store: `[s * storeCount + t]` is 1 when store t outranks store s for harvest — t keeps more of each input Wh
+   * (charge × output efficiency, strictly) and, for every device s can charge, t can charge it too, at least as fast and
+   * through a path at least as efficient. Harvest reaches s only once every such t the panel reaches is full or at its
+   * input limit, so a lossy bank added beside a better one never takes the harvest the better one would have kept.
+   */
+  storeOutranks: Uint8Array;
   freezeBlocksDeviceTopUps: boolean;
   reserveShare: number;
   usedItemIds: Set<string>;
@@ -245,6 +252,13 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     }
   }
 
+  const storeOutranks = storeOutranksMatrix(storeCount, deviceCount, storeChargeEff, storeOutputEff, {
+    hullOffset,
+    hullCount,
+    hullGainW: hullGain,
+    hullPathEff: hullEff,
+  });
+
   return {
     stepCount,
     dayCount,
@@ -282,6 +296,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     storeShared,
     deviceSharesStores,
     anyShared: storeShared.some((x) => x === 1),
+    storeOutranks,
     freezeBlocksDeviceTopUps: options.freezeBlocksDeviceTopUps ?? false,
     reserveShare,
     usedItemIds,
@@ -323,4 +338,42 @@ function lowerHull(
     hull.push(p);
   }
   return hull;
+}
+
+/**
+ * store × store: 1 at `[s * storeCount + t]` when t outranks s for harvest (see `CompiledKit.storeOutranks`). Depends on
+ * the paths only, never on demand or sun, so the order cannot move with either.
+ */
+function storeOutranksMatrix(
+  storeCount: number,
+  deviceCount: number,
+  chargeEff: Float64Array,
+  outputEff: Float64Array,
+  hull: { hullOffset: Int32Array; hullCount: Int32Array; hullGainW: ArrayLike<number>; hullPathEff: ArrayLike<number> },
+): Uint8Array {
+  const outranks = new Uint8Array(storeCount * storeCount);
+  const eta = (s: number) => (chargeEff[s] ?? 1) * (outputEff[s] ?? 1);
+  for (let s = 0; s < storeCount; s++) {
+    for (let t = 0; t < storeCount; t++) {
+      if (!(eta(t) > eta(s))) continue;
+      let covers = true;
+      for (let d = 0; d < deviceCount && covers; d++) {
+        const ns = hull.hullCount[s * deviceCount + d] ?? 0;
+        if (ns === 0) continue;
+        const nt = hull.hullCount[t * deviceCount + d] ?? 0;
+        if (nt === 0) {
+          covers = false;
+          continue;
+        }
+        const os = hull.hullOffset[s * deviceCount + d] ?? 0;
+        const ot = hull.hullOffset[t * deviceCount + d] ?? 0;
+        // Fastest point last, most efficient first (the hull rises in both coordinates from the origin).
+        const fasterOrEqual = (hull.hullGainW[ot + nt - 1] ?? 0) >= (hull.hullGainW[os + ns - 1] ?? 0);
+        const asEfficient = (hull.hullPathEff[ot] ?? 0) >= (hull.hullPathEff[os] ?? 0);
+        covers = fasterOrEqual && asEfficient;
+      }
+      if (covers) outranks[s * storeCount + t] = 1;
+    }
+  }
+  return outranks;
 }

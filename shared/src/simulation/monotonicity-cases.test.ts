@@ -32,6 +32,8 @@ function sweep(
         cloudyShare: 0.3,
         walkStartHour: p.walkStart ?? 8,
         walkEndHour: p.walkEnd ?? 16,
+        ...(p.lowC !== undefined ? { lowC: p.lowC } : {}),
+        ...(p.highC !== undefined ? { highC: p.highC } : {}),
       });
       if (!isKitFeasible({ solar, kit, devices, reserveShare: 0 })) return;
       feasibleBase++;
@@ -269,6 +271,56 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
       },
     );
     expect(feasibleBase).toBeGreaterThan(30);
+    expect(broken).toEqual([]);
+  }, 60_000);
+
+  it('a lossy bank added beside a better one does not take its harvest once drained (found by a soak)', () => {
+    // Frosty camp (−8 … +0.5 °C): harvest only in the few hours above 0 °C, while the phone charges all camp long at
+    // 2 W. With harvest levelled by room alone, the phone drained the better banks to their floor, then the lossy spare
+    // (0.36 usable Wh per input Wh against 0.74), which then took its share of the scarce warm-hour harvest at half the
+    // yield, and the kit ran dry. Harvest now reaches a store only once every store that outranks it (more usable Wh per
+    // input Wh, and charges the same devices as fast and as efficiently) is full or at its input limit.
+    const bankPort: OutputPort = { ...port('usb-a'), maxA: 0.5 };
+    const bank = (capacityMah: number, chargeEfficiency: number, outputEfficiency: number) =>
+      testBank({ capacityMah, chargeEfficiency, outputEfficiency, inputMaxW: 3, outputPorts: [bankPort] });
+    const { feasibleBase, broken } = sweep(
+      (p) => ({
+        nights: p.nights ?? 4,
+        devices: [
+          {
+            deviceId: 'phone',
+            spec: testPhone(p.share ?? 0, { ownBatteryWh: 7.2, chargePowerW: 2, chargeEfficiency: 0.75 }),
+          },
+        ],
+        kit: [
+          { itemId: 'bank', count: p.banks ?? 1, spec: bank(p.cap ?? 0, 0.75, 0.98) },
+          { itemId: 'lead', count: 1, spec: testLead('usb-a', 'usb-c') },
+          {
+            itemId: 'panel',
+            count: 1,
+            spec: testUsbPanel({
+              ratedW: 30,
+              portMaxA: p.portA,
+              outputPort: { connector: 'usb-c', captiveCable: true },
+            }),
+          },
+        ],
+        added: { itemId: 'lossy', count: 1, spec: bank(p.capLossy ?? 0, 0.6, 0.6) },
+      }),
+      {
+        nights: [4, 6],
+        share: [0.85, 0.9, 0.95, 1, 1.05, 1.1, 1.15, 1.2],
+        cap: [1000, 1240],
+        banks: [1, 2],
+        capLossy: [1500, 2030, 3000],
+        portA: [0.5, 1],
+        walkStart: [4],
+        walkEnd: [8],
+        lowC: [-8],
+        highC: [0.5],
+      },
+    );
+    expect(feasibleBase).toBeGreaterThan(100);
     expect(broken).toEqual([]);
   }, 60_000);
 

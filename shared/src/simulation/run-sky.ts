@@ -68,6 +68,12 @@ export interface SkyScratch {
   aboveFloorStartByDayWh: Float64Array;
   storeLimitWh: Float64Array;
   breakpoints: Float64Array;
+  /** Per store, harvest rounds: 1 when open (room, input limit left, a panel with harvest left reaches it). */
+  harvestOpen: Uint8Array;
+  /** Per store: 1 when it takes part in the current harvest round (open, and no open store outranks it). */
+  harvestActive: Uint8Array;
+  /** Per store: 1 when the current panel of the round water-fills it. */
+  harvestFillSet: Uint8Array;
 }
 
 /** Allocates scratch buffers for a compiled kit. */
@@ -80,6 +86,9 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     aboveFloorStartByDayWh: new Float64Array(k.dayCount),
     storeLimitWh: new Float64Array(k.storeCount),
     breakpoints: new Float64Array(2 * k.storeCount + 1),
+    harvestOpen: new Uint8Array(k.storeCount),
+    harvestActive: new Uint8Array(k.storeCount),
+    harvestFillSet: new Uint8Array(k.storeCount),
   };
 }
 
@@ -201,42 +210,77 @@ export function runSky(
       availWh += w;
     }
     if (availWh > 0 && !frozen) {
-      // Harvest goes to the stores with the most room (usable Wh), levelling their room, within input limits:
-      // each panel in turn (item id order) water-fills the stores its port reaches.
+      // Harvest goes to the stores with the most room (usable Wh), levelling their room, within input limits — but never
+      // to a store while a store that outranks it (`storeOutranks`: keeps more per input Wh, charges the same devices as
+      // fast and as efficiently) can still take it. Each panel in turn (item id order) water-fills the stores its port
+      // reaches.
       const limitLeft = scratch.storeLimitWh;
       for (let s = 0; s < S; s++) limitLeft[s] = (k.storeInputMaxW[s] ?? 0) * dt;
-      for (let p = 0; p < P; p++) {
-        const h = rem[p] ?? 0;
-        if (h <= 0) continue;
-        let maxRoom = 0;
-        let total0 = 0;
+      const open = scratch.harvestOpen;
+      const active = scratch.harvestActive;
+      const fillSet = scratch.harvestFillSet;
+      // Rounds over all panels: a store takes part in a round when it is open (room and input limit left, and some
+      // panel with harvest left reaches it) and no open store outranks it; a round's stores are fixed at its start, so
+      // a store that closes during the round opens the stores it outranked only in the next round (more sun then never
+      // lets an outranked store compete with the others earlier in the same round). At most one round per store.
+      for (let round = 0; round <= S; round++) {
         for (let s = 0; s < S; s++) {
-          if (k.panelReach[p * S + s] !== 1) continue;
-          const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
-          if (room <= tiny) continue;
-          if (room > maxRoom) maxRoom = room;
-          total0 += Math.min(limitLeft[s] ?? 0, room / storeEta(k, s));
-        }
-        if (total0 <= 0) continue;
-        const level = total0 > h ? waterLevel(k, E, limitLeft, p, h, scratch.breakpoints) : 0;
-        for (let s = 0; s < S; s++) {
-          if (k.panelReach[p * S + s] !== 1) continue;
-          const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
-          if (room <= tiny) continue;
-          const etaC = k.storeChargeEff[s] ?? 1;
-          const etaO = k.storeOutputEff[s] ?? 1;
-          const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
-          if (!(take > 0)) continue;
-          rem[p] = (rem[p] ?? 0) - take;
-          limitLeft[s] = (limitLeft[s] ?? 0) - take;
-          E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
-          if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
-          if (ledger) {
-            ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
-            ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
-            ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
+          open[s] = 0;
+          if ((k.storeCapWh[s] ?? 0) - (E[s] ?? 0) <= tiny || (limitLeft[s] ?? 0) <= tiny) continue;
+          for (let p = 0; p < P; p++) {
+            if (k.panelReach[p * S + s] === 1 && (rem[p] ?? 0) > tiny) {
+              open[s] = 1;
+              break;
+            }
           }
         }
+        let anyActive = false;
+        for (let s = 0; s < S; s++) {
+          active[s] = 0;
+          if (open[s] !== 1) continue;
+          let outranked = false;
+          for (let t = 0; t < S && !outranked; t++)
+            if (k.storeOutranks[s * S + t] === 1 && open[t] === 1) outranked = true;
+          if (outranked) continue;
+          active[s] = 1;
+          anyActive = true;
+        }
+        if (!anyActive) break;
+        let took = false;
+        for (let p = 0; p < P; p++) {
+          const h = rem[p] ?? 0;
+          if (h <= tiny) continue;
+          let total0 = 0;
+          for (let s = 0; s < S; s++) {
+            fillSet[s] = 0;
+            if (active[s] !== 1 || k.panelReach[p * S + s] !== 1) continue;
+            const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+            if (room <= tiny) continue;
+            fillSet[s] = 1;
+            total0 += Math.min(limitLeft[s] ?? 0, room / storeEta(k, s));
+          }
+          if (total0 <= 0) continue;
+          const level = total0 > h ? waterLevel(k, E, limitLeft, fillSet, h, scratch.breakpoints) : 0;
+          for (let s = 0; s < S; s++) {
+            if (fillSet[s] !== 1) continue;
+            const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
+            const etaC = k.storeChargeEff[s] ?? 1;
+            const etaO = k.storeOutputEff[s] ?? 1;
+            const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
+            if (!(take > 0)) continue;
+            took = true;
+            rem[p] = (rem[p] ?? 0) - take;
+            limitLeft[s] = (limitLeft[s] ?? 0) - take;
+            E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
+            if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
+            if (ledger) {
+              ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
+              ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
+              ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
+            }
+          }
+        }
+        if (!took) break;
       }
     }
     if (ledger) {
@@ -419,12 +463,18 @@ function storeEta(k: CompiledKit, s: number): number {
   return (k.storeChargeEff[s] ?? 1) * (k.storeOutputEff[s] ?? 1);
 }
 
-/** Input Wh panel p would put into its reachable stores to bring every store's room down to `level` (usable Wh). */
-function fillAtLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p: number, level: number): number {
+/** Input Wh that brings the room of every store of the harvest round (`active`) down to `level` (usable Wh). */
+function fillAtLevel(
+  k: CompiledKit,
+  E: Float64Array,
+  limitLeft: Float64Array,
+  active: Uint8Array,
+  level: number,
+): number {
   const S = k.storeCount;
   let total = 0;
   for (let s = 0; s < S; s++) {
-    if (k.panelReach[p * S + s] !== 1) continue;
+    if (active[s] !== 1) continue;
     const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
     if (room <= level) continue;
     total += Math.min(limitLeft[s] ?? 0, (room - level) / storeEta(k, s));
@@ -433,7 +483,7 @@ function fillAtLevel(k: CompiledKit, E: Float64Array, limitLeft: Float64Array, p
 }
 
 /**
- * The room level (usable Wh) to which panel p's `inputWh` brings its reachable stores: `fillAtLevel` is piecewise
+ * The room level (usable Wh) to which `inputWh` brings the stores of the harvest round (`active`): `fillAtLevel` is piecewise
  * linear and falling in the level, with breaks where a store starts taking harvest (level = its room) and where its
  * input limit binds; find the two breaks around `inputWh` and interpolate. No allocation: `breaks` is scratch.
  */
@@ -441,7 +491,7 @@ function waterLevel(
   k: CompiledKit,
   E: Float64Array,
   limitLeft: Float64Array,
-  p: number,
+  active: Uint8Array,
   inputWh: number,
   breaks: Float64Array,
 ): number {
@@ -449,7 +499,7 @@ function waterLevel(
   let n = 0;
   breaks[n++] = 0;
   for (let s = 0; s < S; s++) {
-    if (k.panelReach[p * S + s] !== 1) continue;
+    if (active[s] !== 1) continue;
     const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
     if (room <= 0) continue;
     breaks[n++] = room;
@@ -467,10 +517,10 @@ function waterLevel(
     breaks[b + 1] = v;
   }
   let hiLevel = breaks[0] ?? 0;
-  let hiFill = fillAtLevel(k, E, limitLeft, p, hiLevel);
+  let hiFill = fillAtLevel(k, E, limitLeft, active, hiLevel);
   for (let j = 1; j < n; j++) {
     const loLevel = breaks[j] ?? 0;
-    const loFill = fillAtLevel(k, E, limitLeft, p, loLevel);
+    const loFill = fillAtLevel(k, E, limitLeft, active, loLevel);
     if (loFill >= inputWh) {
       return loFill === hiFill ? loLevel : loLevel + ((hiLevel - loLevel) * (loFill - inputWh)) / (loFill - hiFill);
     }

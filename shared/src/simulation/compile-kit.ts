@@ -63,10 +63,11 @@ export interface CompiledKit {
   /**
    * Per store: 1 when two or more of the trip's devices have a charging path from it (a shared store; whether they
    * need charging does not matter, so the split does not move with demand). A device is topped up from the stores only
-   * it reaches first, to full; from shared stores only as far as it still needs for the rest of the trip.
+   * it reaches first, then from shared stores; one that reaches a shared store only as far as it still needs for the
+   * rest of the trip (from every store), any other to full.
    */
   storeShared: Uint8Array;
-  /** Per device: 1 when it is topped up and reaches a shared store (its battery is then filled only as far as it needs). */
+  /** Per device: 1 when it is topped up and reaches a shared store (its battery is then filled, from every store, only as far as it needs). */
   deviceSharesStores: Uint8Array;
   /** Whether any store is shared. */
   anyShared: boolean;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isKitFeasible } from './simulate-kit.js';
+import { isKitFeasible, simulateKit } from './simulate-kit.js';
 import type { KitEntry, TripDevice } from '../schemas/kit.js';
 import type { OutputPort } from '../schemas/ports.js';
 import { syntheticTripSolar } from '../testing/synthetic-solar.js';
@@ -518,4 +518,84 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(feasibleBase).toBe(10);
     expect(broken).toEqual([]);
   });
+});
+
+describe('more demand never raises a store’s energy: hand-built cases', () => {
+  it('a phone on its own bank and on a bank it shares with a headlamp (found by a soak)', () => {
+    // Filled to full from its own bank but only to its use left from the shared one, the phone with more demand was
+    // filled further from the shared bank, was then full when the sun refilled its own bank, and left that harvest in
+    // it — its own bank held up to 0.75 Wh more than with less demand. A device that reaches a shared store is now
+    // filled only to its use left from every store.
+    const bankPort = (connector: OutputPort['connector']): OutputPort => ({ ...port(connector), maxA: 0.5 });
+    const lamp = testPhone(0.1, {
+      deviceKind: 'headlamp',
+      ownBatteryWh: 1,
+      chargePort: { connector: 'micro-usb', captiveCable: false },
+    });
+    let cases = 0;
+    const broken: Record<string, number>[] = [];
+    for (const nights of [2, 3])
+      for (const share of [0.5, 0.6, 0.7])
+        for (const factor of [1.5, 2])
+          for (const ratedW of [2, 4, 8])
+            for (const ownMah of [500, 1000]) {
+              const solar = syntheticTripSolar({ nights, cloudyShare: 0.3 });
+              const kit: KitEntry[] = [
+                {
+                  itemId: 'own-bank',
+                  count: 1,
+                  spec: testBank({ capacityMah: ownMah, inputMaxW: 3, outputPorts: [bankPort('usb-c')] }),
+                },
+                {
+                  itemId: 'shared-bank',
+                  count: 1,
+                  spec: testBank({
+                    capacityMah: 2000,
+                    inputMaxW: 3,
+                    inputPort: { connector: 'micro-usb', captiveCable: false },
+                    outputPorts: [bankPort('usb-a')],
+                  }),
+                },
+                { itemId: 'lead-c', count: 1, spec: testLead('usb-c', 'usb-c') },
+                { itemId: 'lead-a', count: 1, spec: testLead('usb-a', 'usb-c') },
+                { itemId: 'lead-m', count: 1, spec: testLead('usb-a', 'micro-usb') },
+                {
+                  itemId: 'panel',
+                  count: 1,
+                  spec: testUsbPanel({ ratedW, outputPort: { connector: 'usb-c', captiveCable: true } }),
+                },
+              ];
+              const run = (demandFactor: number) =>
+                simulateKit({
+                  solar,
+                  kit,
+                  devices: [
+                    {
+                      deviceId: 'phone',
+                      spec: testPhone(share * demandFactor, {
+                        ownBatteryWh: 3,
+                        chargePowerW: 2,
+                        chargeEfficiency: 0.7,
+                      }),
+                    },
+                    { deviceId: 'lamp', spec: lamp },
+                  ],
+                  reserveShare: 0.2,
+                });
+              const base = run(1);
+              const hungrier = run(factor);
+              const units = base.stores.length + base.devices.length;
+              let worstRiseWh = 0;
+              base.skies.forEach((sky, k) => {
+                const more = hungrier.skies[k]?.unitWhByStep ?? new Float64Array();
+                sky.unitWhByStep.forEach((wh, i) => {
+                  if (i % units < base.stores.length) worstRiseWh = Math.max(worstRiseWh, (more[i] ?? Infinity) - wh);
+                });
+              });
+              cases++;
+              if (worstRiseWh >= 1e-9) broken.push({ nights, share, factor, ratedW, ownMah, worstRiseWh });
+            }
+    expect(cases).toBe(72);
+    expect(broken).toEqual([]);
+  }, 60_000);
 });

@@ -50,8 +50,8 @@ export interface SkyRun {
   dry: SkyDry | null;
   worstMarginShare: number;
   /**
-   * Stored energy (stores + devices) at the start of each day as the verdict counts it, Wh: a device filled from shared
-   * stores only as far as it will still use counts as full when it holds all that and the stores feeding it are full
+   * Stored energy (stores + devices) at the start of each day as the verdict counts it, Wh: a device filled only as far
+   * as it will still use (it reaches a shared store) counts as full when it holds all that and the stores feeding it are full
    * (scratch-owned when `stopAtDry`, else a copy).
    */
   storedStartByDayWh: Float64Array;
@@ -109,10 +109,11 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 
 /**
  * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
- * none below 0 °C), then each device uses its demand for the step from its own battery, then — in the camp window —
- * the devices that need charging are topped up: from the stores only they reach first, to full, then from shared
- * stores only as far as they will still use (merit order, down to each store's reserve, over the paths' hull, within the
- * device's charge power).
+ * none below 0 °C; a store only once the stores that outrank it are full or at their limit), then each device uses its
+ * demand for the step from its own battery, then — in the camp window — the devices that need charging are topped up:
+ * from the stores only they reach first, then from shared stores; to full, or — for a device that reaches a shared
+ * store — from every store only as far as it will still use (merit order, down to each store's reserve, over the paths'
+ * hull, within the device's charge power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(
@@ -173,9 +174,9 @@ export function runSky(
     const row = day * columnCount;
     if (day !== currentDay) {
       const t = totals();
-      // A device topped up from shared stores is filled only as far as it will still use. For the verdict it counts as
-      // full when it holds all it will use for the rest of the trip and every shared store that feeds it is full
-      // (within the keeps-up tolerance): filling it then would only have taken harvest that the full stores spill.
+      // A device that reaches a shared store is filled only as far as it will still use. For the verdict it counts as
+      // full when it holds all it will use for the rest of the trip and every store that feeds it is full (within the
+      // keeps-up tolerance): filling it then would only have taken harvest that the full stores spill.
       let liftWh = 0;
       if (k.anyShared) {
         for (let d = 0; d < D; d++) {
@@ -184,7 +185,7 @@ export function runSky(
           if (e < (k.deviceDemandWhPerH[d] ?? 0) * ((k.stepHoursAfter[i] ?? 0) + dt) - eps) continue;
           let feedersFull = true;
           for (let s = 0; s < S && feedersFull; s++) {
-            if (k.storeShared[s] !== 1 || (k.hullCount[s * D + d] ?? 0) === 0) continue;
+            if ((k.hullCount[s * D + d] ?? 0) === 0) continue;
             const capWh = k.storeCapWh[s] ?? 0;
             if ((E[s] ?? 0) < capWh * (1 - keepsUpToleranceShare)) feedersFull = false;
           }
@@ -309,9 +310,11 @@ export function runSky(
     }
 
     // 3. Camp top-ups of the devices that need charging, each store down to its reserve: first from the stores no other
-    //    device reaches (merit order), to full; then from the shared stores (merit order), only as far as the device
-    //    will still use for the rest of the trip — so a device that can also reach another's bank never takes from it
-    //    what it does not need. The device's own charge power is shared between stores (it may be moved from store to
+    //    device reaches (merit order), then from the shared stores (merit order). A device that reaches no shared store
+    //    is filled to full; one that does, only as far as it will still use for the rest of the trip, from every store —
+    //    so it never takes from another's bank what it does not need, and its target moves with its demand the same way
+    //    for all its stores (filled to full from its own bank but to its use left from a shared one, more demand let it
+    //    fill from the shared bank and then leave harvest in its own bank). The device's own charge power is shared between stores (it may be moved from store to
     //    store within a step); within a store it may be switched between paths (the hull), going faster than the most
     //    efficient path only as far as needed to reach its target by the end of the camp window.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
@@ -320,19 +323,20 @@ export function runSky(
         const cap = k.deviceCapWh[d] ?? 0;
         if (cap - (devE[d] ?? 0) <= tiny) continue;
         budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
-        for (let s = 0; s < S && budgetInWh > tiny; s++) {
-          if (k.storeShared[s] === 1) continue;
-          const want = cap - (devE[d] ?? 0);
-          if (want <= tiny) break;
-          topUp(d, s, want);
-        }
-        if (k.deviceSharesStores[d] !== 1) continue;
-        // From shared stores, only up to what it will still use for the rest of the trip.
-        const useLeftWh = (k.deviceDemandWhPerH[d] ?? 0) * (k.stepHoursAfter[i] ?? 0);
-        let want = Math.min(cap, useLeftWh) - (devE[d] ?? 0);
-        for (let s = 0; s < S && want > tiny && budgetInWh > tiny; s++) {
-          if (k.storeShared[s] !== 1) continue;
-          want -= topUp(d, s, want);
+        // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
+        // rest of the trip; any other device to full.
+        const targetWh =
+          k.deviceSharesStores[d] === 1
+            ? Math.min(cap, (k.deviceDemandWhPerH[d] ?? 0) * (k.stepHoursAfter[i] ?? 0))
+            : cap;
+        for (let pass = 0; pass < 2; pass++) {
+          const shared = pass === 1 ? 1 : 0;
+          for (let s = 0; s < S && budgetInWh > tiny; s++) {
+            if ((k.storeShared[s] ?? 0) !== shared) continue;
+            const want = targetWh - (devE[d] ?? 0);
+            if (want <= tiny) break;
+            topUp(d, s, want);
+          }
         }
       }
     }

@@ -8,10 +8,12 @@ import { kitVerdict } from './verdict.js';
  * and device, the ledger per day, the verdict and the expected sky's charging schedule.
  *
  * Dispatch (one rule everywhere, chosen so that adding an item never makes a kit worse — see README): harvest goes to
- * the stores with the most room, levelling their room, within each store's input limit — never into lithium below
- * 0 °C; each device uses its demand spread evenly over the day's hours from its own battery; in the camp window the
- * devices that need a charging path are topped up, first from the stores no other device reaches (to full), then from
- * shared stores only as far as they will still use for the rest of the trip; stores in a fixed merit order (most usable
+ * the stores with the most room, levelling their room, within each store's input limit — a store only once the stores
+ * that outrank it (more usable Wh per input Wh, charging the same devices as fast and as efficiently) are full or at
+ * their limit; never into lithium below 0 °C; each device uses its demand spread evenly over the day's hours from its
+ * own battery; in the camp window the devices that need a charging path are topped up, first from the stores no other
+ * device reaches, then from shared stores — to full, or, for a device that reaches a shared store, only as far as it
+ * will still use for the rest of the trip; stores in a fixed merit order (most usable
  * Wh per input Wh first), each down to its reserve, over the lower hull of its paths, within the device's charge power.
  * A boost converter only charges a 12 V device's battery: the device's use in a step comes from its battery before
  * that step's top-up, so it is never run live through the converter.

@@ -323,6 +323,8 @@ describe.skipIf(browserMissing)('a party in the built app', () => {
       const leaderRow = carrierList.getByRole('listitem').filter({ hasText: leader.displayName });
       expect(await leaderRow.innerText()).toContain(`${leader.displayName}: ${grams(leaderCarries.massG)}`);
       expect(await leaderRow.innerText()).toContain(leaderLeadName);
+      // The charts load after the verdict; the screenshot waits for them.
+      await page.getByRole('figure', { name: 'Stored energy through the trip' }).locator('svg').first().waitFor();
       // The pointer rests where the button was, over a chart after the answer: move it off so no tooltip shows.
       await page.mouse.move(0, 0);
       await saveScreenshot(page, 'party-plan-carriers');

@@ -59,7 +59,8 @@ export class FlakyTransport implements MailTransport {
 
 /**
  * The app through Test.createTestingModule with `MAIL_TRANSPORT` replaced (unless null) and extra root
- * providers, otherwise as {@link startTestApp}.
+ * providers (value providers also override a feature module's provider of the same token), otherwise as
+ * {@link startTestApp}.
  */
 export async function startTestAppWithTransport(
   transport: MailTransport | null,
@@ -72,9 +73,15 @@ export async function startTestAppWithTransport(
     imports: [AppModule.forRoot({ env: { ...testEnv, ...env }, database: database.db, clock, serveClient: false })],
     providers,
   });
-  const moduleRef = await (
-    transport ? builder.overrideProvider(MAIL_TRANSPORT).useValue(transport) : builder
-  ).compile();
+  if (transport) builder.overrideProvider(MAIL_TRANSPORT).useValue(transport);
+  // A value provider given here also replaces a provider a feature module registers under the same token
+  // (e.g. the plans module's TRIP_PLAN_SUMMARY), so the test's stand-in is the one the app injects.
+  for (const provider of providers) {
+    if (typeof provider === 'object' && 'provide' in provider && 'useValue' in provider) {
+      builder.overrideProvider(provider.provide).useValue(provider.useValue);
+    }
+  }
+  const moduleRef = await builder.compile();
   const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: false });
   configureApp(app);
   await app.init();

@@ -61,5 +61,5 @@ describe('the decomposed search and HiGHS on the monolithic daily model', () => 
     // Both outcomes must occur, or the check says little.
     expect(optimal).toBeGreaterThan(instanceCount / 2);
     expect(optimal + infeasible).toBe(instanceCount);
-  });
+  }, 240_000);
 });

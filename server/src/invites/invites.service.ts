@@ -1,3 +1,4 @@
+import type { Invite, InviteCreate, InviteState } from '@gramwatt/shared';
 import {
   ConflictException,
   ForbiddenException,
@@ -23,7 +24,6 @@ import {
 } from '../database/schema';
 import { MailService } from '../mail/mail.service';
 import { type InvitesConfig, invitesConfigKey } from './invites.config';
-import type { InviteCreate, InviteView } from './invites.dto';
 import { inviteMail } from './invite-mail';
 import { hashInviteToken, inviteTokenPattern, newInviteToken } from './invite-token';
 
@@ -31,8 +31,6 @@ export const inviteNotFoundMessage = 'Invite not found';
 export const inviteUsedMessage = 'This invite was already used';
 export const inviteRevokedMessage = 'This invite was withdrawn by the trip leader';
 export const inviteExpiredMessage = 'This invite has expired: ask the trip leader for a new one';
-
-type InviteState = InviteView['state'];
 
 function stateOf(row: TripInviteRow, now: Date): InviteState {
   if (row.acceptedAt) return 'accepted';
@@ -46,7 +44,7 @@ function toInviteView(
   now: Date,
   inviterName: string | null,
   mail: Pick<MailMessageRow, 'status' | 'attempts' | 'lastError'> | null,
-): InviteView {
+): Invite {
   return {
     id: row.id,
     email: row.email,
@@ -78,7 +76,7 @@ export class InvitesService {
    * working), so inviting again is how a leader resends.
    * @throws ConflictException (409) when the address already belongs to someone on the trip.
    */
-  async create(leader: TripMemberRow, leaderAccount: AccountRow, input: InviteCreate): Promise<InviteView> {
+  async create(leader: TripMemberRow, leaderAccount: AccountRow, input: InviteCreate): Promise<Invite> {
     const now = this.clock.now();
     const [onTrip] = await this.db
       .select({ accountId: tripMembers.accountId })
@@ -137,7 +135,7 @@ export class InvitesService {
   }
 
   /** The trip's invites, newest first, with each e-mail's delivery status. */
-  async list(tripId: string): Promise<InviteView[]> {
+  async list(tripId: string): Promise<Invite[]> {
     const rows = await this.db
       .select({ invite: tripInvites, inviterName: accounts.displayName, mail: mailMessages })
       .from(tripInvites)

@@ -1,10 +1,9 @@
 import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
-import type { TripMember } from '@gramwatt/shared';
+import type { MemberUpdate, TripMember } from '@gramwatt/shared';
 import { and, eq, inArray } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.types';
 import { accounts, lockerItems, tripDevices, tripMembers, tripPoolItems } from '../database/schema';
 import { toTripMember } from '../trips/trip-view';
-import type { MemberUpdate } from './invites.dto';
 
 export const memberNotFoundMessage = 'Member not found';
 

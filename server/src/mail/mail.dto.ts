@@ -1,20 +1,7 @@
+import { type MailDelivery, mailDeliverySchema } from '@gramwatt/shared';
 import { createZodDto } from 'nestjs-zod';
 import { z } from 'zod';
-import { type MailMessageRow, mailKinds, mailStatuses } from '../database/schema';
-
-/** An e-mail's delivery status, without its content (what an admin sees). */
-export const mailDeliverySchema = z.object({
-  id: z.uuid(),
-  kind: z.enum(mailKinds),
-  toAddress: z.string(),
-  status: z.enum(mailStatuses),
-  attempts: z.number().int(),
-  lastError: z.string().nullable(),
-  createdAt: z.iso.datetime(),
-  sentAt: z.iso.datetime().nullable(),
-  nextAttemptAt: z.iso.datetime().nullable(),
-});
-export type MailDelivery = z.infer<typeof mailDeliverySchema>;
+import type { MailMessageRow } from '../database/schema';
 
 export const mailDeliveryListResponseSchema = z.object({ messages: z.array(mailDeliverySchema) });
 export class MailDeliveryListResponseDto extends createZodDto(mailDeliveryListResponseSchema) {}

@@ -1,10 +1,11 @@
+import type { MailKind } from '@gramwatt/shared';
 import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type MailKind, type MailMessageRow, mailMessages } from '../database/schema';
+import { type MailMessageRow, mailMessages } from '../database/schema';
 import { type MailConfig, mailConfigKey } from './mail.config';
 import type { RenderedMail } from './mail-layout';
 import { MAIL_TRANSPORT, type MailTransport } from './mail-transport';

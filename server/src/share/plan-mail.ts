@@ -1,5 +1,5 @@
+import type { SharedTrip } from '@gramwatt/shared';
 import { type MailBlock, type RenderedMail, renderMail } from '../mail/mail-layout';
-import type { SharedTrip } from './share.dto';
 
 /** The caution every plan carries, whatever the kit. */
 export const estimateCaution =

@@ -8,7 +8,7 @@ import {
 } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { ModuleRef } from '@nestjs/core';
-import { tripEndDate } from '@gramwatt/shared';
+import { type ShareLink, type SharedTrip, tripEndDate } from '@gramwatt/shared';
 import { and, asc, eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import type { AuthConfig } from '../config';
@@ -25,7 +25,6 @@ import { MailService } from '../mail/mail.service';
 import { TripDevicesService } from '../trips/trip-devices.service';
 import { planMail } from './plan-mail';
 import { type ShareConfig, shareConfigKey } from './share.config';
-import type { SharedTrip, ShareLinkView } from './share.dto';
 import { ShareTokens, deriveShareSecret } from './share-token';
 import { TRIP_PLAN_SUMMARY, type TripPlanSummarySource } from './trip-plan-summary';
 
@@ -67,7 +66,7 @@ export class ShareService implements OnModuleInit {
   }
 
   /** A new link (every older one stops working), valid for `expiresInDays` or the configured lifetime. */
-  async create(tripId: string, account: AccountRow, expiresInDays?: number): Promise<ShareLinkView> {
+  async create(tripId: string, account: AccountRow, expiresInDays?: number): Promise<ShareLink> {
     const now = this.clock.now();
     const lifetimeS =
       expiresInDays === undefined
@@ -92,7 +91,7 @@ export class ShareService implements OnModuleInit {
   }
 
   /** The trip's link as it stands (state `none` when there never was one). */
-  async current(tripId: string): Promise<ShareLinkView> {
+  async current(tripId: string): Promise<ShareLink> {
     const [row] = await this.db.select().from(tripShareLinks).where(eq(tripShareLinks.tripId, tripId));
     return this.view(row);
   }
@@ -184,7 +183,7 @@ export class ShareService implements OnModuleInit {
     };
   }
 
-  private view(row: TripShareLinkRow | undefined): ShareLinkView {
+  private view(row: TripShareLinkRow | undefined): ShareLink {
     if (!row) return { state: 'none', url: null, path: null, createdAt: null, expiresAt: null };
     const base = { createdAt: row.createdAt.toISOString(), expiresAt: row.expiresAt.toISOString() };
     if (row.revokedAt) return { state: 'revoked', url: null, path: null, ...base };

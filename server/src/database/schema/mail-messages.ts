@@ -1,16 +1,11 @@
+import { type MailKind, mailDeliveryStatuses } from '@gramwatt/shared';
 import { sql } from 'drizzle-orm';
 import { check, index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { timestamps } from './_helpers';
 import { trips } from './trips';
 
-/** Delivery states of an outgoing e-mail. */
-export const mailStatuses = ['queued', 'sent', 'failed'] as const;
-export type MailStatus = (typeof mailStatuses)[number];
-export const mailStatusEnum = pgEnum('mail_status', mailStatuses);
-
-/** What an e-mail is for. */
-export const mailKinds = ['trip-invite', 'trip-plan'] as const;
-export type MailKind = (typeof mailKinds)[number];
+/** Delivery states of an outgoing e-mail: the wire's list, so the column and the API cannot drift apart. */
+export const mailStatusEnum = pgEnum('mail_status', mailDeliveryStatuses);
 
 /**
  * The outbox record of every e-mail the server sends: written before the first attempt, so a message is

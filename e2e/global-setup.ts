@@ -69,7 +69,16 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const baseUrl = `http://127.0.0.1:${port}`;
   const app = spawn(process.execPath, ['scripts/start.mjs'], {
     cwd: repoRoot,
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, NODE_ENV: 'test', HOST: '127.0.0.1' },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      DATA_DIR: dataDir,
+      NODE_ENV: 'test',
+      HOST: '127.0.0.1',
+      // Every browser test signs in from 127.0.0.1 against this one app, more often than the sign-in limit allows a
+      // single client; the limit itself is tested in server/test/auth.e2e-spec.ts.
+      AUTH_RATE_LIMIT: '1000',
+    },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   await waitForHealth(baseUrl, app);

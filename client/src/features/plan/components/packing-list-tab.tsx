@@ -1,9 +1,9 @@
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
+import { formatDate } from '@/lib/format';
 import { useChosenKit } from '../api/get-chosen-kit';
 import { useTripParty } from '../api/get-trip-party';
 import type { PlanTabProps } from '../types';
-import { formatDate } from '../utils/format';
 import { PackingList } from './packing-list';
 import './packing-list-print.css';
 import { TabError, TabLoading } from './tab-states';

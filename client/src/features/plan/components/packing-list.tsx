@@ -1,7 +1,8 @@
 import type { Trip } from '@gramwatt/shared';
 import { useId, type ReactNode } from 'react';
+import { formatDate } from '@/lib/format';
 import type { ChosenKit } from '../api/types';
-import { dayLabel, formatDate, formatGrams, formatWh } from '../utils/format';
+import { dayLabel, formatGrams, formatWh } from '../utils/format';
 import { hopsOf, packsByCarrier, scheduleRows, sparesAmongLeads } from '../utils/packing';
 import { CautionsList } from './cautions-list';
 import { GramMeter } from './gram-meter';

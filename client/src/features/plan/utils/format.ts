@@ -43,18 +43,6 @@ export const formatShortDate = (isoDate: string): string => {
   });
 };
 
-/** A local calendar date with its year. @example formatDate('2027-03-10') // '10 Mar 2027' */
-export const formatDate = (isoDate: string): string => {
-  const [y, m, d] = isoDate.split('-').map(Number);
-  if (!y || !m || !d) return isoDate;
-  return new Date(Date.UTC(y, m - 1, d)).toLocaleDateString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
-};
-
 /** When a plan was made, in the reader's own clock. @example formatMoment('2026-12-02T14:10:00Z') // '2 Dec, 14:10' */
 export const formatMoment = (iso: string): string =>
   new Date(iso).toLocaleString('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });

@@ -38,12 +38,25 @@ export interface KitSearch {
   readonly stats: { rounds: number; judgedKits: number; dailyRejected: number };
   /** The earliest dry finding among rejected kits (for reports). */
   readonly lastRunsDry: RunsDry | undefined;
+  /**
+   * The maximal kits rejected so far (each stands for its whole down-set): the judge's and the daily model's, never
+   * the kits a caller excluded. A search under a raised requirement may start from them (`knownRejected`).
+   */
+  readonly rejectedKits: readonly KitCounts[];
 }
 
 /** Options of a search, beyond `OptimiseOptions`. */
 export interface KitSearchOptions extends OptimiseOptions {
   /** The MILP back end (default javascript-lp-solver); tests may pass another. */
   solver?: LinearSolver;
+  /**
+   * Kits this judge is known to reject, each with every kit no larger (a gram price passes the trip's own search's
+   * `rejectedKits`: a kit that fails the trip as it is fails a raised requirement too, the judge being monotone in
+   * the requirement). They answer for the judge inside their down-sets, and a proposed kit inside one is cut off
+   * without a judge call. They join the model only when proposed: added up front they slow every solve more than they
+   * save rounds.
+   */
+  knownRejected?: readonly KitCounts[];
 }
 
 const stillClock = (): number => 0;
@@ -84,9 +97,19 @@ export function createKitSearch(
     return verdict;
   };
 
-  /** The judge rejects a kit; the daily model's forward pass answers first when it already rejects it (a relaxation). */
+  const knownRejected = options.knownRejected ?? [];
+  /** A known rejected kit that holds at least `counts` (then the judge rejects `counts` too), if any. */
+  const knownRejectedHolding = (counts: KitCounts): KitCounts | undefined =>
+    knownRejected.find((known) => kitNoLarger(counts, known));
+
+  /**
+   * The judge rejects a kit; a known rejected kit holding it, then the daily model's forward pass (a relaxation),
+   * answer first.
+   */
   const judgeRejects = (trial: KitCounts): boolean =>
-    evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 || !judge(trial).feasible;
+    knownRejectedHolding(trial) !== undefined ||
+    evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
+    !judge(trial).feasible;
 
   // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.
   const liftOrder = [...presolved.items].sort(
@@ -228,6 +251,14 @@ export function createKitSearch(
       // A kit no larger than one already rejected is cut off by the model; meeting one means the solver erred.
       if (rejected.some((r) => kitNoLarger(counts, r)))
         return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
+      const known = knownRejectedHolding(counts);
+      if (known) {
+        // Grown further under this judge: it may reject more than the one that found the kit.
+        const grown = lift(known, deadlineMs);
+        rejected.push(grown);
+        cuts.push({ kind: 'no-larger-than', counts: grown });
+        continue;
+      }
       if (dailyRejects(counts)) continue;
       const verdict = judge(counts);
       if (!verdict.feasible) {
@@ -255,5 +286,6 @@ export function createKitSearch(
     get lastRunsDry() {
       return lastRunsDry;
     },
+    rejectedKits: rejected,
   };
 }

@@ -1,5 +1,5 @@
 import { kitCounts } from '../optimisation/kit.js';
-import { createKitSearch, type KitSearch } from '../optimisation/kit-search.js';
+import { createKitSearch, type KitSearch, type KitSearchOptions } from '../optimisation/kit-search.js';
 import { findSwaps, optimiseKit } from '../optimisation/optimise.js';
 import { freeSteps, gramPrice } from '../optimisation/gram-price.js';
 import type { KitCounts, OptimiseAnswer } from '../optimisation/types.js';
@@ -116,7 +116,7 @@ function requirements(context: PlanningContext): Requirement[] {
   return list;
 }
 
-function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requirement, options: { now: () => number; timeBudgetMs?: number }): PlanGramPrice {
+function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requirement, options: KitSearchOptions): PlanGramPrice {
   const one = req.changed(1);
   const changed = planningContext(one.input, one.solarOptions, context);
   const price = gramPrice(base, changed.problem, changed.judge, options);
@@ -245,7 +245,10 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
         notes.push('Some gram prices were left out: the time for this plan ran out.');
         break;
       }
-      gramPrices.push(priceOf(context, answer, req, { now, ...left() }));
+      // A price needs only the grams of the raised optimum, not which of equal kits has the most margin; and the kits the
+      // trip's own search rejected fail every raised requirement too.
+      const priceOptions: KitSearchOptions = { now, ...left(), tieBreakByMargin: false, knownRejected: [...search.rejectedKits] };
+      gramPrices.push(priceOf(context, answer, req, priceOptions));
     }
   }
   return {

@@ -1,13 +1,9 @@
-import { tripRoles } from '@gramwatt/shared';
 import { sql } from 'drizzle-orm';
 import { check, index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { mailMessages } from './mail-messages';
 import { tripRoleEnum } from './trip-members';
 import { trips } from './trips';
-
-/** Roles an invite may give (the leader is whoever made the trip). */
-export const invitableTripRoles = tripRoles.filter((role) => role !== 'leader');
 
 /**
  * An invitation to join a trip, sent to an address. The token itself is never stored: only its SHA-256
@@ -39,6 +35,7 @@ export const tripInvites = pgTable(
     uniqueIndex('trip_invites_token_hash_unique').on(t.tokenHash),
     index('trip_invites_trip_idx').on(t.tripId),
     check('trip_invites_email_lower_case', sql`${t.email} = lower(${t.email})`),
+    /** An invite gives one of the shared `inviteRoles`: the leader is whoever made the trip. */
     check('trip_invites_role_not_leader', sql`${t.role} <> 'leader'`),
   ],
 );

@@ -1,4 +1,5 @@
 import { keepsUpToleranceShare } from '../constants/electrical.js';
+import { maxTripNights } from '../constants/limits.js';
 import type { DesignSkyId } from '../sun/trip-solar-types.js';
 import type { SkyRun } from './run-sky.js';
 import type { DeviceUnit, DryReason, KitVerdict, StoreUnit } from './types.js';
@@ -28,6 +29,24 @@ const reasonText: Record<DryReason, string> = {
  */
 export function keepsUpReferenceDay(dayCount: number): number {
   return dayCount >= 3 ? 1 : 0;
+}
+
+/**
+ * Days past which an extrapolated dry day is not worth naming: twice the longest trip Gramwatt plans. A product
+ * choice, not a physical fact — a straight-line drain says little about day 110 of a five-night trip.
+ */
+const extrapolationHorizonDays = 2 * (maxTripNights + 1);
+
+/**
+ * The end of a "lasts the trip" verdict: the day it would run dry, or — past three times the trip's length (at most
+ * {@link extrapolationHorizonDays}) — that it would last well past that day.
+ * @example wouldRunDryText(8, 6) // 'it would run dry on day 9 if the trip went on'
+ * @example wouldRunDryText(109, 6) // 'at this rate it would last well past day 18 if the trip went on'
+ */
+export function wouldRunDryText(wouldRunDryOnDayIndex: number, dayCount: number): string {
+  const horizon = Math.min(extrapolationHorizonDays, 3 * dayCount);
+  if (wouldRunDryOnDayIndex + 1 > horizon) return `at this rate it would last well past day ${horizon} if the trip went on`;
+  return `it would run dry on day ${wouldRunDryOnDayIndex + 1} if the trip went on`;
 }
 
 /**
@@ -83,6 +102,6 @@ export function kitVerdict(
     status: 'lasts-trip',
     worstMarginShare,
     wouldRunDryOnDayIndex,
-    text: `Lasts the trip: ${spare}; it would run dry on day ${wouldRunDryOnDayIndex + 1} if the trip went on.`,
+    text: `Lasts the trip: ${spare}; ${wouldRunDryText(wouldRunDryOnDayIndex, dayCount)}.`,
   };
 }

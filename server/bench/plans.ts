@@ -26,7 +26,9 @@ function quantile(samplesMs: number[], q: number): number {
 
 function report(name: string, samplesMs: number[]): void {
   const fmt = (ms: number) => (ms < 10 ? ms.toFixed(2) : ms.toFixed(0)).padStart(7);
-  console.log(`${name.padEnd(72)} median ${fmt(quantile(samplesMs, 0.5))} ms   p95 ${fmt(quantile(samplesMs, 0.95))} ms   (${samplesMs.length} runs)`);
+  console.log(
+    `${name.padEnd(72)} median ${fmt(quantile(samplesMs, 0.5))} ms   p95 ${fmt(quantile(samplesMs, 0.95))} ms   (${samplesMs.length} runs)`,
+  );
 }
 
 async function timed(run: () => Promise<unknown>): Promise<number> {
@@ -44,10 +46,19 @@ async function main(): Promise<void> {
     const base = `http://127.0.0.1:${port}/api`;
     const leader = await signedInHiker(t);
     await insertLockerItems(t.db, leader.id, planGear);
-    const devices = await insertLockerItems(t.db, leader.id, planDevices.map((d) => d.item));
+    const devices = await insertLockerItems(
+      t.db,
+      leader.id,
+      planDevices.map((d) => d.item),
+    );
     const trip = await createTrip(t, leader, planTripBody());
     for (const [i, device] of devices.entries()) {
-      await t.http().post(`/api/trips/${trip.id}/devices`).set(leader.auth).send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null }).expect(201);
+      await t
+        .http()
+        .post(`/api/trips/${trip.id}/devices`)
+        .set(leader.auth)
+        .send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null })
+        .expect(201);
     }
 
     const { input } = await t.app.get(PlanningInputBuilder).forTrip(trip.id);
@@ -60,7 +71,10 @@ async function main(): Promise<void> {
       if (i > 0) planMs.push(performance.now() - t0);
       answer = `${result.status}, ${result.kit?.massG ?? '-'} g, ${result.swaps.length} swaps, ${result.gramPrices.length} gram prices; optimum ${result.stats.optimumMs} ms of ${result.stats.totalMs} ms`;
     }
-    report(`full plan (optimum + swaps + gram prices), high route: ${input.gear.length} items, ${input.devices.length} devices, 6 days`, planMs);
+    report(
+      `full plan (optimum + swaps + gram prices), high route: ${input.gear.length} items, ${input.devices.length} devices, 6 days`,
+      planMs,
+    );
     console.log(`  → ${answer}`);
 
     const health = () => fetch(`${base}/health`).then((res) => res.arrayBuffer());
@@ -73,7 +87,11 @@ async function main(): Promise<void> {
     let running = concurrentPlans;
     const started = performance.now();
     const plans = Array.from({ length: concurrentPlans }, () =>
-      fetch(`${base}/trips/${trip.id}/plans`, { method: 'POST', headers: { Authorization: auth, 'Content-Type': 'application/json' }, body: '{}' }).then(async (res) => {
+      fetch(`${base}/trips/${trip.id}/plans`, {
+        method: 'POST',
+        headers: { Authorization: auth, 'Content-Type': 'application/json' },
+        body: '{}',
+      }).then(async (res) => {
         await res.arrayBuffer();
         running -= 1;
         return { status: res.status, ms: performance.now() - started };

@@ -107,7 +107,12 @@ describe('reference catalogue', () => {
 
   it('lets an admin create entries that every member lists, in power-role order, filtered by kind', async () => {
     const bank = await create(bankEntry).expect(201);
-    expect(bank.body.entry).toMatchObject({ kind: 'bank', name: bankEntry.name, notes: 'Invented example', massG: 212 });
+    expect(bank.body.entry).toMatchObject({
+      kind: 'bank',
+      name: bankEntry.name,
+      notes: 'Invented example',
+      massG: 212,
+    });
     expect(bank.body.entry.spec).toMatchObject({ kind: 'bank', capacityMah: 10_000, outputEfficiency: 0.85 });
     await create(panelEntry).expect(201);
 
@@ -143,7 +148,12 @@ describe('reference catalogue', () => {
     const id = body.entry.id;
     const denied = await create(bankEntry, tokenA).expect(403);
     expect(denied.body.message).toBe('Your account does not have the role this needs');
-    await t.http().put(`/api/catalogue/${id}`).set(bearer(tokenA)).send({ ...panelEntry, name: 'Renamed' }).expect(403);
+    await t
+      .http()
+      .put(`/api/catalogue/${id}`)
+      .set(bearer(tokenA))
+      .send({ ...panelEntry, name: 'Renamed' })
+      .expect(403);
     await t.http().delete(`/api/catalogue/${id}`).set(bearer(tokenA)).expect(403);
     const rows = await t.db.select().from(catalogueEntries);
     expect(rows.map((r) => r.name)).toEqual([panelEntry.name]);
@@ -157,7 +167,9 @@ describe('reference catalogue', () => {
     const badKind = await create({ ...panelEntry, spec: { ...panelEntry.spec, kind: 'kettle' } }).expect(400);
     expect(badKind.body.errors[0].path).toBe('spec.kind');
     const bothCapacities = await create({ ...bankEntry, spec: { ...bankEntry.spec, capacityWh: 37 } }).expect(400);
-    expect(bothCapacities.body.errors).toEqual([{ path: 'spec.capacityWh', message: 'Give the capacity in mAh or in Wh, not both' }]);
+    expect(bothCapacities.body.errors).toEqual([
+      { path: 'spec.capacityWh', message: 'Give the capacity in mAh or in Wh, not both' },
+    ]);
     expect(await t.db.select().from(catalogueEntries)).toEqual([]);
   });
 

@@ -20,7 +20,14 @@ import { noDevicesMessage, PlanningInputBuilder } from '../src/plans/planning-in
 import { plansConfigKey, readPlansConfig } from '../src/plans/plans.config';
 import { heldPlanWorkerFile, insertLockerItems, planDevices, planGear, planTripBody } from './support/plan-fixtures';
 import { type TestApp, startTestApp } from './support/test-app';
-import { type Hiker, createTrip, errorPaths, insertLockerItem, signedInHiker, testPhoneSpec } from './support/trip-fixtures';
+import {
+  type Hiker,
+  createTrip,
+  errorPaths,
+  insertLockerItem,
+  signedInHiker,
+  testPhoneSpec,
+} from './support/trip-fixtures';
 
 /** The invented high route with the leader's gear and devices, as a member sets it up through the API. */
 async function highRoute(t: TestApp, leader: Hiker) {
@@ -98,12 +105,21 @@ describe('plans', () => {
 
   it('lists plans newest first without answers, and reads one; the default chosen kit is the latest plan’s optimum', async () => {
     const chosen = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
-    expect(chosenKitResponseSchema.parse(chosen.body).kit).toMatchObject({ source: 'optimum', planId: plan.id, kit: plan.result.kit });
+    expect(chosenKitResponseSchema.parse(chosen.body).kit).toMatchObject({
+      source: 'optimum',
+      planId: plan.id,
+      kit: plan.result.kit,
+    });
 
     // A plan on part of the gear: no boost converter, so nothing can charge the 12 V radio.
     t.clock.advanceS(60);
     const noConverters = route.gear.filter((g) => g.kind !== 'converter').map((g) => g.id);
-    const partial = await t.http().post(`/api/trips/${route.trip.id}/plans`).set(leader.auth).send({ itemIds: noConverters }).expect(201);
+    const partial = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/plans`)
+      .set(leader.auth)
+      .send({ itemIds: noConverters })
+      .expect(201);
     const second = planResponseSchema.parse(partial.body).plan;
     expect(second.result.status).toBe('nothing-feasible');
     expect(second.result.kit).toBeNull();
@@ -112,7 +128,11 @@ describe('plans', () => {
     const listed = await t.http().get(`/api/trips/${route.trip.id}/plans`).set(leader.auth).expect(200);
     const plans: PlanSummary[] = planListResponseSchema.parse(listed.body).plans;
     expect(plans.map((p) => p.id)).toEqual([second.id, plan.id]);
-    expect(plans[1]).toMatchObject({ status: 'optimal', massG: plan.result.kit?.massG, headline: plan.result.headline });
+    expect(plans[1]).toMatchObject({
+      status: 'optimal',
+      massG: plan.result.kit?.massG,
+      headline: plan.result.headline,
+    });
     expect(listed.body.plans[0]).not.toHaveProperty('result');
 
     const one = await t.http().get(`/api/trips/${route.trip.id}/plans/${plan.id}`).set(leader.auth).expect(200);
@@ -158,7 +178,12 @@ describe('plans', () => {
     const spare = route.gear.find((g) => g.kind === 'panel' && !kit.lines.some((l) => l.itemId === g.id));
     if (!spare) throw new Error('the fixture owns a panel the optimum leaves out');
     const selection = [...kit.lines.map((l) => ({ itemId: l.itemId, count: l.count })), { itemId: spare.id, count: 1 }];
-    const checked = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: selection }).expect(200);
+    const checked = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/check`)
+      .set(leader.auth)
+      .send({ kit: selection })
+      .expect(200);
     const result: CheckResult = checkResultSchema.parse(checked.body);
     expect(result.kit.massG).toBe(kit.massG + spare.massG);
     expect(result.evaluation.verdict.status).not.toBe('runs-dry');
@@ -170,7 +195,12 @@ describe('plans', () => {
 
     // One bank alone: the radio has no path, so the kit runs dry, and the sentence names the device.
     const bank = byName(route.gear, 'Knoll 10 000 mAh bank');
-    const thin = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [{ itemId: bank.id, count: 1 }] }).expect(200);
+    const thin = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/check`)
+      .set(leader.auth)
+      .send({ kit: [{ itemId: bank.id, count: 1 }] })
+      .expect(200);
     expect(thin.body.evaluation.verdict.status).toBe('runs-dry');
     expect(thin.body.evaluation.verdict.text).not.toContain(route.devices[0]?.id);
   });
@@ -192,7 +222,12 @@ describe('plans', () => {
       })
       .expect(400);
     expect(errorPaths(bad)).toEqual(['kit.0.itemId', 'kit.1.itemId', 'kit.2.itemId', 'kit.3.count']);
-    const body = await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [{ itemId: lead.id, count: 0 }] }).expect(400);
+    const body = await t
+      .http()
+      .post(`/api/trips/${route.trip.id}/check`)
+      .set(leader.auth)
+      .send({ kit: [{ itemId: lead.id, count: 0 }] })
+      .expect(400);
     expect(errorPaths(body)).toEqual(['kit.0.count']);
   });
 
@@ -214,7 +249,12 @@ describe('plans', () => {
     expect(errorPaths(refused)).toEqual(['planId']);
 
     t.clock.advanceS(60);
-    const stored = await t.http().put(`/api/trips/${route.trip.id}/kit`).set(leader.auth).send({ kit: lines, source: 'swap', planId: plan.id }).expect(200);
+    const stored = await t
+      .http()
+      .put(`/api/trips/${route.trip.id}/kit`)
+      .set(leader.auth)
+      .send({ kit: lines, source: 'swap', planId: plan.id })
+      .expect(200);
     const chosen: ChosenKit | null = chosenKitResponseSchema.parse(stored.body).kit;
     expect(chosen).toMatchObject({ source: 'swap', planId: plan.id, updatedAt: t.clock.now().toISOString() });
     expect(chosen?.kit.massG).toBe(swap.kit.massG);
@@ -228,7 +268,13 @@ describe('plans', () => {
     expect(shared.body.trip.plan).toEqual({
       verdict: chosen?.evaluation.verdict.text,
       kitMassG: swap.kit.massG,
-      carriers: [{ name: 'Test Hiker', massG: swap.kit.massG, items: swap.kit.lines.map((l) => ({ name: l.name, count: l.count })) }],
+      carriers: [
+        {
+          name: 'Test Hiker',
+          massG: swap.kit.massG,
+          items: swap.kit.lines.map((l) => ({ name: l.name, count: l.count })),
+        },
+      ],
       cautions: chosen?.evaluation.cautions.map((c) => c.text),
     });
   });
@@ -246,7 +292,10 @@ describe('plans', () => {
 
   it('answers 422 when no kit could be verified within the time limit, and frees the thread', async () => {
     const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
-    const solver = solverWith({ PLAN_WORKER_THREADS: '1', PLAN_TIME_LIMIT_MS: '100', PLAN_STOP_GRACE_MS: '100' }, heldPlanWorkerFile);
+    const solver = solverWith(
+      { PLAN_WORKER_THREADS: '1', PLAN_TIME_LIMIT_MS: '100', PLAN_STOP_GRACE_MS: '100' },
+      heldPlanWorkerFile,
+    );
     try {
       const error = await solver.plan(input).catch((e: unknown) => e);
       expect(error).toBeInstanceOf(UnprocessableEntityException);
@@ -294,7 +343,9 @@ describe('plans', () => {
   });
 
   it('solves in a worker thread, not on the server’s event loop', async () => {
-    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id, { itemIds: [route.gear[0]?.id ?? ''] });
+    const { input } = await t.app
+      .get(PlanningInputBuilder)
+      .forTrip(route.trip.id, { itemIds: [route.gear[0]?.id ?? ''] });
     const solver = t.app.get(PlanSolver);
     const run = await solver.plan(input, false);
     expect(run.threadId).not.toBe(mainThreadId);

@@ -52,7 +52,12 @@ const table: Row[] = [
   { method: 'get', path: '/api/trips/{id}/members', expect: [200, 200, 200] },
   { method: 'get', path: '/api/trips/{id}/devices', expect: [200, 200, 200] },
   { method: 'put', path: '/api/trips/{id}', expect: [200, 403, 403], body: () => tripBody({ name: 'Renamed' }) },
-  { method: 'post', path: '/api/trips/{id}/devices', expect: [201, 201, 403], body: (s) => ({ itemId: s.callerPhoneId }) },
+  {
+    method: 'post',
+    path: '/api/trips/{id}/devices',
+    expect: [201, 201, 403],
+    body: (s) => ({ itemId: s.callerPhoneId }),
+  },
   {
     method: 'patch',
     path: '/api/trips/{id}/devices/{deviceId}',
@@ -64,15 +69,40 @@ const table: Row[] = [
   { method: 'get', path: '/api/trips/{id}/plans/{planId}', expect: [200, 200, 200] },
   { method: 'get', path: '/api/trips/{id}/kit', expect: [200, 200, 200] },
   { method: 'post', path: '/api/trips/{id}/plans', expect: [201, 201, 403], body: () => ({}) },
-  { method: 'post', path: '/api/trips/{id}/check', expect: [200, 200, 403], body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }] }) },
-  { method: 'put', path: '/api/trips/{id}/kit', expect: [200, 403, 403], body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }], source: 'hand' }) },
+  {
+    method: 'post',
+    path: '/api/trips/{id}/check',
+    expect: [200, 200, 403],
+    body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }] }),
+  },
+  {
+    method: 'put',
+    path: '/api/trips/{id}/kit',
+    expect: [200, 403, 403],
+    body: (s) => ({ kit: [{ itemId: s.ownerBankId, count: 1 }], source: 'hand' }),
+  },
   { method: 'get', path: '/api/trips/{id}/pool', expect: [200, 200, 200] },
-  { method: 'post', path: '/api/trips/{id}/pool', expect: [201, 201, 403], body: (s) => ({ itemId: s.callerBankId, count: 1 }) },
+  {
+    method: 'post',
+    path: '/api/trips/{id}/pool',
+    expect: [201, 201, 403],
+    body: (s) => ({ itemId: s.callerBankId, count: 1 }),
+  },
   { method: 'patch', path: '/api/trips/{id}/pool/{poolItemId}', expect: [200, 403, 403], body: () => ({ count: 1 }) },
   { method: 'delete', path: '/api/trips/{id}/pool/{poolItemId}', expect: [204, 403, 403] },
-  { method: 'patch', path: '/api/trips/{id}/members/{accountId}', expect: [200, 403, 403], body: () => ({ gramLimitG: 900 }) },
+  {
+    method: 'patch',
+    path: '/api/trips/{id}/members/{accountId}',
+    expect: [200, 403, 403],
+    body: () => ({ gramLimitG: 900 }),
+  },
   { method: 'get', path: '/api/trips/{id}/invites', expect: [200, 403, 403] },
-  { method: 'post', path: '/api/trips/{id}/invites', expect: [201, 403, 403], body: () => ({ email: 'someone.new@example.test', role: 'viewer' }) },
+  {
+    method: 'post',
+    path: '/api/trips/{id}/invites',
+    expect: [201, 403, 403],
+    body: () => ({ email: 'someone.new@example.test', role: 'viewer' }),
+  },
   { method: 'delete', path: '/api/trips/{id}/invites/{inviteId}', expect: [204, 403, 403] },
   { method: 'get', path: '/api/trips/{id}/share', expect: [200, 403, 403] },
   { method: 'post', path: '/api/trips/{id}/share', expect: [201, 403, 403], body: () => ({}) },
@@ -124,7 +154,12 @@ describe('trip roles × every trip route', () => {
       { tripId: trip.id, accountId: spare.id, role: 'partner' },
     ]);
     const radio = await insertLockerItem(t.db, owner.id, testRadioSpec());
-    const device = await t.http().post(`/api/trips/${trip.id}/devices`).set(owner.auth).send({ itemId: radio.id }).expect(201);
+    const device = await t
+      .http()
+      .post(`/api/trips/${trip.id}/devices`)
+      .set(owner.auth)
+      .send({ itemId: radio.id })
+      .expect(201);
     const invite = await t
       .http()
       .post(`/api/trips/${trip.id}/invites`)
@@ -142,7 +177,12 @@ describe('trip roles × every trip route', () => {
     const phone = await insertLockerItem(t.db, caller.id, testPhoneSpec());
     const callerBank = await insertLockerItem(t.db, caller.id, testBankSpec());
     const ownerBank = await insertLockerItem(t.db, owner.id, testBankSpec());
-    const pooled = await t.http().post(`/api/trips/${trip.id}/pool`).set(owner.auth).send({ itemId: ownerBank.id }).expect(201);
+    const pooled = await t
+      .http()
+      .post(`/api/trips/${trip.id}/pool`)
+      .set(owner.auth)
+      .send({ itemId: ownerBank.id })
+      .expect(201);
     const plan = await t.http().post(`/api/trips/${trip.id}/plans`).set(owner.auth).send({}).expect(201);
     return {
       caller,
@@ -176,7 +216,8 @@ describe('trip roles × every trip route', () => {
     const got: Record<string, number> = {};
     const want: Record<string, number> = {};
     for (const row of table) {
-      const status = role === 'non-member' || role === 'admin' ? 404 : row.expect[['leader', 'partner', 'viewer'].indexOf(role)];
+      const status =
+        role === 'non-member' || role === 'admin' ? 404 : row.expect[['leader', 'partner', 'viewer'].indexOf(role)];
       const request = t.http()[row.method](url(row, s)).set(caller.auth);
       const response = await (row.body ? request.send(row.body(s)) : request);
       got[key(row)] = response.status;
@@ -192,7 +233,12 @@ describe('trip roles × every trip route', () => {
     await t.db.insert(tripMembers).values({ tripId: trip.id, accountId: admin.id, role: 'viewer' });
     await t.http().get(`/api/trips/${trip.id}`).set(admin.auth).expect(200);
     await t.http().put(`/api/trips/${trip.id}`).set(admin.auth).send(tripBody()).expect(403);
-    await t.http().post(`/api/trips/${trip.id}/invites`).set(admin.auth).send({ email: 'x@example.test', role: 'viewer' }).expect(403);
+    await t
+      .http()
+      .post(`/api/trips/${trip.id}/invites`)
+      .set(admin.auth)
+      .send({ email: 'x@example.test', role: 'viewer' })
+      .expect(403);
     await t.http().post(`/api/trips/${trip.id}/share`).set(admin.auth).expect(403);
   });
 
@@ -231,10 +277,25 @@ describe('trip roles × every trip route', () => {
     expect(changed.body.member).toMatchObject({ accountId: partner.id, role: 'viewer', gramLimitG: 1200 });
     await t.http().post(`/api/trips/${trip.id}/devices`).set(partner.auth).send({ itemId: phone.id }).expect(403);
 
-    await t.http().patch(`/api/trips/${trip.id}/members/${leader.id}`).set(leader.auth).send({ role: 'viewer' }).expect(409);
-    await t.http().patch(`/api/trips/${trip.id}/members/${leader.id}`).set(leader.auth).send({ gramLimitG: 1500 }).expect(200);
+    await t
+      .http()
+      .patch(`/api/trips/${trip.id}/members/${leader.id}`)
+      .set(leader.auth)
+      .send({ role: 'viewer' })
+      .expect(409);
+    await t
+      .http()
+      .patch(`/api/trips/${trip.id}/members/${leader.id}`)
+      .set(leader.auth)
+      .send({ gramLimitG: 1500 })
+      .expect(200);
     await t.http().delete(`/api/trips/${trip.id}/members/${leader.id}`).set(leader.auth).expect(409);
-    await t.http().patch(`/api/trips/${trip.id}/members/${partner.id}`).set(leader.auth).send({ role: 'leader' }).expect(400);
+    await t
+      .http()
+      .patch(`/api/trips/${trip.id}/members/${partner.id}`)
+      .set(leader.auth)
+      .send({ role: 'leader' })
+      .expect(400);
     const stranger = await signedInHiker(t);
     await t.http().delete(`/api/trips/${trip.id}/members/${stranger.id}`).set(leader.auth).expect(404);
   });
@@ -243,7 +304,10 @@ describe('trip roles × every trip route', () => {
     await t.http().get('/api/invites/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA').expect(404);
     await t.http().post('/api/invites/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA/accept').expect(401);
     await t.http().get('/api/share/abc.def.ghi').expect(404);
-    const pending = await t.db.select().from(tripInvites).where(and(eq(tripInvites.role, 'partner')));
+    const pending = await t.db
+      .select()
+      .from(tripInvites)
+      .where(and(eq(tripInvites.role, 'partner')));
     expect(pending.length).toBeGreaterThan(0);
   });
 });

@@ -3,14 +3,24 @@
 // takes the built `@gramwatt/shared`. The task and answer shapes are `PlanSolverTask` and `PlanSolverAnswer` in
 // `src/plans/plan-solver-task.ts`.
 import { threadId } from 'node:worker_threads';
-import { checkKit, evaluateKit, partyCarriers, planKit, planningContext, planParty, planTrip, PlanningInputError } from '@gramwatt/shared';
+import {
+  checkKit,
+  evaluateKit,
+  partyCarriers,
+  planKit,
+  planningContext,
+  planParty,
+  planTrip,
+  PlanningInputError,
+} from '@gramwatt/shared';
 
 /** Runs one task; a selection the input does not hold comes back as an `input-error` (an Error loses its path between threads). */
 export default function solve(task) {
   try {
     return { kind: 'done', threadId, value: run(task) };
   } catch (error) {
-    if (error instanceof PlanningInputError) return { kind: 'input-error', threadId, path: error.path, message: error.message };
+    if (error instanceof PlanningInputError)
+      return { kind: 'input-error', threadId, path: error.path, message: error.message };
     throw error;
   }
 }
@@ -19,7 +29,11 @@ function run(task) {
   switch (task.kind) {
     case 'plan': {
       // The budget is what is left of the request's time limit after its wait in the queue (same process, same clock).
-      const options = { now: Date.now, timeBudgetMs: Math.max(1, task.deadlineMs - Date.now()), withExtras: task.withExtras };
+      const options = {
+        now: Date.now,
+        timeBudgetMs: Math.max(1, task.deadlineMs - Date.now()),
+        withExtras: task.withExtras,
+      };
       // A party's trip: the kit is shared out among the carriers within their own gram limits.
       return task.input.party ? planParty(task.input, task.input.party, options) : planTrip(task.input, options);
     }
@@ -32,7 +46,10 @@ function run(task) {
       const counts = new Map(task.selection.map((line) => [line.itemId, line.count]));
       const kit = planKit(context, counts);
       const party = task.input.party;
-      return { kit: party ? { ...kit, carriers: partyCarriers(context, party, counts) } : kit, evaluation: evaluateKit(context, counts) };
+      return {
+        kit: party ? { ...kit, carriers: partyCarriers(context, party, counts) } : kit,
+        evaluation: evaluateKit(context, counts),
+      };
     }
     default:
       throw new Error(`Unknown plan solver task ${String(task.kind)}`);

@@ -50,7 +50,12 @@ export function demoPartyInput(): { input: PlanningInput; party: PartyPlanning }
   const leaderLocker = lockerOf(demoParty.leaderEmail);
   const partnerLocker = lockerOf(partner.email);
   const devices = [
-    ...trip.devices.map((d) => tripDevice(leaderLocker.find((i) => i.name === d.itemName), d.useProfileOverride)),
+    ...trip.devices.map((d) =>
+      tripDevice(
+        leaderLocker.find((i) => i.name === d.itemName),
+        d.useProfileOverride,
+      ),
+    ),
     ...partner.devices.map((name) => tripDevice(partnerLocker.find((i) => i.name === name))),
   ];
   const asGear = (row: LockerRow, countOwned: number): PlanningGear[] =>

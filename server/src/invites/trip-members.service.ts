@@ -54,7 +54,9 @@ export class TripMembersService {
         .update(tripDevices)
         .set({ carrierAccountId: null })
         .where(and(eq(tripDevices.tripId, tripId), eq(tripDevices.carrierAccountId, accountId)));
-      await tx.delete(tripPoolItems).where(and(eq(tripPoolItems.tripId, tripId), eq(tripPoolItems.accountId, accountId)));
+      await tx
+        .delete(tripPoolItems)
+        .where(and(eq(tripPoolItems.tripId, tripId), eq(tripPoolItems.accountId, accountId)));
       await tx.delete(tripMembers).where(and(eq(tripMembers.tripId, tripId), eq(tripMembers.accountId, accountId)));
     });
   }

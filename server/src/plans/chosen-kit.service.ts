@@ -34,7 +34,10 @@ export class ChosenKitService {
    */
   async choose(member: TripMemberRow, body: ChooseKitRequest): Promise<ChosenKit> {
     if (body.planId !== undefined && !(await this.plans.has(member.tripId, body.planId))) {
-      throw new BadRequestException({ message: noSuchPlanMessage, errors: [{ path: 'planId', message: noSuchPlanMessage }] });
+      throw new BadRequestException({
+        message: noSuchPlanMessage,
+        errors: [{ path: 'planId', message: noSuchPlanMessage }],
+      });
     }
     const { input } = await this.inputs.forTrip(member.tripId);
     assertKitSelection(input, body.kit);

@@ -11,7 +11,8 @@ export function kitSelectionErrors(input: PlanningInput, selection: KitSelection
   return selection.flatMap((line, i): ApiFieldError[] => {
     const gear = gearById.get(line.itemId);
     if (!gear) return [{ path: `kit.${i}.itemId`, message: 'This item is not among the gear for this trip' }];
-    if (line.count > gear.countOwned) return [{ path: `kit.${i}.count`, message: `Only ${gear.countOwned} of ${gear.name} owned` }];
+    if (line.count > gear.countOwned)
+      return [{ path: `kit.${i}.count`, message: `Only ${gear.countOwned} of ${gear.name} owned` }];
     return [];
   });
 }
@@ -20,6 +21,9 @@ export function kitSelectionErrors(input: PlanningInput, selection: KitSelection
 export function assertKitSelection(input: PlanningInput, selection: KitSelection): void {
   const errors = kitSelectionErrors(input, selection);
   if (errors.length > 0) {
-    throw new BadRequestException({ message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention', errors });
+    throw new BadRequestException({
+      message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention',
+      errors,
+    });
   }
 }

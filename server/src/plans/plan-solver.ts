@@ -104,7 +104,11 @@ export class PlanSolver implements OnModuleDestroy {
       }
       // A selection the input does not hold (the service checks first; this is the engine's own word on it).
       if (answer.kind === 'input-error') throw new PlanningInputError(answer.path, answer.message);
-      return { value: answer.value as V, threadId: answer.threadId, durationMs: Math.round(performance.now() - startedMs) };
+      return {
+        value: answer.value as V,
+        threadId: answer.threadId,
+        durationMs: Math.round(performance.now() - startedMs),
+      };
     } finally {
       this.inFlight -= 1;
     }

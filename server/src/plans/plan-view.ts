@@ -28,7 +28,13 @@ function recordFields(row: TripPlanSummaryRow) {
 
 /** The trip's chosen kit, as the leader stored it. */
 export function toChosenKit(row: TripKitRow): ChosenKit {
-  return { kit: row.kit, source: row.source, planId: row.planId, updatedAt: row.chosenAt.toISOString(), evaluation: row.evaluation };
+  return {
+    kit: row.kit,
+    source: row.source,
+    planId: row.planId,
+    updatedAt: row.chosenAt.toISOString(),
+    evaluation: row.evaluation,
+  };
 }
 
 /** The chosen kit when none was stored: the plan's optimum (null when the plan found nothing that works). */
@@ -42,7 +48,10 @@ export function optimumAsChosenKit(row: TripPlanRow): ChosenKit | null {
  * The verdict sentence with device names: the simulation writes device ids (the trip's locker item ids), and a
  * plan names them, but a check or a single evaluation does not.
  */
-export function withDeviceNames(evaluation: KitEvaluation, names: Readonly<Record<string, string>> | undefined): KitEvaluation {
+export function withDeviceNames(
+  evaluation: KitEvaluation,
+  names: Readonly<Record<string, string>> | undefined,
+): KitEvaluation {
   let text = evaluation.verdict.text;
   for (const [id, name] of Object.entries(names ?? {})) text = text.split(id).join(name);
   return { ...evaluation, verdict: { ...evaluation.verdict, text } };

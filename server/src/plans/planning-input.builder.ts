@@ -1,4 +1,10 @@
-import { BadRequestException, Inject, Injectable, NotFoundException, UnprocessableEntityException } from '@nestjs/common';
+import {
+  BadRequestException,
+  Inject,
+  Injectable,
+  NotFoundException,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import {
   type ItemSpec,
   type KitItemSpec,
@@ -95,7 +101,10 @@ export class PlanningInputBuilder {
   }
 
   /** The pooled gear and, with partners on the trip, the party that carries it. */
-  private async poolFor(tripId: string, leader: KitCarrier): Promise<{ gear: PlanningGear[]; party: PartyPlanning | null }> {
+  private async poolFor(
+    tripId: string,
+    leader: KitCarrier,
+  ): Promise<{ gear: PlanningGear[]; party: PartyPlanning | null }> {
     const carrierRoles = ['leader', 'partner'] as const;
     const entries = await this.db
       .select({ item: lockerItems, count: tripPoolItems.count, ownerId: tripPoolItems.accountId })
@@ -132,7 +141,10 @@ export class PlanningInputBuilder {
     const carriers = [...members].sort((a, b) => Number(b.role === 'leader') - Number(a.role === 'leader'));
     return {
       gear,
-      party: { members: carriers.map(({ memberId, name, gramLimitG }) => ({ memberId, name, gramLimitG })), ownerByItemId },
+      party: {
+        members: carriers.map(({ memberId, name, gramLimitG }) => ({ memberId, name, gramLimitG })),
+        ownerByItemId,
+      },
     };
   }
 
@@ -141,7 +153,9 @@ export class PlanningInputBuilder {
     const rows = await this.db
       .select()
       .from(lockerItems)
-      .where(and(eq(lockerItems.ownerId, carrier.accountId), ne(lockerItems.kind, 'device'), gt(lockerItems.countOwned, 0)))
+      .where(
+        and(eq(lockerItems.ownerId, carrier.accountId), ne(lockerItems.kind, 'device'), gt(lockerItems.countOwned, 0)),
+      )
       .orderBy(asc(lockerItems.name), asc(lockerItems.id));
     return rows.flatMap((row) =>
       isKitItemSpec(row.spec)
@@ -157,7 +171,10 @@ export class PlanningInputBuilder {
       known.has(id) ? [] : [{ path: `itemIds.${i}`, message: 'This item is not among the party’s pooled power gear' }],
     );
     if (errors.length > 0) {
-      throw new BadRequestException({ message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention', errors });
+      throw new BadRequestException({
+        message: errors.length === 1 ? errors[0]?.message : 'Some fields need attention',
+        errors,
+      });
     }
     const wanted = new Set(itemIds);
     return gear.filter((g) => wanted.has(g.itemId));

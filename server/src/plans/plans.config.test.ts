@@ -17,7 +17,13 @@ describe('plans config', () => {
 
   it('reads every variable; an empty one means the default', () => {
     expect(
-      readPlansConfig({ PLAN_WORKER_THREADS: '3', PLAN_QUEUE_MAX: '0', PLAN_TIME_LIMIT_MS: '500', PLAN_STOP_GRACE_MS: '0', PLAN_RETRY_AFTER_S: '30' }),
+      readPlansConfig({
+        PLAN_WORKER_THREADS: '3',
+        PLAN_QUEUE_MAX: '0',
+        PLAN_TIME_LIMIT_MS: '500',
+        PLAN_STOP_GRACE_MS: '0',
+        PLAN_RETRY_AFTER_S: '30',
+      }),
     ).toEqual({ workerThreads: 3, queueMax: 0, timeLimitMs: 500, stopGraceMs: 0, retryAfterS: 30 });
     expect(readPlansConfig({ PLAN_QUEUE_MAX: ' ' }).queueMax).toBe(8);
   });
@@ -30,7 +36,9 @@ describe('plans config', () => {
     ['PLAN_TIME_LIMIT_MS', '1.5'],
     ['PLAN_RETRY_AFTER_S', '0'],
   ])('refuses %s=%s at boot, naming the variable', (name, value) => {
-    expect(() => readPlansConfig({ [name]: value })).toThrow(new RegExp(`Invalid plans configuration:[\\s\\S]*${name}`));
+    expect(() => readPlansConfig({ [name]: value })).toThrow(
+      new RegExp(`Invalid plans configuration:[\\s\\S]*${name}`),
+    );
   });
 
   it('finds the worker file beside the package, from the sources as from the build', () => {

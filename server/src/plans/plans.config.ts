@@ -27,11 +27,21 @@ const count = (name: string, min: number) =>
     .min(min, { error: `${name} must be at least ${min}` });
 
 const plansEnvSchema = z.object({
-  PLAN_WORKER_THREADS: count('PLAN_WORKER_THREADS', 1).max(64, { error: 'PLAN_WORKER_THREADS may be at most 64' }).default(defaultPlanWorkerThreads),
-  PLAN_QUEUE_MAX: count('PLAN_QUEUE_MAX', 0).max(1000, { error: 'PLAN_QUEUE_MAX may be at most 1000' }).default(defaultPlanQueueMax),
-  PLAN_TIME_LIMIT_MS: count('PLAN_TIME_LIMIT_MS', 1).max(600_000, { error: 'PLAN_TIME_LIMIT_MS may be at most 600000' }).default(defaultPlanTimeLimitMs),
-  PLAN_STOP_GRACE_MS: count('PLAN_STOP_GRACE_MS', 0).max(600_000, { error: 'PLAN_STOP_GRACE_MS may be at most 600000' }).default(defaultPlanStopGraceMs),
-  PLAN_RETRY_AFTER_S: count('PLAN_RETRY_AFTER_S', 1).max(3600, { error: 'PLAN_RETRY_AFTER_S may be at most 3600' }).default(defaultPlanRetryAfterS),
+  PLAN_WORKER_THREADS: count('PLAN_WORKER_THREADS', 1)
+    .max(64, { error: 'PLAN_WORKER_THREADS may be at most 64' })
+    .default(defaultPlanWorkerThreads),
+  PLAN_QUEUE_MAX: count('PLAN_QUEUE_MAX', 0)
+    .max(1000, { error: 'PLAN_QUEUE_MAX may be at most 1000' })
+    .default(defaultPlanQueueMax),
+  PLAN_TIME_LIMIT_MS: count('PLAN_TIME_LIMIT_MS', 1)
+    .max(600_000, { error: 'PLAN_TIME_LIMIT_MS may be at most 600000' })
+    .default(defaultPlanTimeLimitMs),
+  PLAN_STOP_GRACE_MS: count('PLAN_STOP_GRACE_MS', 0)
+    .max(600_000, { error: 'PLAN_STOP_GRACE_MS may be at most 600000' })
+    .default(defaultPlanStopGraceMs),
+  PLAN_RETRY_AFTER_S: count('PLAN_RETRY_AFTER_S', 1)
+    .max(3600, { error: 'PLAN_RETRY_AFTER_S may be at most 3600' })
+    .default(defaultPlanRetryAfterS),
 });
 
 /** The `plans` configuration namespace: the solver's threads, queue and time limits. */

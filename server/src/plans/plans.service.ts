@@ -1,5 +1,12 @@
 import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
-import { type CheckResult, type KitSelection, type PlanRecord, type PlanRequest, type PlanSummary, PlanningInputError } from '@gramwatt/shared';
+import {
+  type CheckResult,
+  type KitSelection,
+  type PlanRecord,
+  type PlanRequest,
+  type PlanSummary,
+  PlanningInputError,
+} from '@gramwatt/shared';
 import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { CLOCK, type Clock } from '../common/clock';

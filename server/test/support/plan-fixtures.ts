@@ -9,7 +9,10 @@ import { type LockerItemRow, lockerItems } from '../../src/database/schema';
  * for the plan tests and the plans bench, never check values; every name is our own.
  */
 
-const socket = (connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc') => ({ connector, captiveCable: false });
+const socket = (connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc') => ({
+  connector,
+  captiveCable: false,
+});
 const cable = (connector: 'usb-a' | 'usb-c' | 'barrel-5.5x2.1') => ({ connector, captiveCable: true });
 
 /** The power gear: what the plan may pick from. */
@@ -17,17 +20,47 @@ export const planGear: readonly LockerItemInputRaw[] = [
   {
     name: 'Brackenfold 10 W panel',
     countOwned: 1,
-    spec: { kind: 'panel', panelType: 'usb', ratedW: 10, portVolts: 5, portMaxA: 2, dropoutIrradianceWm2: 60, tempCoeffPctPerC: -0.4, outputPort: socket('usb-a'), massG: 290 },
+    spec: {
+      kind: 'panel',
+      panelType: 'usb',
+      ratedW: 10,
+      portVolts: 5,
+      portMaxA: 2,
+      dropoutIrradianceWm2: 60,
+      tempCoeffPctPerC: -0.4,
+      outputPort: socket('usb-a'),
+      massG: 290,
+    },
   },
   {
     name: 'Wrenleaf 6 W panel',
     countOwned: 1,
-    spec: { kind: 'panel', panelType: 'usb', ratedW: 6, portVolts: 5, portMaxA: 1.2, dropoutIrradianceWm2: 80, tempCoeffPctPerC: -0.45, outputPort: socket('usb-a'), massG: 165 },
+    spec: {
+      kind: 'panel',
+      panelType: 'usb',
+      ratedW: 6,
+      portVolts: 5,
+      portMaxA: 1.2,
+      dropoutIrradianceWm2: 80,
+      tempCoeffPctPerC: -0.45,
+      outputPort: socket('usb-a'),
+      massG: 165,
+    },
   },
   {
     name: 'Harebell 21 W three-fold',
     countOwned: 1,
-    spec: { kind: 'panel', panelType: 'usb', ratedW: 21, portVolts: 5, portMaxA: 3, dropoutIrradianceWm2: 50, tempCoeffPctPerC: -0.38, outputPort: socket('usb-c'), massG: 520 },
+    spec: {
+      kind: 'panel',
+      panelType: 'usb',
+      ratedW: 21,
+      portVolts: 5,
+      portMaxA: 3,
+      dropoutIrradianceWm2: 50,
+      tempCoeffPctPerC: -0.38,
+      outputPort: socket('usb-c'),
+      massG: 520,
+    },
   },
   {
     name: 'Knoll 10 000 mAh bank',
@@ -83,17 +116,53 @@ export const planGear: readonly LockerItemInputRaw[] = [
   {
     name: 'Lift 5 V → 13.8 V boost cable',
     countOwned: 1,
-    spec: { kind: 'converter', converterType: 'boost', inputVolts: 5, outputVolts: 13.8, maxOutputA: 0.6, efficiency: 0.83, inputPort: cable('usb-a'), outputPort: cable('barrel-5.5x2.1'), massG: 45 },
+    spec: {
+      kind: 'converter',
+      converterType: 'boost',
+      inputVolts: 5,
+      outputVolts: 13.8,
+      maxOutputA: 0.6,
+      efficiency: 0.83,
+      inputPort: cable('usb-a'),
+      outputPort: cable('barrel-5.5x2.1'),
+      massG: 45,
+    },
   },
   {
     name: 'Lift PD 9 V → 12 V boost',
     countOwned: 1,
-    spec: { kind: 'converter', converterType: 'boost', inputVolts: 9, outputVolts: 12, maxOutputA: 1.25, efficiency: 0.88, inputPort: cable('usb-c'), outputPort: socket('barrel-5.5x2.1'), massG: 38 },
+    spec: {
+      kind: 'converter',
+      converterType: 'boost',
+      inputVolts: 9,
+      outputVolts: 12,
+      maxOutputA: 1.25,
+      efficiency: 0.88,
+      inputPort: cable('usb-c'),
+      outputPort: socket('barrel-5.5x2.1'),
+      massG: 38,
+    },
   },
-  { name: 'USB-A to USB-C lead, 30 cm', countOwned: 2, spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 } },
-  { name: 'USB-C to USB-C lead, 1 m', countOwned: 1, spec: { kind: 'lead', fromConnector: 'usb-c', toConnector: 'usb-c', lengthM: 1, massG: 28 } },
-  { name: 'USB-A to micro-USB lead, 30 cm', countOwned: 1, spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'micro-usb', lengthM: 0.3, massG: 14 } },
-  { name: 'Barrel to radio DC lead, 1 m', countOwned: 1, spec: { kind: 'lead', fromConnector: 'barrel-5.5x2.1', toConnector: 'radio-dc', lengthM: 1, massG: 45 } },
+  {
+    name: 'USB-A to USB-C lead, 30 cm',
+    countOwned: 2,
+    spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'usb-c', lengthM: 0.3, massG: 15 },
+  },
+  {
+    name: 'USB-C to USB-C lead, 1 m',
+    countOwned: 1,
+    spec: { kind: 'lead', fromConnector: 'usb-c', toConnector: 'usb-c', lengthM: 1, massG: 28 },
+  },
+  {
+    name: 'USB-A to micro-USB lead, 30 cm',
+    countOwned: 1,
+    spec: { kind: 'lead', fromConnector: 'usb-a', toConnector: 'micro-usb', lengthM: 0.3, massG: 14 },
+  },
+  {
+    name: 'Barrel to radio DC lead, 1 m',
+    countOwned: 1,
+    spec: { kind: 'lead', fromConnector: 'barrel-5.5x2.1', toConnector: 'radio-dc', lengthM: 1, massG: 45 },
+  },
 ];
 
 /** The devices, each with the trip's change to its use profile (or none). */
@@ -199,13 +268,25 @@ export function planTripBody(overrides: Record<string, unknown> = {}): Record<st
 }
 
 /** Inserts locker items for `ownerId` (as the seed does), validated by the locker schema. */
-export async function insertLockerItems(db: Database, ownerId: string, items: readonly LockerItemInputRaw[]): Promise<LockerItemRow[]> {
+export async function insertLockerItems(
+  db: Database,
+  ownerId: string,
+  items: readonly LockerItemInputRaw[],
+): Promise<LockerItemRow[]> {
   const rows: LockerItemRow[] = [];
   for (const raw of items) {
     const item = lockerItemInputSchema.parse(raw);
     const [row] = await db
       .insert(lockerItems)
-      .values({ ownerId, kind: item.spec.kind, name: item.name, notes: item.notes, spec: item.spec, countOwned: item.countOwned, massG: Math.round(item.spec.massG ?? 0) })
+      .values({
+        ownerId,
+        kind: item.spec.kind,
+        name: item.name,
+        notes: item.notes,
+        spec: item.spec,
+        countOwned: item.countOwned,
+        massG: Math.round(item.spec.massG ?? 0),
+      })
       .returning();
     if (!row) throw new Error('insert returned no row');
     rows.push(row);
@@ -215,4 +296,3 @@ export async function insertLockerItems(db: Database, ownerId: string, items: re
 
 /** The held worker (see `held-plan-solver.worker.mjs`): every task holds its thread 2 s, then solves. */
 export const heldPlanWorkerFile = resolve(__dirname, 'held-plan-solver.worker.mjs');
-

@@ -4,11 +4,7 @@ import { type LockerItemInput, lockerItemInputSchema } from '../schemas/locker.j
 import { bankSpecSchema, converterSpecSchema, leadSpecSchema, usbPanelSpecSchema } from '../schemas/items.js';
 import { deviceSpecSchema } from '../schemas/devices.js';
 import type { ItemSpec } from '../schemas/kit.js';
-import {
-  batterySpecSchema,
-  controllerSpecSchema,
-  twelveVoltPanelSpecSchema,
-} from '../schemas/station-items.js';
+import { batterySpecSchema, controllerSpecSchema, twelveVoltPanelSpecSchema } from '../schemas/station-items.js';
 import {
   bankArb,
   batteryArb,
@@ -407,7 +403,11 @@ describe('readLockerCsv: files that are refused (nothing is accepted)', () => {
     );
     expect(result.report).toEqual([
       { row: 2, column: 'port_volts', message: 'port_volts is for panel_type usb, not 12v; leave it empty' },
-      { row: 3, column: 'open_circuit_volts', message: 'open_circuit_volts is for panel_type 12v, not usb; leave it empty' },
+      {
+        row: 3,
+        column: 'open_circuit_volts',
+        message: 'open_circuit_volts is for panel_type 12v, not usb; leave it empty',
+      },
       { row: 4, column: 'panel_type', message: 'Panel type must be usb or 12v' },
     ]);
   });

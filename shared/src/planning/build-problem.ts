@@ -1,7 +1,18 @@
 import { lithiumMinChargeTemperatureC } from '../constants/electrical.js';
 import { deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
 import { panelPowerSeries } from '../harvest/panel-series.js';
-import type { DominanceAttribute, HarvestGroup, KitCandidate, KitCounts, KitJudge, OptimisationProblem, PanelCoefficients, PathAlternative, PathNeed, StoreCoefficients } from '../optimisation/types.js';
+import type {
+  DominanceAttribute,
+  HarvestGroup,
+  KitCandidate,
+  KitCounts,
+  KitJudge,
+  OptimisationProblem,
+  PanelCoefficients,
+  PathAlternative,
+  PathNeed,
+  StoreCoefficients,
+} from '../optimisation/types.js';
 import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { KitEntry } from '../schemas/kit.js';
 import { chargePaths, joinPorts, type KitConverter, type KitLead } from '../simulation/connections.js';
@@ -31,7 +42,8 @@ export interface PlanningContext {
 
 type Grid = number[][];
 
-const gridOf = (skies: number, width: number): Grid => Array.from({ length: skies }, () => new Array<number>(width).fill(0));
+const gridOf = (skies: number, width: number): Grid =>
+  Array.from({ length: skies }, () => new Array<number>(width).fill(0));
 
 /** Same connectors and everything else that has no "better" direction: only such items are compared by dominance. */
 const signature = (spec: object, omit: readonly string[]): DominanceAttribute => ({
@@ -59,9 +71,16 @@ const signature = (spec: object, omit: readonly string[]): DominanceAttribute =>
  * this one may share — the gram prices change only demand or the reserve.
  * @example planningContext(input).problem.candidates.length // input.gear.length
  */
-export function planningContext(input: PlanningInput, solarOptions: TripSolarOptions = {}, reuse?: PlanningContext): PlanningContext {
+export function planningContext(
+  input: PlanningInput,
+  solarOptions: TripSolarOptions = {},
+  reuse?: PlanningContext,
+): PlanningContext {
   // A context for the same trip's sun (a changed demand or reserve) shares its sun series and panels' power.
-  const sameSun = reuse !== undefined && reuse.input.solarInput === input.solarInput && (reuse.solarOptions.extraCloudyRunDays ?? 0) === (solarOptions.extraCloudyRunDays ?? 0);
+  const sameSun =
+    reuse !== undefined &&
+    reuse.input.solarInput === input.solarInput &&
+    (reuse.solarOptions.extraCloudyRunDays ?? 0) === (solarOptions.extraCloudyRunDays ?? 0);
   const solar = sameSun ? reuse.solar : computeTripSolar(input.solarInput, solarOptions);
   const gearById = new Map(input.gear.map((g) => [g.itemId, g]));
   const owned = input.gear.filter((g) => g.countOwned > 0);
@@ -90,8 +109,12 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
   };
 
   const banks = owned.filter((g): g is PlanningGear & { spec: BankSpec } => g.spec.kind === 'bank');
-  const leads: KitLead[] = owned.flatMap((g) => (g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec as LeadSpec }] : []));
-  const converters: KitConverter[] = owned.flatMap((g) => (g.spec.kind === 'converter' ? [{ itemId: g.itemId, spec: g.spec as ConverterSpec }] : []));
+  const leads: KitLead[] = owned.flatMap((g) =>
+    g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec as LeadSpec }] : [],
+  );
+  const converters: KitConverter[] = owned.flatMap((g) =>
+    g.spec.kind === 'converter' ? [{ itemId: g.itemId, spec: g.spec as ConverterSpec }] : [],
+  );
 
   // Panels.
   const panelSeriesCache = new Map<string, Float64Array[]>();
@@ -104,12 +127,18 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     const spec = g.spec as UsbPanelSpec;
     const directBanks = banks.filter((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
     // Leads count even when some bank takes the plug directly: another bank (the one the optimum needs) may not.
-    const viaLeads = directBanks.length === banks.length ? [] : leads.filter((l) => banks.some((b) => {
-            const hop = joinPorts(spec.outputPort, b.spec.inputPort, [l]);
-            return hop.joined && hop.leadItemId === l.itemId;
-          }));
+    const viaLeads =
+      directBanks.length === banks.length
+        ? []
+        : leads.filter((l) =>
+            banks.some((b) => {
+              const hop = joinPorts(spec.outputPort, b.spec.inputPort, [l]);
+              return hop.joined && hop.leadItemId === l.itemId;
+            }),
+          );
     if (directBanks.length === 0 && viaLeads.length === 0) continue;
-    const known = sameSun && reuse.gearById.get(g.itemId)?.spec === g.spec ? reuse.panelSeriesCache.get(g.itemId) : undefined;
+    const known =
+      sameSun && reuse.gearById.get(g.itemId)?.spec === g.spec ? reuse.panelSeriesCache.get(g.itemId) : undefined;
     const series = known ? [...known] : panelPowerSeries(spec, solar);
     panelSeriesCache.set(g.itemId, series);
     const byStep = gridOf(skyCount, stepCount);
@@ -124,11 +153,18 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     if (viaLeads.length > 0) {
       // Harvest needs a bank the plug fits or a lead that joins it to some bank (looser than bank-and-lead pairs: a
       // relaxation, and it keeps such leads in the model).
-      const requiresAnyOf = [...directBanks.map((b) => b.itemId), ...viaLeads.map((l) => l.itemId)].sort().map((id) => ({ itemIds: [id] }));
+      const requiresAnyOf = [...directBanks.map((b) => b.itemId), ...viaLeads.map((l) => l.itemId)]
+        .sort()
+        .map((id) => ({ itemIds: [id] }));
       groupId = `reach:${requiresAnyOf.map((a) => a.itemIds[0]).join('|')}`;
       if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf });
     }
-    panels.push({ itemId: g.itemId, harvestWh: byStep.map(perDay), harvestWhByStep: byStep, ...(groupId ? { groupId } : {}) });
+    panels.push({
+      itemId: g.itemId,
+      harvestWh: byStep.map(perDay),
+      harvestWhByStep: byStep,
+      ...(groupId ? { groupId } : {}),
+    });
   }
 
   // Stores.
@@ -145,17 +181,29 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
         }
       }
     }
-    return { itemId: b.itemId, usableWh: bankUsableWh(b.spec), chargeEfficiency: b.spec.chargeEfficiency, acceptWh: daily, acceptWhByStep: byStep };
+    return {
+      itemId: b.itemId,
+      usableWh: bankUsableWh(b.spec),
+      chargeEfficiency: b.spec.chargeEfficiency,
+      acceptWh: daily,
+      acceptWhByStep: byStep,
+    };
   });
 
   // Devices: paths and demand.
   const tripHours = steps.reduce((h, s) => h + s.durationH, 0);
   const hoursBefore: number[] = [0];
   steps.forEach((s, i) => hoursBefore.push((hoursBefore[i] ?? 0) + s.durationH));
-  const hoursByDayEnd = Array.from({ length: dayCount }, (_, t) => hoursBefore[dayFirstStep[t + 1] ?? stepCount] ?? tripHours);
+  const hoursByDayEnd = Array.from(
+    { length: dayCount },
+    (_, t) => hoursBefore[dayFirstStep[t + 1] ?? stepCount] ?? tripHours,
+  );
   // No top-up happens between a day's end and the next day's first camp step, so by the day's end a device must
   // already hold what it uses until then: the least draw counts the use up to the next top-up.
-  const hoursToNextTopUp = Array.from({ length: dayCount }, (_, t) => hoursBefore[t + 1 < dayCount ? (firstTopUpStep[t + 1] ?? stepCount) : stepCount] ?? tripHours);
+  const hoursToNextTopUp = Array.from(
+    { length: dayCount },
+    (_, t) => hoursBefore[t + 1 < dayCount ? (firstTopUpStep[t + 1] ?? stepCount) : stepCount] ?? tripHours,
+  );
   const needs: PathNeed[] = [];
   const leastCum = new Array<number>(dayCount).fill(0);
   const mostCum = new Array<number>(dayCount).fill(0);
@@ -169,10 +217,23 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     // the converter with a lead out of it. Banks with the same output ports have the same paths: found once.
     const hopPorts = banks.flatMap((b) => b.spec.outputPorts.map((p) => p.connector));
     const fits = (l: KitLead, from: readonly string[], to: readonly string[]): boolean =>
-      (from.includes(l.spec.fromConnector) && to.includes(l.spec.toConnector)) || (from.includes(l.spec.toConnector) && to.includes(l.spec.fromConnector));
+      (from.includes(l.spec.fromConnector) && to.includes(l.spec.toConnector)) ||
+      (from.includes(l.spec.toConnector) && to.includes(l.spec.fromConnector));
     const twelveVolt = d.spec.chargesVia === '12v-dc';
-    const intoDevice = leads.filter((l) => fits(l, twelveVolt ? converters.map((c) => c.spec.outputPort.connector) : hopPorts, [d.spec.chargePort.connector]));
-    const intoConverter = twelveVolt ? leads.filter((l) => fits(l, hopPorts, converters.map((c) => c.spec.inputPort.connector))) : [];
+    const intoDevice = leads.filter((l) =>
+      fits(l, twelveVolt ? converters.map((c) => c.spec.outputPort.connector) : hopPorts, [
+        d.spec.chargePort.connector,
+      ]),
+    );
+    const intoConverter = twelveVolt
+      ? leads.filter((l) =>
+          fits(
+            l,
+            hopPorts,
+            converters.map((c) => c.spec.inputPort.connector),
+          ),
+        )
+      : [];
     const leadSets: KitLead[][] = [[], ...[...new Set([...intoDevice, ...intoConverter])].map((l) => [l])];
     for (const a of intoConverter) for (const b of intoDevice) if (a !== b) leadSets.push([a, b]);
     const converterSets: KitConverter[][] = twelveVolt ? converters.map((c) => [c]) : [[]];
@@ -184,15 +245,19 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     for (const sameBanks of banksByPorts.values()) {
       for (const cs of converterSets) {
         for (const ls of leadSets) {
-          for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls).paths) {
-            const tail = [...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds])].sort();
+          for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls)
+            .paths) {
+            const tail = [
+              ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
+            ].sort();
             tails.set(tail.join('|'), tail);
             for (const bank of sameBanks) {
               banksWithPath.add(bank.itemId);
               const itemIds = [bank.itemId, ...tail].sort();
               const key = itemIds.join('|');
               const known = alternatives.get(key);
-              if (!known || known.efficiency < path.pathEfficiency) alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+              if (!known || known.efficiency < path.pathEfficiency)
+                alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
             }
           }
         }
@@ -203,12 +268,22 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
     // The need is split in two (a relaxation of "some bank with some tail that fits it", which keeps the model small:
     // banks × tails alternatives grow into the hundreds): some tail, and some bank that starts a path. The judge rejects
     // a kit whose bank and tail do not fit together. A tail holding another tail is left out (it adds nothing).
-    const minimalTails = [...tails.values()].filter((t) => ![...tails.values()].some((o) => o.length < t.length && o.every((id) => t.includes(id))));
+    const minimalTails = [...tails.values()].filter(
+      (t) => ![...tails.values()].some((o) => o.length < t.length && o.every((id) => t.includes(id))),
+    );
     if (list.length === 0 || !minimalTails.some((t) => t.length === 0)) {
-      needs.push({ needId: d.deviceId, label, alternatives: minimalTails.map((t): PathAlternative => ({ itemIds: t, pathId: t.join(' + ') })) });
+      needs.push({
+        needId: d.deviceId,
+        label,
+        alternatives: minimalTails.map((t): PathAlternative => ({ itemIds: t, pathId: t.join(' + ') })),
+      });
     }
     if (list.length > 0 && banksWithPath.size < banks.length) {
-      needs.push({ needId: `${d.deviceId}:store`, label, alternatives: [...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })) });
+      needs.push({
+        needId: `${d.deviceId}:store`,
+        label,
+        alternatives: [...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })),
+      });
     }
     if (list.length === 0) continue;
     const best = Math.max(...list.map((a) => a.efficiency));
@@ -221,7 +296,8 @@ export function planningContext(input: PlanningInput, solarOptions: TripSolarOpt
       mostCum[t] = (mostCum[t] ?? 0) + usedWh / (d.spec.chargeEfficiency * worst);
     });
   }
-  const daily = (cum: readonly number[]): Grid => Array.from({ length: skyCount }, () => cum.map((v, t) => Math.max(0, v - (t > 0 ? (cum[t - 1] ?? 0) : 0))));
+  const daily = (cum: readonly number[]): Grid =>
+    Array.from({ length: skyCount }, () => cum.map((v, t) => Math.max(0, v - (t > 0 ? (cum[t - 1] ?? 0) : 0))));
 
   const candidates: KitCandidate[] = input.gear.map((g) => ({
     itemId: g.itemId,
@@ -281,7 +357,15 @@ function dominanceOf(g: PlanningGear): DominanceAttribute[] {
       return [signature({ port: spec.outputPort }, [])];
     case 'bank':
       return [
-        signature(spec, ['massG', 'capacityMah', 'capacityWh', 'cellVolts', 'inputMaxW', 'chargeEfficiency', 'outputEfficiency']),
+        signature(spec, [
+          'massG',
+          'capacityMah',
+          'capacityWh',
+          'cellVolts',
+          'inputMaxW',
+          'chargeEfficiency',
+          'outputEfficiency',
+        ]),
         { name: 'usableWh', value: bankUsableWh(spec), better: 'higher' },
         { name: 'inputMaxW', value: spec.inputMaxW, better: 'higher' },
         { name: 'chargeEfficiency', value: spec.chargeEfficiency, better: 'higher' },

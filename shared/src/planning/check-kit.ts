@@ -16,7 +16,8 @@ export function checkKit(input: PlanningInput, selection: KitSelection): CheckRe
   selection.forEach((line, i) => {
     const g = gearById.get(line.itemId);
     if (!g) throw new PlanningInputError(`kit.${i}.itemId`, 'This item is not among the gear for this trip');
-    if (line.count > g.countOwned) throw new PlanningInputError(`kit.${i}.count`, `Only ${g.countOwned} of ${g.name} owned`);
+    if (line.count > g.countOwned)
+      throw new PlanningInputError(`kit.${i}.count`, `Only ${g.countOwned} of ${g.name} owned`);
   });
   const context = planningContext(input);
   const counts = new Map(selection.map((l) => [l.itemId, l.count]));

@@ -17,7 +17,9 @@ export function planKit(context: PlanningContext, counts: KitCounts): PlanKit {
       const g = context.gearById.get(itemId);
       return g ? [{ itemId, name: g.name, kind: g.spec.kind, count, unitMassG: g.massG, massG: g.massG * count }] : [];
     })
-    .sort((a, b) => kindOrder(a.kind) - kindOrder(b.kind) || a.name.localeCompare(b.name) || (a.itemId < b.itemId ? -1 : 1));
+    .sort(
+      (a, b) => kindOrder(a.kind) - kindOrder(b.kind) || a.name.localeCompare(b.name) || (a.itemId < b.itemId ? -1 : 1),
+    );
   const massG = lines.reduce((sum, l) => sum + l.massG, 0);
   const limit = context.input.gramLimitG;
   return { lines, massG, gramLimitG: limit, overLimitG: limit !== null && massG > limit ? massG - limit : null };
@@ -29,14 +31,24 @@ function kindOrder(kind: string): number {
 
 /** The design sky the verdict turns on: the one that runs dry (earliest), else the one with the least margin. */
 function bindingSky(simulation: KitSimulation): SkySimulation {
-  const dry = simulation.skies.filter((s) => s.dry).sort((a, b) => (a.dry?.stepIndex ?? 0) - (b.dry?.stepIndex ?? 0))[0];
+  const dry = simulation.skies
+    .filter((s) => s.dry)
+    .sort((a, b) => (a.dry?.stepIndex ?? 0) - (b.dry?.stepIndex ?? 0))[0];
   if (dry) return dry;
   return [...simulation.skies].sort((a, b) => a.worstMarginShare - b.worstMarginShare)[0] as SkySimulation;
 }
 
 function verdictOf(simulation: KitSimulation): PlanVerdict {
   const v = simulation.verdict;
-  if (v.status === 'runs-dry') return { status: v.status, text: v.text, dayIndex: v.dayIndex, deviceId: v.deviceId, worstMarginShare: null, wouldRunDryOnDayIndex: null };
+  if (v.status === 'runs-dry')
+    return {
+      status: v.status,
+      text: v.text,
+      dayIndex: v.dayIndex,
+      deviceId: v.deviceId,
+      worstMarginShare: null,
+      wouldRunDryOnDayIndex: null,
+    };
   return {
     status: v.status,
     text: v.text,
@@ -66,7 +78,13 @@ export function evaluateKit(context: PlanningContext, counts: KitCounts): KitEva
   const dryDay = binding.dry?.dayIndex ?? Infinity;
   const dayStrip = solar.days.map((day) => {
     const storedEndWh = binding.storedWhByStep[lastStepOfDay.get(day.dayIndex) ?? 0] ?? 0;
-    return { dayIndex: day.dayIndex, date: day.dateLocal, storedEndWh, storedEndShare: totalWh > 0 ? Math.min(1, Math.max(0, storedEndWh / totalWh)) : 0, dry: day.dayIndex >= dryDay };
+    return {
+      dayIndex: day.dayIndex,
+      date: day.dateLocal,
+      storedEndWh,
+      storedEndShare: totalWh > 0 ? Math.min(1, Math.max(0, storedEndWh / totalWh)) : 0,
+      dry: day.dayIndex >= dryDay,
+    };
   });
   const skiesShown = binding.skyId === expected.skyId ? [expected] : [binding, expected];
   const names = (id: string): string => {
@@ -78,7 +96,12 @@ export function evaluateKit(context: PlanningContext, counts: KitCounts): KitEva
     date: solar.days[dayIndex]?.dateLocal ?? '',
     points: solar.steps
       .filter((s) => s.dayIndex === dayIndex)
-      .map((s) => ({ t: iso(s.startUtcMs), localTime: s.localTime, altitudeDeg: s.sunAltitudeDeg, azimuthDeg: s.sunAzimuthDeg })),
+      .map((s) => ({
+        t: iso(s.startUtcMs),
+        localTime: s.localTime,
+        altitudeDeg: s.sunAltitudeDeg,
+        azimuthDeg: s.sunAzimuthDeg,
+      })),
   });
   const lastDay = solar.days.length - 1;
   return {
@@ -88,9 +111,17 @@ export function evaluateKit(context: PlanningContext, counts: KitCounts): KitEva
     ledgers: skiesShown.map((s) => ({ skyId: s.skyId, days: s.ledger })),
     storedSeries: skiesShown.map((s) => ({
       skyId: s.skyId,
-      points: solar.steps.map((step, i) => ({ t: iso(step.startUtcMs + step.durationH * 3_600_000), storedWh: s.storedWhByStep[i] ?? 0 })),
+      points: solar.steps.map((step, i) => ({
+        t: iso(step.startUtcMs + step.durationH * 3_600_000),
+        storedWh: s.storedWhByStep[i] ?? 0,
+      })),
     })),
-    dailyBalance: expected.ledger.map((d) => ({ dayIndex: d.dayIndex, date: solar.days[d.dayIndex]?.dateLocal ?? '', harvestWh: d.harvestWh, demandWh: d.deliveredWh + d.unmetWh })),
+    dailyBalance: expected.ledger.map((d) => ({
+      dayIndex: d.dayIndex,
+      date: solar.days[d.dayIndex]?.dateLocal ?? '',
+      harvestWh: d.harvestWh,
+      demandWh: d.deliveredWh + d.unmetWh,
+    })),
     sunPaths: lastDay > 0 ? [sunPath(0), sunPath(lastDay)] : [sunPath(0)],
     schedule: simulation.schedule.map((s) => ({
       kind: s.kind,
@@ -106,7 +137,9 @@ export function evaluateKit(context: PlanningContext, counts: KitCounts): KitEva
       end: iso(s.endUtcMs),
       energyWh: s.energyWh,
     })),
-    cautions: kitCautions({ kit: context.kitEntries(counts), devices: context.input.devices, solar, simulation }).map((c) => ({ id: c.id, severity: c.severity, text: c.text })),
+    cautions: kitCautions({ kit: context.kitEntries(counts), devices: context.input.devices, solar, simulation }).map(
+      (c) => ({ id: c.id, severity: c.severity, text: c.text }),
+    ),
     unusedItemIds: simulation.unusedItemIds,
     massG: planKit(context, counts).massG,
     storageWh,

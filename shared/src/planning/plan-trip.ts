@@ -29,13 +29,22 @@ export interface PlanOptions {
    * Picks the kit in place of the optimiser's lightest (the party's solver does), given the context and the search the
    * swaps go on with. Default: `optimiseKit`.
    */
-  chooseKit?: (context: PlanningContext, search: KitSearch, options: { now: () => number; timeBudgetMs?: number }) => OptimiseAnswer;
+  chooseKit?: (
+    context: PlanningContext,
+    search: KitSearch,
+    options: { now: () => number; timeBudgetMs?: number },
+  ) => OptimiseAnswer;
 }
 
 const stillClock = (): number => 0;
 
 /** The plan's answer in one sentence. */
-function headline(answer: OptimiseAnswer, kit: PlanKit | null, verdictText: string | null, missingText: string): string {
+function headline(
+  answer: OptimiseAnswer,
+  kit: PlanKit | null,
+  verdictText: string | null,
+  missingText: string,
+): string {
   switch (answer.status) {
     case 'optimal':
       return `The lightest kit that works weighs ${gramsText(kit?.massG ?? 0)}. ${verdictText ?? ''}`.trim();
@@ -55,7 +64,13 @@ function withDeviceNames(context: PlanningContext, text: string): string {
   return out;
 }
 
-function swapText(context: PlanningContext, extraG: number, added: { name: string; count: number }[], removed: { name: string; count: number }[], buys: string[]): string {
+function swapText(
+  context: PlanningContext,
+  extraG: number,
+  added: { name: string; count: number }[],
+  removed: { name: string; count: number }[],
+  buys: string[],
+): string {
   const parts: string[] = [];
   if (added.length) parts.push(`adds ${listText(added.map((a) => countedName(a.name, a.count)))}`);
   if (removed.length) parts.push(`leaves ${listText(removed.map((r) => countedName(r.name, r.count)))} at home`);
@@ -72,10 +87,19 @@ interface Requirement {
   changed: (n: number) => { input: PlanningInput; solarOptions?: TripSolarOptions };
 }
 
-function withRadioProfiles(input: PlanningInput, bump: (p: Extract<DeviceSpec['useProfile'], { basis: 'radio-hours' }>) => Extract<DeviceSpec['useProfile'], { basis: 'radio-hours' }>): PlanningInput {
+function withRadioProfiles(
+  input: PlanningInput,
+  bump: (
+    p: Extract<DeviceSpec['useProfile'], { basis: 'radio-hours' }>,
+  ) => Extract<DeviceSpec['useProfile'], { basis: 'radio-hours' }>,
+): PlanningInput {
   return {
     ...input,
-    devices: input.devices.map((d) => (d.spec.useProfile.basis === 'radio-hours' ? { ...d, spec: { ...d.spec, useProfile: bump(d.spec.useProfile) } } : d)),
+    devices: input.devices.map((d) =>
+      d.spec.useProfile.basis === 'radio-hours'
+        ? { ...d, spec: { ...d.spec, useProfile: bump(d.spec.useProfile) } }
+        : d,
+    ),
   };
 }
 
@@ -88,13 +112,17 @@ function requirements(context: PlanningContext): Requirement[] {
       requirement: 'transmit-minutes',
       change: '10 more transmit minutes a day',
       unit: (n) => `${n * 10} more minutes`,
-      changed: (n) => ({ input: withRadioProfiles(input, (p) => ({ ...p, transmitMinutesPerDay: p.transmitMinutesPerDay + 10 * n })) }),
+      changed: (n) => ({
+        input: withRadioProfiles(input, (p) => ({ ...p, transmitMinutesPerDay: p.transmitMinutesPerDay + 10 * n })),
+      }),
     });
     list.push({
       requirement: 'receive-hours',
       change: '1 more receive hour a day',
       unit: (n) => `${n} more hour${n === 1 ? '' : 's'}`,
-      changed: (n) => ({ input: withRadioProfiles(input, (p) => ({ ...p, receiveHoursPerDay: Math.min(24, p.receiveHoursPerDay + n) })) }),
+      changed: (n) => ({
+        input: withRadioProfiles(input, (p) => ({ ...p, receiveHoursPerDay: Math.min(24, p.receiveHoursPerDay + n) })),
+      }),
     });
   }
   if (context.solar.cloudyRunDays < context.solar.days.length) {
@@ -116,7 +144,12 @@ function requirements(context: PlanningContext): Requirement[] {
   return list;
 }
 
-function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requirement, options: KitSearchOptions): PlanGramPrice {
+function priceOf(
+  context: PlanningContext,
+  base: OptimiseAnswer,
+  req: Requirement,
+  options: KitSearchOptions,
+): PlanGramPrice {
   const one = req.changed(1);
   const changed = planningContext(one.input, one.solarOptions, context);
   const price = gramPrice(base, changed.problem, changed.judge, options);
@@ -130,7 +163,14 @@ function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requiremen
       };
       const free = freeSteps(judgeFor, kit, maxFreeSteps);
       const upTo = free >= maxFreeSteps ? `at least ${req.unit(free)}` : req.unit(free);
-      return { requirement: req.requirement, change: req.change, kind: 'free', extraG: 0, freeUpTo: upTo, text: `${cap(req.change)}: free — this kit has room for ${upTo}.` };
+      return {
+        requirement: req.requirement,
+        change: req.change,
+        kind: 'free',
+        extraG: 0,
+        freeUpTo: upTo,
+        text: `${cap(req.change)}: free — this kit has room for ${upTo}.`,
+      };
     }
     case 'grams':
       return {
@@ -142,28 +182,52 @@ function priceOf(context: PlanningContext, base: OptimiseAnswer, req: Requiremen
         text: `${cap(req.change)} cost ${gramsText(price.extraG)}${price.approximate ? ' (about)' : ''}.`,
       };
     case 'nothing-feasible':
-      return { requirement: req.requirement, change: req.change, kind: 'nothing-feasible', extraG: null, freeUpTo: null, text: `${cap(req.change)}: no kit from this gear would keep up.` };
+      return {
+        requirement: req.requirement,
+        change: req.change,
+        kind: 'nothing-feasible',
+        extraG: null,
+        freeUpTo: null,
+        text: `${cap(req.change)}: no kit from this gear would keep up.`,
+      };
     case 'unknown':
-      return { requirement: req.requirement, change: req.change, kind: 'unknown', extraG: null, freeUpTo: null, text: price.note };
+      return {
+        requirement: req.requirement,
+        change: req.change,
+        kind: 'unknown',
+        extraG: null,
+        freeUpTo: null,
+        text: price.note,
+      };
   }
 }
 
 /** Plain sentences for what is missing when nothing is feasible, from the simulation of the whole locker. */
-function missingSentences(context: PlanningContext, answer: Extract<OptimiseAnswer, { status: 'nothing-feasible' }>, locker: KitCounts): { missing: string[]; runsDry: { dayIndex: number; deviceId: string; skyId: string } | null } {
+function missingSentences(
+  context: PlanningContext,
+  answer: Extract<OptimiseAnswer, { status: 'nothing-feasible' }>,
+  locker: KitCounts,
+): { missing: string[]; runsDry: { dayIndex: number; deviceId: string; skyId: string } | null } {
   const simulation = context.simulate(locker);
   const name = (id: string): string => context.input.deviceNames?.[id] ?? id;
   const missing: string[] = [];
   for (const d of simulation.devices) {
-    if (d.missing.length > 0) missing.push(`Nothing in this gear can charge ${name(d.deviceId)}: it needs ${listText(d.missing.map((m) => m.text))}.`);
+    if (d.missing.length > 0)
+      missing.push(
+        `Nothing in this gear can charge ${name(d.deviceId)}: it needs ${listText(d.missing.map((m) => m.text))}.`,
+      );
   }
   for (const p of answer.missingPaths) {
-    if (!simulation.devices.some((d) => d.deviceId === p.needId && d.missing.length > 0)) missing.push(`No charging path reaches ${p.label ?? name(p.needId)}.`);
+    if (!simulation.devices.some((d) => d.deviceId === p.needId && d.missing.length > 0))
+      missing.push(`No charging path reaches ${p.label ?? name(p.needId)}.`);
   }
   const v = simulation.verdict;
   const runsDry = v.status === 'runs-dry' ? { dayIndex: v.dayIndex, deviceId: v.deviceId, skyId: v.skyId } : null;
   // Which device runs dry first, unless a sentence above already says it cannot be charged at all.
   if (runsDry && !simulation.devices.some((d) => d.deviceId === runsDry.deviceId && d.missing.length > 0))
-    missing.push(`With all this gear packed, ${name(runsDry.deviceId)} runs dry on ${dayLabel(runsDry.dayIndex)} in ${skyName(runsDry.skyId)}.`);
+    missing.push(
+      `With all this gear packed, ${name(runsDry.deviceId)} runs dry on ${dayLabel(runsDry.dayIndex)} in ${skyName(runsDry.skyId)}.`,
+    );
   // One sentence per shortfall, naming every sky it holds in (with no panel, every sky is short alike).
   const skyCount = context.solar.skies.length;
   const bySize = new Map<string, { dayIndex: number; shortWh: number; skyIds: string[] }>();
@@ -175,7 +239,9 @@ function missingSentences(context: PlanningContext, answer: Extract<OptimiseAnsw
   }
   for (const s of bySize.values()) {
     const skies = s.skyIds.length === skyCount && skyCount > 1 ? 'every design sky' : listText(s.skyIds.map(skyName));
-    missing.push(`Even with all this gear packed, the stores run ${s.shortWh.toFixed(1)} Wh short on ${dayLabel(s.dayIndex)} in ${skies}.`);
+    missing.push(
+      `Even with all this gear packed, the stores run ${s.shortWh.toFixed(1)} Wh short on ${dayLabel(s.dayIndex)} in ${skies}.`,
+    );
   }
   return { missing, runsDry };
 }
@@ -191,7 +257,8 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   const now = options.now ?? stillClock;
   const startMs = now();
   const deadline = options.timeBudgetMs === undefined ? Infinity : startMs + options.timeBudgetMs;
-  const left = (): { timeBudgetMs?: number } => (deadline === Infinity ? {} : { timeBudgetMs: Math.max(1, deadline - now()) });
+  const left = (): { timeBudgetMs?: number } =>
+    deadline === Infinity ? {} : { timeBudgetMs: Math.max(1, deadline - now()) };
   const context = planningContext(input);
   const search = createKitSearch(context.problem, context.judge, { now, ...left() });
   const answer = options.chooseKit
@@ -226,7 +293,8 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   const swaps: PlanSwap[] = [];
   const gramPrices: PlanGramPrice[] = [];
   if (options.withExtras !== false) {
-    const named = (lines: { itemId: string; count: number }[]) => lines.map((l) => ({ ...l, name: context.gearById.get(l.itemId)?.name ?? l.itemId }));
+    const named = (lines: { itemId: string; count: number }[]) =>
+      lines.map((l) => ({ ...l, name: context.gearById.get(l.itemId)?.name ?? l.itemId }));
     for (const swap of findSwaps(context.problem, context.judge, answer.kit, { now, ...left() }, search)) {
       const added = named(swap.added);
       const removed = named(swap.removed);
@@ -237,7 +305,11 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
         removed,
         buys: swap.buys,
         worstMarginShare: swap.kit.verdict.margin ?? null,
-        text: swapText(context, swap.extraG, added, removed, swap.buys) + (swap.kit.verdict.margin !== undefined ? ` ${percentText(swap.kit.verdict.margin)} to spare on the worst day.` : ''),
+        text:
+          swapText(context, swap.extraG, added, removed, swap.buys) +
+          (swap.kit.verdict.margin !== undefined
+            ? ` ${percentText(swap.kit.verdict.margin)} to spare on the worst day.`
+            : ''),
       });
     }
     for (const req of requirements(context)) {
@@ -247,7 +319,12 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
       }
       // A price needs only the grams of the raised optimum, not which of equal kits has the most margin; and the kits the
       // trip's own search rejected fail every raised requirement too.
-      const priceOptions: KitSearchOptions = { now, ...left(), tieBreakByMargin: false, knownRejected: [...search.rejectedKits] };
+      const priceOptions: KitSearchOptions = {
+        now,
+        ...left(),
+        tieBreakByMargin: false,
+        knownRejected: [...search.rejectedKits],
+      };
       gramPrices.push(priceOf(context, answer, req, priceOptions));
     }
   }

@@ -9,7 +9,15 @@ import { batterySpecSchema, controllerSpecSchema } from './station-items.js';
  */
 export const itemSpecSchema = z.discriminatedUnion(
   'kind',
-  [panelSpecSchema, bankSpecSchema, batterySpecSchema, converterSpecSchema, controllerSpecSchema, leadSpecSchema, deviceSpecSchema],
+  [
+    panelSpecSchema,
+    bankSpecSchema,
+    batterySpecSchema,
+    converterSpecSchema,
+    controllerSpecSchema,
+    leadSpecSchema,
+    deviceSpecSchema,
+  ],
   { error: 'Item kind must be panel, bank, battery, converter, controller, lead or device' },
 );
 export type ItemSpec = z.infer<typeof itemSpecSchema>;

@@ -45,7 +45,8 @@ const extrapolationHorizonDays = 2 * (maxTripNights + 1);
  */
 export function wouldRunDryText(wouldRunDryOnDayIndex: number, dayCount: number): string {
   const horizon = Math.min(extrapolationHorizonDays, 3 * dayCount);
-  if (wouldRunDryOnDayIndex + 1 > horizon) return `at this rate it would last well past day ${horizon} if the trip went on`;
+  if (wouldRunDryOnDayIndex + 1 > horizon)
+    return `at this rate it would last well past day ${horizon} if the trip went on`;
   return `it would run dry on day ${wouldRunDryOnDayIndex + 1} if the trip went on`;
 }
 

@@ -144,7 +144,8 @@ export function computeTripSolar(input: TripSolarInput, options: TripSolarOption
 
   const k = Math.min(
     dayCount,
-    cloudyRunDays(input.sky.clearShare, input.sky.cloudyPersistence, dayCount, input.sky.designLikelihood) + Math.max(0, options.extraCloudyRunDays ?? 0),
+    cloudyRunDays(input.sky.clearShare, input.sky.cloudyPersistence, dayCount, input.sky.designLikelihood) +
+      Math.max(0, options.extraCloudyRunDays ?? 0),
   );
   const skies = designSkies({
     days: dayCount,

@@ -54,11 +54,27 @@ export function LineSwatch({ colour, dashed = false }: { colour: string; dashed?
   );
 }
 
-/** A fill swatch for a legend, solid or hatched like its bars. */
-export function FillSwatch({ colour, hatched = false }: { colour: string; hatched?: boolean }) {
+/** A fill swatch for a legend: solid, outlined or hatched like its bars. */
+export function FillSwatch({
+  colour,
+  hatched = false,
+  outlined = false,
+}: {
+  colour: string;
+  hatched?: boolean;
+  outlined?: boolean;
+}) {
   return (
     <svg viewBox="0 0 12 12" className="size-3">
-      <rect x="0.5" y="0.5" width="11" height="11" fill={hatched ? 'white' : colour} stroke={colour} />
+      <rect
+        x="1"
+        y="1"
+        width="10"
+        height="10"
+        fill={hatched || outlined ? 'white' : colour}
+        stroke={colour}
+        strokeWidth={outlined ? 2 : 1}
+      />
       {hatched && <path d="M-1 5 5-1M-1 11 11-1M5 13 13 5" stroke={colour} strokeWidth="1.5" />}
     </svg>
   );

@@ -1,10 +1,8 @@
-import { useId } from 'react';
 import { Bar, BarChart, CartesianGrid, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { KitEvaluation } from '../api/types';
 import { dayLabel, formatWh } from '../utils/format';
 import { ChartFigure, FillSwatch } from './chart-figure';
 import { chartColours, chartInitialSize, chartTick } from './chart-palette';
-import { HatchPattern } from './hatch-pattern';
 
 const seriesNames = { harvestWh: 'Harvest into the stores', demandWh: 'Used by the devices' } as const;
 
@@ -19,9 +17,11 @@ function summaryOf(balance: KitEvaluation['dailyBalance']): string {
   }`;
 }
 
-/** Each day of the expected sky: what the panels put into the stores (solid) against what the devices used (hatched). */
+/**
+ * Each day of the expected sky: what the panels put into the stores (solid) against what the devices used (outlined).
+ * Hatching is kept for dry days alone, so one pattern never means two things on the plan page.
+ */
 export function DailyBalanceChart({ balance }: { balance: KitEvaluation['dailyBalance'] }) {
-  const hatchId = useId().replace(/:/g, '');
   const rows = balance.map((d) => ({ day: dayLabel(d.dayIndex), harvestWh: d.harvestWh, demandWh: d.demandWh }));
   return (
     <ChartFigure
@@ -29,14 +29,11 @@ export function DailyBalanceChart({ balance }: { balance: KitEvaluation['dailyBa
       summary={summaryOf(balance)}
       legend={[
         { label: seriesNames.harvestWh, swatch: <FillSwatch colour={chartColours.stored} /> },
-        { label: seriesNames.demandWh, swatch: <FillSwatch colour={chartColours.demand} hatched /> },
+        { label: seriesNames.demandWh, swatch: <FillSwatch colour={chartColours.demand} outlined /> },
       ]}
     >
       <ResponsiveContainer width="100%" height="100%" initialDimension={chartInitialSize}>
         <BarChart data={rows} margin={{ top: 8, right: 12, bottom: 0, left: 0 }} barGap={2}>
-          <defs>
-            <HatchPattern id={hatchId} colour={chartColours.demand} background="#ffffff" />
-          </defs>
           <CartesianGrid stroke={chartColours.grid} vertical={false} />
           <XAxis dataKey="day" tick={chartTick} tickLine={false} />
           <YAxis tick={chartTick} width={56} tickFormatter={(wh: number) => `${Math.round(wh)} Wh`} />
@@ -46,9 +43,9 @@ export function DailyBalanceChart({ balance }: { balance: KitEvaluation['dailyBa
           <Bar dataKey="harvestWh" fill={chartColours.stored} isAnimationActive={false} />
           <Bar
             dataKey="demandWh"
-            fill={`url(#${hatchId})`}
+            fill="#ffffff"
             stroke={chartColours.demand}
-            strokeWidth={1.5}
+            strokeWidth={2}
             isAnimationActive={false}
           />
         </BarChart>

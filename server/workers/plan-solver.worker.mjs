@@ -37,10 +37,9 @@ function run(task) {
       // A party's trip: the kit is shared out among the carriers within their own gram limits.
       return task.input.party ? planParty(task.input, task.input.party, options) : planTrip(task.input, options);
     }
-    case 'check': {
-      const checked = checkKit(task.input, task.selection);
-      return task.input.party ? { ...checked, kit: withCarriers(task.input, task.selection, checked.kit) } : checked;
-    }
+    case 'check':
+      // A party's check carries who carries what (checkKit splits the kit with the context it already built).
+      return checkKit(task.input, task.selection);
     case 'evaluate': {
       const context = planningContext(task.input);
       const counts = new Map(task.selection.map((line) => [line.itemId, line.count]));
@@ -54,10 +53,4 @@ function run(task) {
     default:
       throw new Error(`Unknown plan solver task ${String(task.kind)}`);
   }
-}
-
-/** A hand-picked or chosen kit of a party's trip, with who carries what (the best split of that kit). */
-function withCarriers(input, selection, kit) {
-  const counts = new Map(selection.map((line) => [line.itemId, line.count]));
-  return { ...kit, carriers: partyCarriers(planningContext(input), input.party, counts) };
 }

@@ -3,11 +3,13 @@ import type { CheckResult, KitSelection } from '../schemas/plans.js';
 import { planningContext } from './build-problem.js';
 import { evaluateKit, planKit } from './evaluate-kit.js';
 import { gramsText } from './plain-words.js';
+import { partyCarriers } from './plan-party.js';
 import { PlanningInputError, type PlanningInput } from './planning-input.js';
 
 /**
  * Simulates a kit picked by hand on the trip, and lists the changes that shave grams and still keep every device
- * charged (one unit left at home, or one unit swapped for a lighter item of the same kind), lightest first.
+ * charged (one unit left at home, or one unit swapped for a lighter item of the same kind), lightest first. On a
+ * party's trip the kit also says who carries what (the best split of that kit), from the same planning context.
  * Throws `PlanningInputError` for an item not in the gear or a count above the units owned.
  * @example checkKit(input, [{ itemId: 'bank-1', count: 1 }]).evaluation.verdict.status // 'runs-dry'
  */
@@ -32,5 +34,10 @@ export function checkKit(input: PlanningInput, selection: KitSelection): CheckRe
     savedG: s.savedG,
     massG: s.kit.massG,
   }));
-  return { kit: planKit(context, counts), evaluation, shaves };
+  const kit = planKit(context, counts);
+  return {
+    kit: input.party ? { ...kit, carriers: partyCarriers(context, input.party, counts) } : kit,
+    evaluation,
+    shaves,
+  };
 }

@@ -8,9 +8,9 @@ import { ConfigService } from '@nestjs/config';
 import { planTrip } from '@gramwatt/shared';
 import { PlanningInputBuilder } from '../src/plans/planning-input.builder';
 import { type PlansConfig, plansConfigKey } from '../src/plans/plans.config';
-import { insertLockerItems, planDevices, planGear, planTripBody } from '../test/support/plan-fixtures';
+import { highRoute } from '../test/support/plan-fixtures';
 import { startTestApp } from '../test/support/test-app';
-import { createTrip, signedInHiker } from '../test/support/trip-fixtures';
+import { signedInHiker } from '../test/support/trip-fixtures';
 
 /** Concurrent plans while the health route is timed (the issue's figure). */
 const concurrentPlans = 4;
@@ -45,21 +45,7 @@ async function main(): Promise<void> {
     const { port } = t.app.getHttpServer().address() as AddressInfo;
     const base = `http://127.0.0.1:${port}/api`;
     const leader = await signedInHiker(t);
-    await insertLockerItems(t.db, leader.id, planGear);
-    const devices = await insertLockerItems(
-      t.db,
-      leader.id,
-      planDevices.map((d) => d.item),
-    );
-    const trip = await createTrip(t, leader, planTripBody());
-    for (const [i, device] of devices.entries()) {
-      await t
-        .http()
-        .post(`/api/trips/${trip.id}/devices`)
-        .set(leader.auth)
-        .send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null })
-        .expect(201);
-    }
+    const { trip } = await highRoute(t, leader);
 
     const { input } = await t.app.get(PlanningInputBuilder).forTrip(trip.id);
     const planMs: number[] = [];

@@ -18,7 +18,7 @@ import { type LockerItemRow, tripKits, tripPlans } from '../src/database/schema'
 import { defaultPlanWorkerFile, PlanSolver } from '../src/plans/plan-solver';
 import { noDevicesMessage, PlanningInputBuilder } from '../src/plans/planning-input.builder';
 import { plansConfigKey, readPlansConfig } from '../src/plans/plans.config';
-import { heldPlanWorkerFile, insertLockerItems, planDevices, planGear, planTripBody } from './support/plan-fixtures';
+import { heldPlanWorkerFile, highRoute, insertLockerItems, planDevices, planGear } from './support/plan-fixtures';
 import { type TestApp, startTestApp } from './support/test-app';
 import {
   type Hiker,
@@ -28,26 +28,6 @@ import {
   signedInHiker,
   testPhoneSpec,
 } from './support/trip-fixtures';
-
-/** The invented high route with the leader's gear and devices, as a member sets it up through the API. */
-async function highRoute(t: TestApp, leader: Hiker) {
-  const gear = await insertLockerItems(t.db, leader.id, planGear);
-  const devices = await insertLockerItems(
-    t.db,
-    leader.id,
-    planDevices.map((d) => d.item),
-  );
-  const trip = await createTrip(t, leader, planTripBody());
-  for (const [i, device] of devices.entries()) {
-    await t
-      .http()
-      .post(`/api/trips/${trip.id}/devices`)
-      .set(leader.auth)
-      .send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null })
-      .expect(201);
-  }
-  return { trip, gear, devices };
-}
 
 const byName = (gear: LockerItemRow[], name: string): LockerItemRow => {
   const row = gear.find((g) => g.name === name);

@@ -2,6 +2,8 @@ import { resolve } from 'node:path';
 import { type LockerItemInputRaw, lockerItemInputSchema } from '@gramwatt/shared';
 import type { Database } from '../../src/database/database.types';
 import { type LockerItemRow, lockerItems } from '../../src/database/schema';
+import type { TestApp } from './test-app';
+import { type Hiker, createTrip } from './trip-fixtures';
 
 /**
  * An invented radio operator's locker and five-night high route, shaped like the demo scenario (USB panels,
@@ -296,3 +298,23 @@ export async function insertLockerItems(
 
 /** The held worker (see `held-plan-solver.worker.mjs`): every task holds its thread 2 s, then solves. */
 export const heldPlanWorkerFile = resolve(__dirname, 'held-plan-solver.worker.mjs');
+
+/** The invented high route with the leader's gear and devices, as a member sets it up through the API. */
+export async function highRoute(t: TestApp, leader: Hiker) {
+  const gear = await insertLockerItems(t.db, leader.id, planGear);
+  const devices = await insertLockerItems(
+    t.db,
+    leader.id,
+    planDevices.map((d) => d.item),
+  );
+  const trip = await createTrip(t, leader, planTripBody());
+  for (const [i, device] of devices.entries()) {
+    await t
+      .http()
+      .post(`/api/trips/${trip.id}/devices`)
+      .set(leader.auth)
+      .send({ itemId: device.id, useProfileOverride: planDevices[i]?.useProfileOverride ?? null })
+      .expect(201);
+  }
+  return { trip, gear, devices };
+}

@@ -185,3 +185,24 @@ export const cordAmpacityByAwgA: Readonly<Record<number, number>> = {
   10: 30,
   8: 40,
 };
+
+// ── 12 V packs as stores ───────────────────────────────────────────────────────────────────────────────────────
+
+/**
+ * Share of the energy put into a lithium pack (LiPo, Li-ion, LiFePO₄) that comes back out, 0–1: round-trip energy
+ * efficiency of about 95 % at the gentle rates of a trip (common practice; maker datasheets give 92–98 %, from memory).
+ */
+export const lithiumPackRoundTripEfficiency = 0.95;
+
+/**
+ * Share of the energy put into a sealed lead-acid battery that comes back out, 0–1: about 80 % round trip (common
+ * practice: 75–85 %, the charge's gassing and heat losses; from memory).
+ */
+export const leadAcidRoundTripEfficiency = 0.8;
+
+/**
+ * Voltage tolerance when a pack feeds a 12 V → USB adapter: the adapter class takes 10–15 V (the range the converter
+ * schema allows), so a pack whose nominal voltage lies in it can feed one (common practice).
+ */
+export const twelveVoltAdapterInputMinVolts = 10;
+export const twelveVoltAdapterInputMaxVolts = 15;

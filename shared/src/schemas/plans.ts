@@ -131,7 +131,7 @@ export const ledgerDaySchema = z.object({
 export const designSkyIdSchema = z.enum(['expected', 'cloudy-start', 'cloudy-middle', 'cloudy-end']);
 
 export const chargeSessionJsonSchema = z.object({
-  kind: z.enum(['harvest', 'top-up']),
+  kind: z.enum(['harvest', 'top-up', 'live']),
   dayIndex: z.number().int(),
   fromId: z.string(),
   toId: z.string(),

@@ -2,6 +2,7 @@ import { lithiumMinChargeTemperatureC } from '../constants/electrical.js';
 import { deviceChargePowerW, deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
 import { panelPowerSeries } from '../harvest/panel-series.js';
 import type { BankSpec, UsbPanelSpec } from '../schemas/items.js';
+import type { BatterySpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
 import { bankUsableWh } from '../storage/bank.js';
 import {
   chargePaths,
@@ -11,6 +12,15 @@ import {
   type KitLead,
   type MissingLink,
 } from './connections.js';
+import {
+  packChargePaths,
+  packStore,
+  panelReachesPack,
+  stationPanelSeries,
+  stationSeriesKey,
+  type KitController,
+  type StationReach,
+} from './station-path.js';
 import type { DeviceUnit, KitSimulationInput, StoreUnit } from './types.js';
 
 /** The kit turned into flat typed arrays for the step loop (no allocation per step). */
@@ -39,7 +49,10 @@ export interface CompiledKit {
   storeOutputEff: Float64Array;
   /** panel × store: 1 where the panel's port reaches the store's input. */
   panelReach: Uint8Array;
-  panelReachLead: (string | null)[];
+  /** panel × store: the leads of the hop (a 12 V panel's: into and out of its controller). */
+  panelReachLeads: string[][];
+  /** panel × store: the charge controller a 12 V panel reaches a pack through (null for a USB panel). */
+  panelReachController: (string | null)[];
   deviceCount: number;
   devices: DeviceUnit[];
   deviceCapWh: Float64Array;
@@ -48,6 +61,12 @@ export interface CompiledKit {
   deviceChargeEff: Float64Array;
   /** store × device: best path efficiency (0 = no path). */
   pathEff: Float64Array;
+  /**
+   * store × device: efficiency of a live path (a device that can run live, on a straight DC lead from a pack; 0 =
+   * none). Once its own battery is empty, such a device draws its use straight from the pack (merit order, above
+   * the reserve) instead of running dry.
+   */
+  liveEff: Float64Array;
   /**
    * store × device: the lower convex hull of the paths' (battery gain W, store draw W) points, from the origin —
    * the least a store gives up for each charge rate when the device may be switched between paths within a step.
@@ -88,20 +107,27 @@ export interface CompiledKit {
  * cheapest to refill is used first, so a less efficient store added to a kit stays full as a spare and takes no
  * harvest — then larger input limit, larger capacity, then item id. It depends only on each store's own spec.
  */
-function meritCompare(
-  a: { spec: BankSpec; itemId: string; unit: number },
-  b: { spec: BankSpec; itemId: string; unit: number },
-): number {
-  const ea = a.spec.chargeEfficiency * a.spec.outputEfficiency;
-  const eb = b.spec.chargeEfficiency * b.spec.outputEfficiency;
+function meritCompare(a: StoreEntry, b: StoreEntry): number {
+  const ea = a.chargeEff * a.outputEff;
+  const eb = b.chargeEff * b.outputEff;
   return (
     eb - ea ||
-    b.spec.inputMaxW - a.spec.inputMaxW ||
-    bankUsableWh(b.spec) - bankUsableWh(a.spec) ||
+    b.inputMaxW - a.inputMaxW ||
+    b.usableWh - a.usableWh ||
     (a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0) ||
     a.unit - b.unit
   );
 }
+
+/** One store unit before compiling: a USB bank or a 12 V pack, with the figures dispatch reads. */
+type StoreEntry = {
+  itemId: string;
+  unit: number;
+  usableWh: number;
+  chargeEff: number;
+  outputEff: number;
+  inputMaxW: number;
+} & ({ kind: 'bank'; spec: BankSpec } | { kind: 'battery'; spec: BatterySpec; volts: number });
 
 /** Compiles a simulation input into typed arrays. */
 export function compileKit(input: KitSimulationInput): CompiledKit {
@@ -130,68 +156,169 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
 
   const leads: KitLead[] = [];
   const converters: KitConverter[] = [];
+  const controllers: KitController[] = [];
+  const controllerCount = new Map<string, number>();
   const panels: { itemId: string; count: number; spec: UsbPanelSpec }[] = [];
-  const storeEntries: { itemId: string; unit: number; spec: BankSpec }[] = [];
+  const stationPanels: { itemId: string; count: number; spec: TwelveVoltPanelSpec }[] = [];
+  const bankLines: { itemId: string; count: number; spec: BankSpec }[] = [];
+  const packLines: { itemId: string; count: number; spec: BatterySpec }[] = [];
   for (const entry of kit) {
     const spec = entry.spec;
     if (spec.kind === 'lead') leads.push({ itemId: entry.itemId, spec });
     else if (spec.kind === 'converter') converters.push({ itemId: entry.itemId, spec });
-    // 12 V panels, batteries and controllers are not simulated yet: they stay out of every path, hence unused.
-    else if (spec.kind === 'panel' && spec.panelType === 'usb')
+    else if (spec.kind === 'controller') {
+      controllers.push({ itemId: entry.itemId, spec });
+      controllerCount.set(entry.itemId, (controllerCount.get(entry.itemId) ?? 0) + entry.count);
+    } else if (spec.kind === 'panel' && spec.panelType === 'usb')
       panels.push({ itemId: entry.itemId, count: entry.count, spec });
-    else if (spec.kind === 'bank')
-      for (let u = 1; u <= entry.count; u++) storeEntries.push({ itemId: entry.itemId, unit: u, spec });
+    else if (spec.kind === 'panel') stationPanels.push({ itemId: entry.itemId, count: entry.count, spec });
+    else if (spec.kind === 'bank') bankLines.push({ itemId: entry.itemId, count: entry.count, spec });
+    else if (spec.kind === 'battery') packLines.push({ itemId: entry.itemId, count: entry.count, spec });
+  }
+  // Panels water-fill one after another; a fixed order by item id keeps the result independent of the kit's line order.
+  const byId = (a: { itemId: string }, b: { itemId: string }) =>
+    a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0;
+  panels.sort(byId);
+  stationPanels.sort(byId);
+  const usedItemIds = new Set<string>();
+  const coldestAirC = solar.steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity);
+  // A lead-acid pack's capacity is taken at the heaviest steady draw of the trip's 12 V devices (Peukert's law).
+  const packDrawA = (volts: number) =>
+    Math.max(
+      0,
+      ...devices.filter((d) => d.spec.chargesVia === '12v-dc').map((d) => deviceChargePowerW(d.spec) / volts),
+    );
+
+  // Which controllers join each 12 V panel to each pack line (the cold open-circuit check included).
+  const packReach = new Map<string, StationReach[]>();
+  for (const p of stationPanels)
+    for (const b of packLines)
+      packReach.set(`${p.itemId}|${b.itemId}`, panelReachesPack(p.spec, b.spec, controllers, leads, coldestAirC));
+
+  const storeEntries: StoreEntry[] = [];
+  for (const b of bankLines) {
+    for (let u = 1; u <= b.count; u++) {
+      storeEntries.push({
+        kind: 'bank',
+        itemId: b.itemId,
+        unit: u,
+        spec: b.spec,
+        usableWh: bankUsableWh(b.spec),
+        chargeEff: b.spec.chargeEfficiency,
+        outputEff: b.spec.outputEfficiency,
+        inputMaxW: b.spec.inputMaxW,
+      });
+    }
+  }
+  for (const b of packLines) {
+    const pack = packStore(b.spec, packDrawA(packStore(b.spec).volts.nominalVolts));
+    // The controllers feeding a pack cap its input with their charge current (each controller counted once per pack).
+    const feeding = new Set<string>();
+    for (const p of stationPanels)
+      for (const r of packReach.get(`${p.itemId}|${b.itemId}`) ?? []) feeding.add(r.controllerItemId);
+    const controllerW =
+      [...feeding].reduce(
+        (a, id) =>
+          a + (controllers.find((c) => c.itemId === id)?.spec.maxChargeA ?? 0) * (controllerCount.get(id) ?? 0),
+        0,
+      ) * pack.volts.nominalVolts;
+    for (let u = 1; u <= b.count; u++) {
+      storeEntries.push({
+        kind: 'battery',
+        itemId: b.itemId,
+        unit: u,
+        spec: b.spec,
+        volts: pack.volts.nominalVolts,
+        usableWh: pack.usableWh,
+        chargeEff: pack.chargeEfficiency,
+        outputEff: pack.outputEfficiency,
+        inputMaxW: Math.min(pack.packInputMaxW, controllerW),
+      });
+    }
   }
   storeEntries.sort(meritCompare);
-  // Panels water-fill one after another; a fixed order by item id keeps the result independent of the kit's line order.
-  panels.sort((a, b) => (a.itemId < b.itemId ? -1 : a.itemId > b.itemId ? 1 : 0));
-  const usedItemIds = new Set<string>();
 
   const storeCount = storeEntries.length;
-  const stores: StoreUnit[] = storeEntries.map((s) => {
-    const usableWh = bankUsableWh(s.spec);
-    return {
-      storeId: `${s.itemId}#${s.unit}`,
-      itemId: s.itemId,
-      unit: s.unit,
-      usableWh,
-      reserveWh: usableWh * reserveShare,
-    };
-  });
+  const stores: StoreUnit[] = storeEntries.map((s) => ({
+    storeId: `${s.itemId}#${s.unit}`,
+    itemId: s.itemId,
+    unit: s.unit,
+    kind: s.kind,
+    usableWh: s.usableWh,
+    reserveWh: s.usableWh * reserveShare,
+  }));
   const storeCapWh = Float64Array.from(stores, (s) => s.usableWh);
   const storeFloorWh = Float64Array.from(stores, (s) => s.reserveWh);
-  const storeInputMaxW = Float64Array.from(storeEntries, (s) => s.spec.inputMaxW);
-  const storeChargeEff = Float64Array.from(storeEntries, (s) => s.spec.chargeEfficiency);
-  const storeOutputEff = Float64Array.from(storeEntries, (s) => s.spec.outputEfficiency);
+  const storeInputMaxW = Float64Array.from(storeEntries, (s) => s.inputMaxW);
+  const storeChargeEff = Float64Array.from(storeEntries, (s) => s.chargeEff);
+  const storeOutputEff = Float64Array.from(storeEntries, (s) => s.outputEff);
 
-  const panelCount = panels.length;
+  const panelCount = panels.length + stationPanels.length;
   const panelReach = new Uint8Array(panelCount * storeCount);
-  const panelReachLead: (string | null)[] = new Array(panelCount * storeCount).fill(null);
+  const panelReachLeads: string[][] = Array.from({ length: panelCount * storeCount }, () => []);
+  const panelReachController: (string | null)[] = new Array(panelCount * storeCount).fill(null);
+  const skyCount = solar.skies.length;
+  const panelSeries: Float64Array[][] = Array.from({ length: skyCount }, () => []);
+  const pushSeries = (perSky: readonly Float64Array[], count: number) => {
+    for (let k = 0; k < skyCount; k++) {
+      const one = perSky[k] ?? new Float64Array(stepCount);
+      const scaled = new Float64Array(stepCount);
+      for (let i = 0; i < stepCount; i++) scaled[i] = (one[i] ?? 0) * count;
+      panelSeries[k]?.push(scaled);
+    }
+  };
   panels.forEach((p, pi) => {
     storeEntries.forEach((s, si) => {
+      if (s.kind !== 'bank') return;
       const hop = panelReachesBank(p.spec.outputPort, s.spec, leads);
       if (hop.joined) {
         panelReach[pi * storeCount + si] = 1;
-        panelReachLead[pi * storeCount + si] = hop.leadItemId;
+        if (hop.leadItemId) panelReachLeads[pi * storeCount + si] = [hop.leadItemId];
         usedItemIds.add(p.itemId);
         if (hop.leadItemId) usedItemIds.add(hop.leadItemId);
       }
     });
+    pushSeries(options.panelSeriesCache?.get(p.itemId) ?? panelPowerSeries(p.spec, solar, options.panelPower), p.count);
   });
-  const skyCount = solar.skies.length;
-  const panelSeries: Float64Array[][] = Array.from({ length: skyCount }, () => []);
-  panels.forEach((p) => {
-    const perSky = options.panelSeriesCache?.get(p.itemId) ?? panelPowerSeries(p.spec, solar, options.panelPower);
-    for (let k = 0; k < skyCount; k++) {
-      const one = perSky[k] ?? new Float64Array(stepCount);
-      const scaled = new Float64Array(stepCount);
-      for (let i = 0; i < stepCount; i++) scaled[i] = (one[i] ?? 0) * p.count;
-      panelSeries[k]?.push(scaled);
+  stationPanels.forEach((p, j) => {
+    const pi = panels.length + j;
+    // The panel's power is the best of its (controller, pack voltage) pairings hour by hour: optimistic only for a kit
+    // mixing packs of different voltages or controllers of different kinds, where a real station wires one pairing.
+    const pairings = new Map<string, { controller: KitController; volts: number }>();
+    storeEntries.forEach((s, si) => {
+      if (s.kind !== 'battery') return;
+      const reaches = packReach.get(`${p.itemId}|${s.itemId}`) ?? [];
+      const first = reaches[0];
+      if (!first) return;
+      panelReach[pi * storeCount + si] = 1;
+      panelReachLeads[pi * storeCount + si] = first.leadItemIds;
+      panelReachController[pi * storeCount + si] = first.controllerItemId;
+      usedItemIds.add(p.itemId);
+      for (const r of reaches) {
+        usedItemIds.add(r.controllerItemId);
+        for (const id of r.leadItemIds) usedItemIds.add(id);
+        const controller = controllers.find((c) => c.itemId === r.controllerItemId);
+        if (controller)
+          pairings.set(stationSeriesKey(p.itemId, controller.itemId, s.volts), { controller, volts: s.volts });
+      }
+    });
+    const best = Array.from({ length: skyCount }, () => new Float64Array(stepCount));
+    for (const [key, { controller, volts }] of pairings) {
+      const perSky =
+        options.panelSeriesCache?.get(key) ??
+        stationPanelSeries(p.spec, controller.spec, volts, solar, options.panelPower);
+      for (let k = 0; k < skyCount; k++) {
+        const b = best[k] as Float64Array;
+        const one = perSky[k];
+        if (one) for (let i = 0; i < stepCount; i++) b[i] = Math.max(b[i] ?? 0, one[i] ?? 0);
+      }
     }
+    pushSeries(best, p.count);
   });
 
   const deviceCount = devices.length;
   const pathEff = new Float64Array(storeCount * deviceCount);
+  const liveEff = new Float64Array(storeCount * deviceCount);
   const hullOffset = new Int32Array(storeCount * deviceCount);
   const hullCount = new Int32Array(storeCount * deviceCount);
   const hullGain: number[] = [];
@@ -202,13 +329,21 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     const paths: (ChargePath | null)[] = [];
     const missing = new Map<string, MissingLink>();
     storeEntries.forEach((s, si) => {
-      const found = chargePaths(s.spec, d.spec, converters, leads);
+      const found =
+        s.kind === 'bank'
+          ? chargePaths(s.spec, d.spec, converters, leads)
+          : packChargePaths(s.spec, d.spec, converters, leads);
       const best = found.paths[0] ?? null;
       paths.push(best);
       const idx = si * deviceCount + di;
       if (best) {
         pathEff[idx] = best.pathEfficiency;
         usedItemIds.add(s.itemId);
+        const live = found.paths.find((p) => 'live' in p && p.live === true);
+        if (live) {
+          liveEff[idx] = live.pathEfficiency;
+          for (const id of live.leadItemIds) usedItemIds.add(id);
+        }
         const hull = lowerHull(found.paths, d.spec.chargeEfficiency);
         hullOffset[idx] = hullGain.length;
         hullCount[idx] = hull.length;
@@ -227,7 +362,15 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     const missingLinks: MissingLink[] =
       needs && !anyPath
         ? storeCount === 0
-          ? [{ kind: 'store', text: 'a bank that can charge it' }]
+          ? [
+              {
+                kind: 'store',
+                text:
+                  d.spec.chargesVia === '12v-dc'
+                    ? 'a bank or a 12 V pack that can charge it'
+                    : 'a bank that can charge it',
+              },
+            ]
           : [...missing.values()]
         : [];
     return {
@@ -270,7 +413,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     stepFrozen,
     stepHoursAfter,
     panelCount,
-    panelItemIds: panels.map((p) => p.itemId),
+    panelItemIds: [...panels, ...stationPanels].map((p) => p.itemId),
     panelSeries,
     storeCount,
     stores,
@@ -280,7 +423,8 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     storeChargeEff,
     storeOutputEff,
     panelReach,
-    panelReachLead,
+    panelReachLeads,
+    panelReachController,
     deviceCount,
     devices: deviceUnits,
     deviceCapWh: Float64Array.from(devices, (d) => d.spec.ownBatteryWh),
@@ -288,6 +432,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     deviceChargeInW: Float64Array.from(devices, (d) => deviceChargePowerW(d.spec)),
     deviceChargeEff: Float64Array.from(devices, (d) => d.spec.chargeEfficiency),
     pathEff,
+    liveEff,
     hullOffset,
     hullCount,
     hullGainW: Float64Array.from(hullGain),

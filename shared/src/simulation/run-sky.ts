@@ -33,7 +33,7 @@ export interface SkyRecord {
   storesWhByStep: Float64Array;
   unitWhByStep: Float64Array;
   /** Flat session log: per step, per flow. Called only when recording. */
-  onFlow?: (kind: 'harvest' | 'top-up', stepIndex: number, from: number, to: number, energyWh: number) => void;
+  onFlow?: (kind: 'harvest' | 'top-up' | 'live', stepIndex: number, from: number, to: number, energyWh: number) => void;
 }
 
 /** The first dry step of a run, by index. */
@@ -74,6 +74,10 @@ export interface SkyScratch {
   harvestActive: Uint8Array;
   /** Per store: 1 when the current panel of the round water-fills it. */
   harvestFillSet: Uint8Array;
+  /** Per store: the charge rate (W of battery gain) it gives the device being topped up in this step. */
+  topUpRateW: Float64Array;
+  /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
+  leastLevelWh: Float64Array;
 }
 
 /** Allocates scratch buffers for a compiled kit. */
@@ -89,7 +93,38 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     harvestOpen: new Uint8Array(k.storeCount),
     harvestActive: new Uint8Array(k.storeCount),
     harvestFillSet: new Uint8Array(k.storeCount),
+    topUpRateW: new Float64Array(k.storeCount),
+    leastLevelWh: leastLevelsWh(k),
   };
+}
+
+/**
+ * Per device × step: the least its battery must hold at the end of the step to reach the trip's end without running
+ * dry, charged in every later camp step (where top-ups run) at its efficient rate — each store's most efficient path
+ * at full rate, summed over the stores it reaches, within the device's charge power — and never faster. Backwards from
+ * the trip's end: level before step j = use in j + max(0, level after j − charge in j). Use and rates are fixed by the
+ * kit and the devices, so the levels never move with the sun, and rise with demand.
+ */
+function leastLevelsWh(k: CompiledKit): Float64Array {
+  const { storeCount: S, deviceCount: D, stepCount: N } = k;
+  const levels = new Float64Array(D * N);
+  for (let d = 0; d < D; d++) {
+    if (k.deviceTopsUp[d] !== 1) continue;
+    let efficientW = 0;
+    for (let s = 0; s < S; s++) {
+      if ((k.hullCount[s * D + d] ?? 0) > 0) efficientW += k.hullGainW[k.hullOffset[s * D + d] ?? 0] ?? 0;
+    }
+    efficientW = Math.min(efficientW, (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1));
+    const useW = k.deviceDemandWhPerH[d] ?? 0;
+    let after = 0;
+    for (let j = N - 1; j >= 0; j--) {
+      levels[d * N + j] = after;
+      const dt = k.stepDurationH[j] ?? 0;
+      const charges = k.stepCamp[j] === 1 && !(k.stepFrozen[j] === 1 && k.freezeBlocksDeviceTopUps);
+      after = useW * dt + Math.max(0, after - (charges ? efficientW * dt : 0));
+    }
+  }
+  return levels;
 }
 
 /** Allocates record buffers for a compiled kit. */
@@ -164,7 +199,6 @@ export function runSky(
   let stepIndex = 0;
   let dayIndexNow = 0;
   let dt = 0;
-  let budgetInWh = 0;
 
   for (let i = 0; i < k.stepCount; i++) {
     dt = k.stepDurationH[i] ?? 0;
@@ -293,12 +327,14 @@ export function runSky(
       if (frozen) ledger[row + C.frozenHours] = (ledger[row + C.frozenHours] ?? 0) + dt;
     }
 
-    // 2. Devices use their step's share of the day's demand from their own batteries.
+    // 2. Devices use their step's share of the day's demand from their own batteries; a device that can run live from a
+    //    12 V pack takes what its battery lacks straight from its packs (merit order, down to each reserve).
     for (let d = 0; d < D; d++) {
       const need = (k.deviceDemandWhPerH[d] ?? 0) * dt;
       const have = devE[d] ?? 0;
-      const used = Math.min(have, need);
+      let used = Math.min(have, need);
       devE[d] = have - used;
+      if (need - used > tiny) used += runLive(d, need - used);
       if (ledger) {
         ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + used;
         if (need > used) ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + (need - used);
@@ -314,30 +350,52 @@ export function runSky(
     //    is filled to full; one that does, only as far as it will still use for the rest of the trip, from every store —
     //    so it never takes from another's bank what it does not need, and its target moves with its demand the same way
     //    for all its stores (filled to full from its own bank but to its use left from a shared one, more demand let it
-    //    fill from the shared bank and then leave harvest in its own bank). The device's own charge power is shared between stores (it may be moved from store to
-    //    store within a step); within a store it may be switched between paths (the hull), going faster than the most
-    //    efficient path only as far as needed to reach its target by the end of the camp window.
+    //    fill from the shared bank and then leave harvest in its own bank). The device's own charge power is shared between
+    //    stores (it may be moved from store to store within a step); within a store it may be switched between paths (the
+    //    hull). Two passes over the stores in that order: first each store gives at most its most efficient path's full
+    //    rate; then, only while the device holds less than the least level from which it reaches the trip's end charging
+    //    at those rates (`leastLevelsWh`), the stores speed up, in the same order, within the charge power left, each
+    //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
+    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
+      const rateW = scratch.topUpRateW;
       for (let d = 0; d < D; d++) {
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
-        if (cap - (devE[d] ?? 0) <= tiny) continue;
-        budgetInWh = (k.deviceChargeInW[d] ?? 0) * dt;
+        const heldWh = devE[d] ?? 0;
+        if (cap - heldWh <= tiny) continue;
         // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
         // rest of the trip; any other device to full.
         const targetWh =
           k.deviceSharesStores[d] === 1
             ? Math.min(cap, (k.deviceDemandWhPerH[d] ?? 0) * (k.stepHoursAfter[i] ?? 0))
             : cap;
-        for (let pass = 0; pass < 2; pass++) {
-          const shared = pass === 1 ? 1 : 0;
-          for (let s = 0; s < S && budgetInWh > tiny; s++) {
-            if ((k.storeShared[s] ?? 0) !== shared) continue;
-            const want = targetWh - (devE[d] ?? 0);
-            if (want <= tiny) break;
-            topUp(d, s, want);
+        let wantWh = targetWh - heldWh;
+        if (wantWh <= tiny) continue;
+        // The device's charge power in this step, as battery gain (Wh).
+        let powerLeftWh = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
+        rateW.fill(0);
+        for (let group = 0; group < 2; group++) {
+          for (let s = 0; s < S && wantWh > tiny && powerLeftWh > tiny; s++) {
+            if ((k.storeShared[s] ?? 0) !== group) continue;
+            const x = efficientRateW(d, s, wantWh, powerLeftWh);
+            rateW[s] = x;
+            wantWh -= x * dt;
+            powerLeftWh -= x * dt;
           }
         }
+        let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
+        for (let group = 0; group < 2; group++) {
+          for (let s = 0; s < S && shortWh > tiny && powerLeftWh > tiny; s++) {
+            if ((k.storeShared[s] ?? 0) !== group) continue;
+            const extraW = fasterRateW(d, s, rateW[s] ?? 0, Math.min(shortWh, powerLeftWh)) - (rateW[s] ?? 0);
+            if (!(extraW > 0)) continue;
+            rateW[s] = (rateW[s] ?? 0) + extraW;
+            shortWh -= extraW * dt;
+            powerLeftWh -= extraW * dt;
+          }
+        }
+        for (let s = 0; s < S; s++) if ((rateW[s] ?? 0) > 0) topUp(d, s, rateW[s] ?? 0);
       }
     }
 
@@ -360,24 +418,47 @@ export function runSky(
   return finish();
 
   /**
-   * Tops device d up from store s in step i (up to `want` Wh into its battery, within `budgetInWh` at its input);
-   * returns the Wh it gained. Gain rate x (W at the battery) and draw rate c(x) on the hull; x is capped by want and
-   * the device's remaining charge power, then by what the store holds above its reserve.
+   * First pass of a top-up: the rate (W of battery gain) store s gives device d in this step along its most efficient
+   * path (the hull's first point), within `wantWh` and `powerLeftWh` (battery gain) and what it holds above its reserve.
    */
-  function topUp(d: number, s: number, want: number): number {
+  function efficientRateW(d: number, s: number, wantWh: number, powerLeftWh: number): number {
     const idx = s * D + d;
-    const n = k.hullCount[idx] ?? 0;
-    if (n === 0) return 0;
+    if ((k.hullCount[idx] ?? 0) === 0) return 0;
     const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
     if (avail <= tiny) return 0;
     const off = k.hullOffset[idx] ?? 0;
-    const etaDev = k.deviceChargeEff[d] ?? 1;
-    const maxGainW = k.hullGainW[off + n - 1] ?? 0;
-    // Pace: the most efficient path's full rate, or faster only as far as needed to reach `want` when camp ends.
-    const paceW = Math.max(want / (k.stepCampLeftH[stepIndex] || dt), k.hullGainW[off] ?? 0);
-    let x = Math.min(want / dt, maxGainW, paceW, (budgetInWh * etaDev) / dt);
+    const g0 = k.hullGainW[off] ?? 0;
+    const c0 = k.hullDrawW[off] ?? 0;
+    const x = Math.min(g0, wantWh / dt, powerLeftWh / dt, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
+    return x > 0 ? x : 0;
+  }
+
+  /**
+   * Second pass: the rate store s gives device d once sped up from `fromW` by at most `extraWh` of battery gain in this
+   * step, along its hull and within what it holds above its reserve (the whole step's draw at the new rate, never more).
+   */
+  function fasterRateW(d: number, s: number, fromW: number, extraWh: number): number {
+    const idx = s * D + d;
+    const n = k.hullCount[idx] ?? 0;
+    if (n < 2) return fromW;
+    const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
+    if (avail <= tiny) return fromW;
+    const off = k.hullOffset[idx] ?? 0;
+    let x = Math.min(k.hullGainW[off + n - 1] ?? 0, fromW + extraWh / dt);
     if (hullDrawAt(k, off, n, x) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt);
-    if (!(x > 0)) return 0;
+    return Math.max(fromW, x);
+  }
+
+  /**
+   * Tops device d up from store s in step i at rate x (W at the battery, on the hull, already within the store's
+   * energy above its reserve and the device's charge power); returns the Wh it gained.
+   */
+  function topUp(d: number, s: number, x: number): number {
+    const idx = s * D + d;
+    const n = k.hullCount[idx] ?? 0;
+    if (n === 0 || !(x > 0)) return 0;
+    const off = k.hullOffset[idx] ?? 0;
+    const etaDev = k.deviceChargeEff[d] ?? 1;
     // Split the rate between the two hull points around x, each with its own efficiencies.
     let seg = 0;
     while (seg < n - 1 && (k.hullGainW[off + seg] ?? 0) < x) seg++;
@@ -394,7 +475,6 @@ export function runSky(
     const draw = draw0 + draw1;
     E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
     devE[d] = (devE[d] ?? 0) + gain;
-    budgetInWh -= gain / etaDev;
     if (ledger) {
       const row = dayIndexNow * columnCount;
       ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
@@ -404,6 +484,26 @@ export function runSky(
     }
     if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);
     return gain;
+  }
+
+  /** Device d runs live from its packs for `lackWh` of use in step i; returns the Wh delivered. */
+  function runLive(d: number, lackWh: number): number {
+    let got = 0;
+    for (let s = 0; s < S && lackWh - got > tiny; s++) {
+      const eff = k.liveEff[s * D + d] ?? 0;
+      if (!(eff > 0)) continue;
+      const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
+      if (avail <= tiny) continue;
+      const draw = Math.min(avail, (lackWh - got) / eff);
+      E[s] = (E[s] ?? 0) - draw;
+      got += draw * eff;
+      if (ledger) {
+        const row = dayIndexNow * columnCount;
+        ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw * (1 - eff);
+      }
+      if (record?.onFlow) record.onFlow('live', stepIndex, s, d, draw * eff);
+    }
+    return got;
   }
 
   function finish(): SkyRun {

@@ -90,7 +90,7 @@ function ledgerDays(k: CompiledKit, record: SkyRecord): LedgerDay[] {
 
 function sessionLogger(k: CompiledKit, input: KitSimulationInput, schedule: ChargeSession[]) {
   const open = new Map<string, ChargeSession>();
-  return (kind: 'harvest' | 'top-up', stepIndex: number, from: number, to: number, energyWh: number) => {
+  return (kind: ChargeSession['kind'], stepIndex: number, from: number, to: number, energyWh: number) => {
     if (energyWh <= 0) return;
     const step = input.solar.steps[stepIndex];
     if (!step) return;
@@ -104,15 +104,20 @@ function sessionLogger(k: CompiledKit, input: KitSimulationInput, schedule: Char
       current.energyWh += energyWh;
       return;
     }
-    const path = kind === 'top-up' ? k.devices[to]?.paths[from] : null;
-    const lead = kind === 'harvest' ? k.panelReachLead[from * k.storeCount + to] : null;
+    const path = kind === 'harvest' ? null : k.devices[to]?.paths[from];
+    const reach = from * k.storeCount + to;
     const session: ChargeSession = {
       kind,
       dayIndex: step.dayIndex,
       fromId,
       toId,
-      converterItemId: path?.converterItemId ?? null,
-      leadItemIds: path ? path.leadItemIds : lead ? [lead] : [],
+      converterItemId:
+        kind === 'harvest'
+          ? (k.panelReachController[reach] ?? null)
+          : kind === 'live'
+            ? null
+            : (path?.converterItemId ?? null),
+      leadItemIds: kind === 'harvest' ? (k.panelReachLeads[reach] ?? []) : (path?.leadItemIds ?? []),
       startUtcMs: step.startUtcMs,
       endUtcMs,
       startLocalTime: step.localTime,

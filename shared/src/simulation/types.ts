@@ -125,18 +125,20 @@ export interface LedgerDay {
 
 /** One charging session for the packing list: what charges from what, when. */
 export interface ChargeSession {
-  kind: 'harvest' | 'top-up';
+  /** Harvest into a store, a top-up of a device's battery, or a device running live from a 12 V pack. */
+  kind: 'harvest' | 'top-up' | 'live';
   dayIndex: number;
-  /** A panel item id (harvest) or a store unit id (top-up). */
+  /** A panel item id (harvest) or a store unit id (top-up, live). */
   fromId: string;
-  /** A store unit id (harvest) or a device id (top-up). */
+  /** A store unit id (harvest) or a device id (top-up, live). */
   toId: string;
+  /** The converter of a top-up, or the charge controller a 12 V panel's harvest goes through. */
   converterItemId: string | null;
   leadItemIds: string[];
   startUtcMs: number;
   endUtcMs: number;
   startLocalTime: string;
-  /** Energy taken at the store input (harvest) or put into the device battery (top-up), Wh. */
+  /** Energy taken at the store input (harvest), put into the device battery (top-up) or used live, Wh. */
   energyWh: number;
 }
 
@@ -145,6 +147,8 @@ export interface StoreUnit {
   storeId: string;
   itemId: string;
   unit: number;
+  /** A USB bank or a 12 V battery pack. */
+  kind: 'bank' | 'battery';
   usableWh: number;
   reserveWh: number;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { wouldRunDryText } from './verdict';
+import { wouldRunDryText } from './verdict.js';
 
 describe('wouldRunDryText', () => {
   it('names the dry day while it is within three times the trip', () => {

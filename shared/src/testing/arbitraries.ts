@@ -255,3 +255,103 @@ export const tripArb = fc
       walkEndHour: t.walkStartHour + t.walkHours,
     }),
   );
+
+// ── The 12 V path wired to fit ─────────────────────────────────────────────────────────────────────────────────
+// Random DC connectors seldom join, so these generate station gear that fits together most of the time: a 12 V-class
+// pack with ring terminals, a controller from a 12 V accessory socket to captive rings, a 12 V panel with a captive
+// accessory plug, a DC lead from rings to the radios' sockets, and a 12 V → USB adapter.
+
+/** A 12 V-class pack (3S or 4S lithium, 4S LiFePO₄, 6-cell lead-acid) with ring terminals. */
+export const wiredPackArb = fc
+  .record({
+    pack: fc.constantFrom(
+      { chemistry: 'lifepo4', cellsInSeries: 4 },
+      { chemistry: 'lipo', cellsInSeries: 3 },
+      { chemistry: 'lipo', cellsInSeries: 4 },
+      { chemistry: 'li-ion', cellsInSeries: 3 },
+      { chemistry: 'lead-acid', cellsInSeries: 6 },
+    ),
+    capacityAh: share(1, 12),
+    chargeCRate: fc.option(share(0.1, 2), { nil: undefined }),
+    dischargeCRate: fc.option(share(0.5, 10), { nil: undefined }),
+    massG: fc.integer({ min: 200, max: 3000 }),
+  })
+  .map(({ pack, ...b }) =>
+    batterySpecSchema.parse({
+      kind: 'battery',
+      ...pack,
+      ...b,
+      port: { connector: 'ring-terminal', captiveCable: false },
+    }),
+  );
+
+/** A controller between a 12 V accessory socket and captive ring terminals. */
+export const wiredControllerArb = controllerArb.map((c) => ({
+  ...c,
+  inputPort: { connector: '12v-accessory' as const, captiveCable: false },
+  outputPort: { connector: 'ring-terminal' as const, captiveCable: true },
+}));
+
+/** A 12 V panel with a captive 12 V accessory plug. */
+export const wiredTwelveVoltPanelArb = twelveVoltPanelArb.map((p) => ({
+  ...p,
+  outputPort: { connector: '12v-accessory' as const, captiveCable: true },
+}));
+
+/** A DC lead from ring terminals to a radio's barrel or DC socket. */
+export const wiredDcLeadArb = dcLeadArb.chain((l) =>
+  fc
+    .constantFrom<Connector>('barrel-5.5x2.1', 'radio-dc')
+    .map((to) => ({ ...l, fromConnector: 'ring-terminal' as const, toConnector: to })),
+);
+
+/** A 12 V → USB adapter: captive rings in, a USB-A socket out. */
+export const usbAdapterArb = fc
+  .record({ maxOutputA: share(1, 3), efficiency: share(0.8, 0.95), massG: fc.integer({ min: 15, max: 80 }) })
+  .map((a) =>
+    converterSpecSchema.parse({
+      kind: 'converter',
+      converterType: '12v-to-usb',
+      inputVolts: 12,
+      outputVolts: 5,
+      ...a,
+      inputPort: { connector: 'ring-terminal', captiveCable: true },
+      outputPort: { connector: 'usb-a', captiveCable: false },
+    }),
+  );
+
+/** Any item of either path: the USB items of `kitItemArb` and the 12 V gear, mostly wired to fit. */
+export const bothPathsItemArb: fc.Arbitrary<KitItemSpec> = fc.oneof(
+  { weight: 6, arbitrary: kitItemArb },
+  { weight: 2, arbitrary: wiredPackArb },
+  { weight: 2, arbitrary: wiredControllerArb },
+  { weight: 2, arbitrary: wiredTwelveVoltPanelArb },
+  { weight: 2, arbitrary: wiredDcLeadArb },
+  { weight: 1, arbitrary: usbAdapterArb },
+  { weight: 1, arbitrary: fc.oneof(batteryArb, controllerArb, twelveVoltPanelArb, dcLeadArb) },
+);
+
+/** A kit of both paths (each line count 1–2), half the time with the common leads. */
+export const bothPathsKitArb = (maxLines = 7): fc.Arbitrary<KitEntry[]> =>
+  fc
+    .tuple(
+      fc.array(fc.record({ spec: bothPathsItemArb, count: fc.integer({ min: 1, max: 2 }) }), {
+        maxLength: maxLines,
+        size: 'max',
+      }),
+      fc.boolean(),
+    )
+    .map(([lines, withCommonLeads]) => [
+      ...lines.map((l, i) => ({ itemId: `item-${i}`, count: l.count, spec: l.spec })),
+      ...(withCommonLeads ? commonLeads.map((spec, i) => ({ itemId: `common-lead-${i}`, count: 1, spec })) : []),
+    ]);
+
+/** Trip devices where radios may run live from a pack. */
+export const bothPathsDevicesArb: fc.Arbitrary<TripDevice[]> = fc
+  .array(fc.tuple(deviceArb, fc.boolean()), { minLength: 1, maxLength: 2 })
+  .map((ds) =>
+    ds.map(([spec, live], i) => ({
+      deviceId: `device-${i}`,
+      spec: spec.chargesVia === '12v-dc' ? { ...spec, canRunLive: live } : spec,
+    })),
+  );

@@ -518,6 +518,68 @@ describe('adding an item never makes a kit worse: hand-built cases', () => {
     expect(feasibleBase).toBe(10);
     expect(broken).toEqual([]);
   });
+  it('a faster, lossier boost converter does not waste a just-big-enough bank on the radio', () => {
+    // No sun. The radio charges from one bank through a slow 0.95-efficient boost, too slow to fill it in one camp but
+    // enough, with the bank just big enough, to last the trip. Paced to be full by the end of each camp, the added fast
+    // 0.7-efficient boost carried the extra charge at its loss and the bank ran dry before the end (115 of these 425
+    // kits). The pace now goes past the most efficient path only as far as the radio needs to reach the trip's end.
+    const fast: KitEntry = {
+      itemId: 'fast-boost',
+      count: 1,
+      spec: testBoostConverter({ maxOutputA: 1, efficiency: 0.7 }),
+    };
+    let feasibleBase = 0;
+    const broken: Record<string, number>[] = [];
+    for (const nights of [2, 3, 5])
+      for (const [walkStartHour, walkEndHour] of [
+        [8, 16],
+        [6, 20],
+      ] as const) {
+        const solar = syntheticTripSolar({ nights, peakWm2: 0, walkStartHour, walkEndHour });
+        for (const batteryWh of [15, 30])
+          for (const energyWhPerDay of [6, 10, 14])
+            for (const slowA of [0.03, 0.06, 0.1]) {
+              const devices: TripDevice[] = [
+                {
+                  deviceId: 'radio',
+                  spec: testRadio({
+                    ownBatteryWh: batteryWh,
+                    chargeCurrentA: 2,
+                    useProfile: { basis: 'energy', energyWhPerDay },
+                  }),
+                },
+              ];
+              const slow: KitEntry = {
+                itemId: 'slow-boost',
+                count: 1,
+                spec: testBoostConverter({ maxOutputA: slowA, efficiency: 0.95 }),
+              };
+              const kitWith = (capacityMah: number): KitEntry[] => [
+                slow,
+                { itemId: 'bank', count: 1, spec: testBank({ capacityMah }) },
+              ];
+              const feasible = (kit: KitEntry[]) => isKitFeasible({ solar, kit, devices, reserveShare: 0 });
+              // The smallest bank with which the kit without the fast boost lasts (bisection), then banks just above it.
+              let lo = 100;
+              let hi = 60_000;
+              if (!feasible(kitWith(hi))) continue;
+              for (let i = 0; i < 40; i++) {
+                const mid = (lo + hi) / 2;
+                if (feasible(kitWith(mid))) hi = mid;
+                else lo = mid;
+              }
+              for (const aboveMah of [0.01, 1, 10, 100, 300]) {
+                const kit = kitWith(hi + aboveMah);
+                if (!feasible(kit)) continue;
+                feasibleBase++;
+                if (!feasible([...kit, fast]))
+                  broken.push({ nights, walkStartHour, batteryWh, energyWhPerDay, slowA, aboveMah });
+              }
+            }
+      }
+    expect(feasibleBase).toBe(425);
+    expect(broken).toEqual([]);
+  }, 60_000);
 });
 
 describe('more demand never raises a store’s energy: hand-built cases', () => {

@@ -310,6 +310,7 @@ export const buildPlanResult = (overrides: Partial<PlanResult> = {}, evaluation 
       },
     ],
     nothingFeasible: null,
+    pathChoice: null,
     notes: [],
     stats: { rounds: 12, judgedKits: 88, activeItems: 7, candidateItems: 7, optimumMs: 1850, totalMs: 4200 },
     ...overrides,

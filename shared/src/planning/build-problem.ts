@@ -13,9 +13,20 @@ import type {
   PathNeed,
   StoreCoefficients,
 } from '../optimisation/types.js';
+import { deviceChargePowerW } from '../demand/device-demand.js';
 import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { KitEntry } from '../schemas/kit.js';
-import { chargePaths, joinPorts, type KitConverter, type KitLead } from '../simulation/connections.js';
+import type { BatterySpec, ControllerSpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
+import { chargePaths, joinPorts, type ChargePath, type KitConverter, type KitLead } from '../simulation/connections.js';
+import {
+  packChargePaths,
+  packStore,
+  panelReachesPack,
+  stationPanelSeries,
+  stationSeriesKey,
+  type KitController,
+  type PackPath,
+} from '../simulation/station-path.js';
 import { isKitFeasible, simulateKit } from '../simulation/simulate-kit.js';
 import type { KitSimulation } from '../simulation/types.js';
 import { bankUsableWh } from '../storage/bank.js';
@@ -109,6 +120,18 @@ export function planningContext(
   };
 
   const banks = owned.filter((g): g is PlanningGear & { spec: BankSpec } => g.spec.kind === 'bank');
+  const packs = owned.filter((g): g is PlanningGear & { spec: BatterySpec } => g.spec.kind === 'battery');
+  const controllers: KitController[] = owned.flatMap((g) =>
+    g.spec.kind === 'controller' ? [{ itemId: g.itemId, spec: g.spec as ControllerSpec }] : [],
+  );
+  // A pack's usable energy as the simulation takes it: Peukert at the heaviest steady draw of the trip's 12 V devices.
+  const packDrawA = (pack: BatterySpec) => {
+    const volts = packStore(pack).volts.nominalVolts;
+    return Math.max(
+      0,
+      ...input.devices.filter((d) => d.spec.chargesVia === '12v-dc').map((d) => deviceChargePowerW(d.spec) / volts),
+    );
+  };
   const leads: KitLead[] = owned.flatMap((g) =>
     g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec as LeadSpec }] : [],
   );
@@ -122,7 +145,6 @@ export function planningContext(
   const harvestGroups: HarvestGroup[] = [];
   const anySun: boolean[][] = Array.from({ length: skyCount }, () => new Array<boolean>(stepCount).fill(false));
   for (const g of owned) {
-    // 12 V panels are not planned with yet: no coefficients, so the presolve drops them (as batteries and controllers).
     if (g.spec.kind !== 'panel' || g.spec.panelType !== 'usb') continue;
     const spec = g.spec as UsbPanelSpec;
     const directBanks = banks.filter((b) => joinPorts(spec.outputPort, b.spec.inputPort, []).joined);
@@ -167,13 +189,53 @@ export function planningContext(
     });
   }
 
+  // 12 V panels: each reaches a pack only through a controller (and the leads of its two hops); its harvest counts
+  // only with one such set. Per step, the best of every owned (controller, pack voltage) pairing — the simulation takes
+  // the best of the kit's pairings, never more.
+  const coldestAirC = steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity);
+  for (const g of owned) {
+    if (g.spec.kind !== 'panel' || g.spec.panelType !== '12v') continue;
+    const spec = g.spec as TwelveVoltPanelSpec;
+    const requiresAnyOf: PathAlternative[] = [];
+    const best = gridOf(skyCount, stepCount);
+    for (const pack of packs) {
+      const volts = packStore(pack.spec).volts.nominalVolts;
+      for (const reach of panelReachesPack(spec, pack.spec, controllers, leads, coldestAirC)) {
+        requiresAnyOf.push({ itemIds: [reach.controllerItemId, pack.itemId, ...reach.leadItemIds].sort() });
+        const key = stationSeriesKey(g.itemId, reach.controllerItemId, volts);
+        let series = panelSeriesCache.get(key);
+        if (!series) {
+          const controller = controllers.find((c) => c.itemId === reach.controllerItemId);
+          const known = sameSun ? reuse.panelSeriesCache.get(key) : undefined;
+          series = known ? [...known] : controller ? stationPanelSeries(spec, controller.spec, volts, solar) : [];
+          panelSeriesCache.set(key, series);
+        }
+        series.forEach((one, k) => {
+          const row = best[k] as number[];
+          for (let i = 0; i < stepCount; i++) {
+            const wh = frozen[i] ? 0 : (one[i] ?? 0) * (steps[i]?.durationH ?? 0);
+            if (wh > (row[i] ?? 0)) row[i] = wh;
+          }
+        });
+      }
+    }
+    if (requiresAnyOf.length === 0) continue;
+    best.forEach((row, k) => row.forEach((wh, i) => wh > 0 && ((anySun[k] as boolean[])[i] = true)));
+    const unique = [...new Map(requiresAnyOf.map((a) => [a.itemIds.join('+'), a])).values()].sort((a, b) =>
+      a.itemIds.join('+') < b.itemIds.join('+') ? -1 : 1,
+    );
+    const groupId = `station:${unique.map((a) => a.itemIds.join('+')).join('|')}`;
+    if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf: unique });
+    panels.push({ itemId: g.itemId, harvestWh: best.map(perDay), harvestWhByStep: best, groupId });
+  }
+
   // Stores.
-  const stores: StoreCoefficients[] = banks.map((b) => {
+  const acceptGrids = (inputMaxW: number) => {
     const byStep = gridOf(skyCount, stepCount);
     const daily = gridOf(skyCount, dayCount);
     for (let s = 0; s < skyCount; s++) {
       for (let i = 0; i < stepCount; i++) {
-        const wh = frozen[i] ? 0 : b.spec.inputMaxW * (steps[i]?.durationH ?? 0);
+        const wh = frozen[i] ? 0 : inputMaxW * (steps[i]?.durationH ?? 0);
         (byStep[s] as number[])[i] = wh;
         if (anySun[s]?.[i]) {
           const d = steps[i]?.dayIndex ?? 0;
@@ -181,14 +243,25 @@ export function planningContext(
         }
       }
     }
+    return { acceptWh: daily, acceptWhByStep: byStep };
+  };
+  // A pack takes at most its own charge limit (its controllers can only lower it): an upper bound, as the model needs.
+  const packStores: StoreCoefficients[] = packs.map((b) => {
+    const pack = packStore(b.spec, packDrawA(b.spec));
     return {
       itemId: b.itemId,
-      usableWh: bankUsableWh(b.spec),
-      chargeEfficiency: b.spec.chargeEfficiency,
-      acceptWh: daily,
-      acceptWhByStep: byStep,
+      usableWh: pack.usableWh,
+      chargeEfficiency: pack.chargeEfficiency,
+      ...acceptGrids(pack.packInputMaxW),
     };
   });
+  const bankStores: StoreCoefficients[] = banks.map((b) => ({
+    itemId: b.itemId,
+    usableWh: bankUsableWh(b.spec),
+    chargeEfficiency: b.spec.chargeEfficiency,
+    ...acceptGrids(b.spec.inputMaxW),
+  }));
+  const stores = [...bankStores, ...packStores];
 
   // Devices: paths and demand.
   const tripHours = steps.reduce((h, s) => h + s.durationH, 0);
@@ -263,6 +336,44 @@ export function planningContext(
         }
       }
     }
+    // Paths from 12 V packs: a 12 V device over a DC lead (or a captive plug), a USB device through a 12 V → USB
+    // adapter and the leads of its two hops. Only leads with an end on the pack, the adapters or the device can be part
+    // of one.
+    const adapters = converters.filter((c) => c.spec.converterType === '12v-to-usb');
+    const packEnds = [
+      ...packs.map((b) => b.spec.port.connector),
+      ...adapters.flatMap((c) => [c.spec.inputPort.connector, c.spec.outputPort.connector]),
+      d.spec.chargePort.connector,
+    ];
+    const packLeads = leads.filter(
+      (l) => packEnds.includes(l.spec.fromConnector) || packEnds.includes(l.spec.toConnector),
+    );
+    const packLeadSets: KitLead[][] = [[], ...packLeads.map((l) => [l])];
+    if (!twelveVolt)
+      for (const a of packLeads) for (const b of packLeads) if (a.itemId < b.itemId) packLeadSets.push([a, b]);
+    const packConverterSets: KitConverter[][] = twelveVolt ? [[]] : adapters.map((c) => [c]);
+    let liveShare = 0;
+    /** Each pack with the tail of a path from it: a pack counts as this device's store only with a whole path. */
+    const packWithTails = new Map<string, string[]>();
+    for (const pack of packs) {
+      for (const cs of packConverterSets) {
+        for (const ls of packLeadSets) {
+          for (const path of packChargePaths(pack.spec, d.spec, cs, ls).paths) {
+            const tail = [
+              ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
+            ].sort();
+            tails.set(tail.join('|'), tail);
+            const itemIds = [pack.itemId, ...tail].sort();
+            packWithTails.set(itemIds.join('|'), itemIds);
+            const key = itemIds.join('|');
+            const known = alternatives.get(key);
+            if (!known || known.efficiency < path.pathEfficiency)
+              alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+            if ((path as ChargePath & Partial<PackPath>).live) liveShare = Math.max(liveShare, path.pathEfficiency);
+          }
+        }
+      }
+    }
     const list = [...alternatives.values()];
     const label = input.deviceNames?.[d.deviceId] ?? d.deviceId;
     // The need is split in two (a relaxation of "some bank with some tail that fits it", which keeps the model small:
@@ -278,21 +389,35 @@ export function planningContext(
         alternatives: minimalTails.map((t): PathAlternative => ({ itemIds: t, pathId: t.join(' + ') })),
       });
     }
-    if (list.length > 0 && banksWithPath.size < banks.length) {
+    // Some store that starts a path: a bank alone (its tail is in the tail need), or a pack with a whole path's tail —
+    // a pack path's tail (a 12 V → USB adapter and its leads) often holds a bank path's tail (the phone's lead), so the
+    // tail need alone would let a pack stand in without its adapter, and leave the adapter with no role at all.
+    const packAlternatives = [...packWithTails.values()].filter(
+      (a) => ![...packWithTails.values()].some((o) => o.length < a.length && o.every((id) => a.includes(id))),
+    );
+    if (list.length > 0 && (banksWithPath.size < banks.length || packAlternatives.length > 0)) {
       needs.push({
         needId: `${d.deviceId}:store`,
         label,
-        alternatives: [...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })),
+        alternatives: [
+          ...[...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })),
+          ...packAlternatives
+            .sort((a, b) => (a.join('|') < b.join('|') ? -1 : 1))
+            .map((ids): PathAlternative => ({ itemIds: ids, pathId: ids.join(' + ') })),
+        ],
       });
     }
     if (list.length === 0) continue;
     const best = Math.max(...list.map((a) => a.efficiency));
     const worst = Math.min(...list.map((a) => a.efficiency));
+    // A device that can run live from a pack draws its use straight through the lead (no charging loss) and only as
+    // it uses it: its least draw by a day's end counts the use up to then, at the better of the two shares.
+    const bestShare = Math.max(d.spec.chargeEfficiency * best, liveShare);
     const perHourWh = deviceDemandWhPerDay(d.spec) / 24;
     hoursByDayEnd.forEach((h, t) => {
       const usedWh = perHourWh * h;
-      const neededWh = perHourWh * (hoursToNextTopUp[t] ?? h);
-      leastCum[t] = (leastCum[t] ?? 0) + Math.max(0, neededWh - d.spec.ownBatteryWh) / (d.spec.chargeEfficiency * best);
+      const neededWh = liveShare > 0 ? usedWh : perHourWh * (hoursToNextTopUp[t] ?? h);
+      leastCum[t] = (leastCum[t] ?? 0) + Math.max(0, neededWh - d.spec.ownBatteryWh) / bestShare;
       mostCum[t] = (mostCum[t] ?? 0) + usedWh / (d.spec.chargeEfficiency * worst);
     });
   }
@@ -354,7 +479,9 @@ function dominanceOf(g: PlanningGear): DominanceAttribute[] {
   const spec = g.spec;
   switch (spec.kind) {
     case 'panel':
-      return [signature({ port: spec.outputPort }, [])];
+      // A 12 V panel's harvest depends on its controller and pack hour by hour (PWM follows the pack's voltage): never
+      // compared by dominance.
+      return spec.panelType === 'usb' ? [signature({ port: spec.outputPort, panelType: spec.panelType }, [])] : [];
     case 'bank':
       return [
         signature(spec, [

@@ -8,6 +8,7 @@ import type { PlanGramPrice, PlanKit, PlanResult, PlanSwap } from '../schemas/pl
 import type { TripSolarOptions } from '../sun/trip-solar.js';
 import { planningContext, type PlanningContext } from './build-problem.js';
 import { evaluateKit, planKit } from './evaluate-kit.js';
+import { pathChoice } from './path-choice.js';
 import { buysText, countedName, dayLabel, gramsText, listText, percentText, skyName } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';
 
@@ -281,6 +282,7 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
       swaps: [],
       gramPrices: [],
       nothingFeasible: { missing, shortfalls: answer.shortfalls, runsDry, text },
+      pathChoice: null,
       notes,
       stats: { ...stats, totalMs: now() - startMs },
     };
@@ -292,6 +294,7 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   evaluation.verdict.text = withDeviceNames(context, evaluation.verdict.text);
   const swaps: PlanSwap[] = [];
   const gramPrices: PlanGramPrice[] = [];
+  const choice = pathChoice(context, counts, { now, ...left() });
   if (options.withExtras !== false) {
     const named = (lines: { itemId: string; count: number }[]) =>
       lines.map((l) => ({ ...l, name: context.gearById.get(l.itemId)?.name ?? l.itemId }));
@@ -337,6 +340,7 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
     swaps,
     gramPrices,
     nothingFeasible: null,
+    pathChoice: choice,
     notes,
     stats: { ...stats, totalMs: now() - startMs },
   };

@@ -214,6 +214,21 @@ export type PlanGramPrice = z.infer<typeof planGramPriceSchema>;
 
 export const planStatuses = ['optimal', 'over-limit', 'best-so-far', 'nothing-feasible'] as const;
 
+/**
+ * Which power path the kit gives the 12 V devices — a 12 V pack (with its controller and 12 V panel when it has them),
+ * USB banks with a boost converter, or both — and what the other path would weigh for the same trip.
+ */
+export const planPathChoiceSchema = z.object({
+  path: z.enum(['pack', 'banks', 'both']),
+  /** Grams of the lightest kit that works without the chosen path; null when none does (or both are carried). */
+  otherMassG: z.number().nullable(),
+  /** otherMassG − the kit's grams; null as above. */
+  savedG: z.number().nullable(),
+  /** "The LiFePO₄ pack path is 140 g lighter than two banks and a boost converter for this trip." */
+  text: z.string(),
+});
+export type PlanPathChoice = z.infer<typeof planPathChoiceSchema>;
+
 export const planResultSchema = z.object({
   modelVersion: z.string(),
   status: z.enum(planStatuses),
@@ -232,6 +247,8 @@ export const planResultSchema = z.object({
       text: z.string(),
     })
     .nullable(),
+  /** Only when the gear holds both paths for a 12 V device (older plans have none). */
+  pathChoice: planPathChoiceSchema.nullable().default(null),
   notes: z.array(z.string()),
   stats: z.object({
     rounds: z.number(),

@@ -236,7 +236,26 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
       });
     }
   }
-  storeEntries.sort(meritCompare);
+  // How many of the trip's devices each store item can charge (needed or not, so the order never moves with demand).
+  const reachCount = new Map<string, number>();
+  for (const e of storeEntries) {
+    if (reachCount.has(e.itemId)) continue;
+    let n = 0;
+    for (const d of devices) {
+      const found =
+        e.kind === 'bank'
+          ? chargePaths(e.spec, d.spec, converters, leads)
+          : packChargePaths(e.spec, d.spec, converters, leads);
+      if (found.paths.length > 0) n++;
+    }
+    reachCount.set(e.itemId, n);
+  }
+  // Top-ups draw the least contested stores first (fewest devices that can charge from them), then in merit order: a
+  // device whose banks it shares with a headlamp keeps off a pack that the radio also needs while its banks hold
+  // energy — an added 12 V → USB adapter gives the phone that pack without letting it drain it first.
+  storeEntries.sort(
+    (a, b) => (reachCount.get(a.itemId) ?? 0) - (reachCount.get(b.itemId) ?? 0) || meritCompare(a, b),
+  );
 
   const storeCount = storeEntries.length;
   const stores: StoreUnit[] = storeEntries.map((s) => ({

@@ -16,6 +16,7 @@ import {
 } from '../schemas/items.js';
 import type { KitItemSpec, TripDevice } from '../schemas/kit.js';
 import type { Connector, OutputPort, Port } from '../schemas/ports.js';
+import { batterySpecSchema, controllerSpecSchema, twelveVoltPanelSpecSchema } from '../schemas/station-items.js';
 import { tripSolarInputSchema, type TripSolarInput } from '../schemas/trip-solar.js';
 import { skyPresets } from '../sky/sky-presets.js';
 import { minCloudyPersistence } from '../sky/cloud-chain.js';
@@ -208,12 +209,101 @@ export function randomPhoneLead(random: Random): LeadSpec {
   });
 }
 
+/**
+ * A 12 V-class pack with ring terminals: 4S LiFePO₄, 3S or 4S lithium polymer, or a 6-cell lead-acid battery,
+ * 2–10 Ah, with about the mass of such packs (from memory: lithium 110–160 Wh/kg, lead-acid 30–40 Wh/kg).
+ */
+export function randomPack(random: Random): KitItemSpec {
+  const pack = pick(random, [
+    { chemistry: 'lifepo4', cellsInSeries: 4, whPerKg: 110 },
+    { chemistry: 'lipo', cellsInSeries: 3, whPerKg: 150 },
+    { chemistry: 'lipo', cellsInSeries: 4, whPerKg: 150 },
+    { chemistry: 'lead-acid', cellsInSeries: 6, whPerKg: 35 },
+  ] as const);
+  const capacityAh = pick(random, [2, 3, 4, 5, 6, 8, 10]);
+  const cellVolts = { lifepo4: 3.2, lipo: 3.7, 'lead-acid': 2 }[pack.chemistry];
+  return batterySpecSchema.parse({
+    kind: 'battery',
+    chemistry: pack.chemistry,
+    cellsInSeries: pack.cellsInSeries,
+    capacityAh,
+    ...(chance(random, 0.4) ? { chargeCRate: pick(random, [0.2, 0.5, 1]) } : {}),
+    port: socket('ring-terminal'),
+    massG: Math.round(
+      ((capacityAh * cellVolts * pack.cellsInSeries) / pack.whPerKg) * 1000 * between(random, 0.9, 1.1),
+    ),
+  });
+}
+
+/** A PWM or MPPT controller from a 12 V accessory socket to captive ring terminals, 22–50 V input, 3–10 A. */
+export function randomController(random: Random): KitItemSpec {
+  return controllerSpecSchema.parse({
+    kind: 'controller',
+    controllerType: chance(random, 0.5) ? 'mppt' : 'pwm',
+    maxInputVolts: pick(random, [22, 25, 30, 50]),
+    maxChargeA: pick(random, [3, 5, 10]),
+    efficiency: hundredth(between(random, 0.9, 0.97)),
+    inputPort: socket('12v-accessory'),
+    outputPort: captive('ring-terminal'),
+    massG: whole(random, 60, 250),
+  });
+}
+
+/** A 12 V-class folding panel, 10–60 W (Vmp 17–18.5 V, Voc 1.2 × Vmp), captive 12 V accessory plug, 25–35 g/W. */
+export function randomTwelveVoltPanel(random: Random): KitItemSpec {
+  const ratedW = pick(random, [10, 20, 30, 40, 60]);
+  const maxPowerVolts = tenth(between(random, 17, 18.5));
+  return twelveVoltPanelSpecSchema.parse({
+    kind: 'panel',
+    panelType: '12v',
+    ratedW,
+    maxPowerVolts,
+    maxPowerAmps: hundredth(ratedW / maxPowerVolts),
+    openCircuitVolts: tenth(maxPowerVolts * 1.2),
+    outputPort: captive('12v-accessory'),
+    massG: Math.round(ratedW * between(random, 25, 35)),
+  });
+}
+
+/** A fused DC lead from ring terminals to a radio's barrel or DC socket, 16–20 AWG, 0.5–2 m. */
+export function randomDcLead(random: Random): LeadSpec {
+  return leadSpecSchema.parse({
+    kind: 'lead',
+    fromConnector: 'ring-terminal',
+    toConnector: chance(random, 0.8) ? 'barrel-5.5x2.1' : 'radio-dc',
+    lengthM: pick(random, [0.5, 1, 2]),
+    gaugeAwg: pick(random, [16, 18, 20]),
+    fuseA: 5,
+    massG: whole(random, 20, 60),
+  });
+}
+
+/** A 12 V → USB adapter: captive ring terminals in, a USB-A socket out (5 V, 2–3 A), 85–93 %. */
+export function randomUsbAdapter(random: Random): KitItemSpec {
+  return converterSpecSchema.parse({
+    kind: 'converter',
+    converterType: '12v-to-usb',
+    inputVolts: 12,
+    outputVolts: 5,
+    maxOutputA: pick(random, [2, 2.4, 3]),
+    efficiency: hundredth(between(random, 0.85, 0.93)),
+    inputPort: captive('ring-terminal'),
+    outputPort: socket('usb-a'),
+    massG: whole(random, 15, 45),
+  });
+}
+
 const kindMaker = {
   panel: randomUsbPanel,
   bank: randomBank,
   converter: randomBoostConverter,
   lead: randomLead,
   'phone-lead': randomPhoneLead,
+  pack: randomPack,
+  controller: randomController,
+  'panel-12v': randomTwelveVoltPanel,
+  'dc-lead': randomDcLead,
+  adapter: randomUsbAdapter,
 } as const;
 export type GearKind = keyof typeof kindMaker;
 
@@ -324,7 +414,24 @@ export interface RandomPlanningOptions extends RandomTripOptions, RandomLockerOp
   radioChance?: number;
   /** Chance that a locker starts with a bank and a USB-A to USB-C lead (default 0.8), so a phone often has a charging path. */
   coreChance?: number;
+  /**
+   * Lockers holding both power paths: the trip always has a radio (which may run live from a pack), and the locker
+   * holds 12 V packs, controllers, 12 V panels, DC leads and adapters beside the USB gear.
+   */
+  bothPaths?: boolean;
 }
+
+const bothPathsMix: Partial<Record<GearKind, number>> = {
+  panel: 0.12,
+  bank: 0.18,
+  converter: 0.12,
+  lead: 0.08,
+  pack: 0.16,
+  controller: 0.1,
+  'panel-12v': 0.1,
+  'dc-lead': 0.1,
+  adapter: 0.04,
+};
 
 /**
  * A random planning input: a trip, 1–3 devices (a phone, often a headlamp, sometimes a 12 V radio), a locker of 3–7
@@ -333,22 +440,39 @@ export interface RandomPlanningOptions extends RandomTripOptions, RandomLockerOp
  * @example randomPlanningInput(seededRandom(7)).gear.length // 1…7
  */
 export function randomPlanningInput(random: Random, options: RandomPlanningOptions = {}): PlanningInput {
-  const solarInput = randomTripSolarInput(random, options);
+  // Lockers of both paths hold few banks for the phone (the radio has the pack), so their trips are shorter.
+  const solarInput = randomTripSolarInput(random, {
+    ...(options.bothPaths ? { nights: [1, 5] as const } : {}),
+    ...options,
+  });
   const devices: TripDevice[] = [{ deviceId: 'phone', spec: randomPhone(random) }];
   if (chance(random, 0.5)) devices.push({ deviceId: 'headlamp', spec: randomHeadlamp(random) });
-  const radio = chance(random, options.radioChance ?? 0.35);
-  if (radio) devices.push({ deviceId: 'radio', spec: randomRadio(random) });
-  const mix = options.mix ?? (radio ? { panel: 0.27, bank: 0.3, converter: 0.18, lead: 0.25 } : defaultMix);
-  const firstKinds: GearKind[] = chance(random, options.coreChance ?? 0.8)
+  const radio = options.bothPaths || chance(random, options.radioChance ?? 0.35);
+  if (radio) {
+    const spec = randomRadio(random);
+    devices.push({ deviceId: 'radio', spec: options.bothPaths ? { ...spec, canRunLive: chance(random, 0.4) } : spec });
+  }
+  const mix =
+    options.mix ??
+    (options.bothPaths ? bothPathsMix : radio ? { panel: 0.27, bank: 0.3, converter: 0.18, lead: 0.25 } : defaultMix);
+  const firstKinds: GearKind[] = options.bothPaths
     ? [
         'bank',
         'phone-lead',
-        ...(radio ? (['converter'] as const) : []),
-        ...(chance(random, 0.5) ? (['panel'] as const) : []),
+        'pack',
+        'dc-lead',
+        ...(chance(random, 0.5) ? (['panel-12v', 'controller'] as const) : (['converter', 'panel'] as const)),
       ]
-    : [];
+    : chance(random, options.coreChance ?? 0.8)
+      ? [
+          'bank',
+          'phone-lead',
+          ...(radio ? (['converter'] as const) : []),
+          ...(chance(random, 0.5) ? (['panel'] as const) : []),
+        ]
+      : [];
   const gear = randomLocker(random, {
-    itemTypes: options.itemTypes ?? whole(random, 3, 7),
+    itemTypes: options.itemTypes ?? (options.bothPaths ? 7 : whole(random, 3, 7)),
     ...options,
     mix,
     firstKinds,

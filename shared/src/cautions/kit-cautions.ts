@@ -8,6 +8,7 @@ import type { KitEntry, TripDevice } from '../schemas/kit.js';
 import type { Connector } from '../schemas/ports.js';
 import type { KitSimulation } from '../simulation/types.js';
 import { bankRatedWh } from '../storage/bank.js';
+import { stationKitCautions } from './station-kit-cautions.js';
 import type { TripSolarSeries } from '../sun/trip-solar-types.js';
 
 /** How strongly a caution is shown. */
@@ -24,7 +25,9 @@ export type CautionId =
   | 'airline-forbidden'
   | 'dc-fusing'
   | 'thin-margin'
-  | 'estimates';
+  | 'estimates'
+  /** The 12 V path's cautions and checks (`station-kit-cautions.ts`), e.g. `station-lithium-protection`. */
+  | `station-${string}`;
 
 /** One caution: an id, a severity and our own plain wording. */
 export interface Caution {
@@ -64,7 +67,8 @@ export function kitCautions(input: KitCautionInput): Caution[] {
   const { kit, devices, solar, simulation } = input;
   const cautions: Caution[] = [];
   const banks = kit.filter((e) => e.spec.kind === 'bank');
-  const hasLithium = banks.length > 0 || devices.some((d) => d.spec.ownBatteryWh > 0);
+  const lithiumPacks = kit.filter((e) => e.spec.kind === 'battery' && e.spec.chemistry !== 'lead-acid');
+  const hasLithium = banks.length > 0 || lithiumPacks.length > 0 || devices.some((d) => d.spec.ownBatteryWh > 0);
 
   for (const entry of banks) {
     if (entry.spec.kind !== 'bank') continue;
@@ -93,7 +97,7 @@ export function kitCautions(input: KitCautionInput): Caution[] {
       cautions.push({
         id: 'freezing',
         severity: 'warning',
-        itemIds: banks.map((b) => b.itemId),
+        itemIds: [...banks, ...lithiumPacks].map((b) => b.itemId),
         text: `The air is below freezing for about ${Math.round(frozenH)} hours of this trip. Never charge lithium cells below 0 °C: keep banks and devices in a pocket or sleeping bag and charge them only once they are warm. The plan does not charge banks from the panel in those hours.`,
       });
     }
@@ -132,11 +136,12 @@ export function kitCautions(input: KitCautionInput): Caution[] {
     (e) => e.spec.kind === 'lead' && (dcConnectors.has(e.spec.fromConnector) || dcConnectors.has(e.spec.toConnector)),
   );
   const dcDevices = devices.filter((d) => d.spec.chargesVia === '12v-dc');
-  if (dcLeads.length > 0 || (dcDevices.length > 0 && boosts.length > 0)) {
+  const packs = kit.filter((e) => e.spec.kind === 'battery');
+  if (dcLeads.length > 0 || packs.length > 0 || (dcDevices.length > 0 && boosts.length > 0)) {
     cautions.push({
       id: 'dc-fusing',
       severity: 'warning',
-      itemIds: [...dcLeads.map((l) => l.itemId), ...dcDevices.map((d) => d.deviceId)],
+      itemIds: [...dcLeads.map((l) => l.itemId), ...packs.map((p) => p.itemId), ...dcDevices.map((d) => d.deviceId)],
       text: 'Fuse DC leads on the positive side, close to the battery, and check the polarity of every plug before connecting.',
     });
   }
@@ -159,6 +164,8 @@ export function kitCautions(input: KitCautionInput): Caution[] {
       text: `On the worst day this kit has only ${Math.round(simulation.verdict.worstMarginShare * 100)} % of its storage to spare above the reserve. A longer cloudy spell, a cold snap or more use than planned could empty it.`,
     });
   }
+
+  cautions.push(...stationKitCautions({ kit, devices, ...(solar ? { solar } : {}) }));
 
   cautions.push({
     id: 'estimates',

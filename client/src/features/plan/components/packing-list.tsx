@@ -3,7 +3,7 @@ import { useId, type ReactNode } from 'react';
 import { formatDate } from '@/lib/format';
 import type { ChosenKit } from '../api/types';
 import { dayLabel, formatGrams, formatWh } from '../utils/format';
-import { hopsOf, packsByCarrier, scheduleRows, sparesAmongLeads } from '../utils/packing';
+import { hopsOf, packsByCarrier, scheduleKindLabels, scheduleRows, sparesAmongLeads } from '../utils/packing';
 import { CautionsList } from './cautions-list';
 import { GramMeter } from './gram-meter';
 import { VerdictSentence } from './verdict-sentence';
@@ -166,8 +166,8 @@ export function PackingList({ chosen, members, devices }: PackingListProps) {
 
       <ListSection title="Charging schedule">
         <p className="text-sm text-scree-700">
-          Times are local to the trip; energies in Wh, in the expected sky. Sun into a bank while walking or at camp;
-          top-ups from a bank at camp.
+          Times are local to the trip; energies in Wh, in the expected sky. Sun into a bank or a 12 V pack while walking
+          or at camp; top-ups from a bank or pack at camp; a radio run live draws straight from its pack.
         </p>
         {rows.length === 0 ? (
           <p className="text-scree-700">Nothing needs charging on this trip.</p>
@@ -209,7 +209,7 @@ export function PackingList({ chosen, members, devices }: PackingListProps) {
                       )}
                     </td>
                     <td className="px-3 py-1.5">
-                      <span className="text-scree-600">{row.kind === 'harvest' ? 'Sun: ' : 'Top-up: '}</span>
+                      <span className="text-scree-600">{scheduleKindLabels[row.kind]}</span>
                       {row.to} from {row.from}
                       {row.via && <span className="text-scree-600"> via {row.via}</span>}
                     </td>

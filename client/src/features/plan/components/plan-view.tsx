@@ -10,6 +10,7 @@ import { GramPrices } from './gram-prices';
 import { KitTable } from './kit-table';
 import { LedgerTable } from './ledger-table';
 import { NothingFeasible } from './nothing-feasible';
+import { PathChoiceNote } from './path-choice-note';
 import { PlanSection } from './plan-section';
 import { SwapsList } from './swaps-list';
 import { VerdictSentence } from './verdict-sentence';
@@ -78,6 +79,7 @@ export function PlanView({ tripId, plan, canChooseKit, focusAnswer = false }: Pl
                 )
               }
             />
+            {result.pathChoice && <PathChoiceNote choice={result.pathChoice} />}
           </PlanSection>
         </div>
       )}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildEvaluation, buildPlanKit, buildPlanTrip, fixtureGear, kitLines, optimumLines } from '@/testing/plan-data';
-import { packsByCarrier, scheduleRows } from './packing';
+import { hopsOf, packsByCarrier, scheduleKindLabels, scheduleRows } from './packing';
 
 const trip = buildPlanTrip();
 const leader = trip.members[0]!;
@@ -70,5 +70,36 @@ describe('scheduleRows', () => {
       ['05:30', true, { time: '08:30', daysLater: 0 }],
     ]);
     expect(rows[0]?.via).toBe(fixtureGear.boost.name);
+  });
+});
+
+describe('hopsOf with the 12 V path', () => {
+  it('orders sun into stores, then top-ups, then a radio run live from its pack', () => {
+    const session = (kind: 'harvest' | 'top-up' | 'live', fromId: string, toId: string) => ({
+      kind,
+      dayIndex: 0,
+      fromId,
+      toId,
+      fromName: fromId,
+      toName: toId,
+      converterItemId: null,
+      leadItemIds: [],
+      startLocalTime: '10:00',
+      start: '2027-07-10T10:00:00.000Z',
+      end: '2027-07-10T11:00:00.000Z',
+      energyWh: 1,
+    });
+    const hops = hopsOf(
+      {
+        schedule: [
+          session('live', 'pack#1', 'radio'),
+          session('top-up', 'pack#1', 'radio'),
+          session('harvest', 'panel', 'pack#1'),
+        ],
+      },
+      [],
+    );
+    expect(hops.map((h) => h.kind)).toEqual(['harvest', 'top-up', 'live']);
+    expect(scheduleKindLabels.live).toBe('Runs live: ');
   });
 });

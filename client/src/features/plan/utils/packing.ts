@@ -25,6 +25,16 @@ export interface PackingHop {
   kind: ChargeSessionJson['kind'];
 }
 
+/** Hops in the order energy flows: sun into stores, top-ups from them, then radios run live from a pack. */
+const hopOrder: Record<ChargeSessionJson['kind'], number> = { harvest: 0, 'top-up': 1, live: 2 };
+
+/** How each kind of session starts its line in the schedule. */
+export const scheduleKindLabels: Record<ChargeSessionJson['kind'], string> = {
+  harvest: 'Sun: ',
+  'top-up': 'Top-up: ',
+  live: 'Runs live: ',
+};
+
 const nameIn = (lines: readonly PlanKitLine[]) => {
   const names = new Map(lines.map((line) => [line.itemId, line.name]));
   return (itemId: string) => names.get(itemId) ?? 'an item not in this kit';
@@ -49,7 +59,7 @@ export const hopsOf = (evaluation: Pick<KitEvaluation, 'schedule'>, lines: reado
       kind: s.kind,
     });
   }
-  return [...hops.values()].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === 'harvest' ? -1 : 1));
+  return [...hops.values()].sort((a, b) => hopOrder[a.kind] - hopOrder[b.kind]);
 };
 
 /** Leads in the kit that no hop of the schedule uses (spares, or a path the expected sky never needed). */

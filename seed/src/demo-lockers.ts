@@ -323,7 +323,8 @@ const fernLocker: LockerItemInputRaw[] = [
       maxChargeA: 5,
       efficiency: 0.95,
       inputPort: socket('barrel-5.5x2.1'),
-      outputPort: socket('ring-terminal'),
+      // Its battery lead ends in ring terminals that bolt onto the pack's.
+      outputPort: cable('ring-terminal'),
       massG: 110,
     },
   },

@@ -115,7 +115,7 @@ export function TryKitTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
       <EmptyState title="No power gear for this trip yet">
         {gear.data.leaderLockerHidden
           ? 'The plan draws on the leader’s locker, which only the leader can pick from. Share gear on the Party tab to try kits here.'
-          : 'Add panels, banks, converters and leads to the locker or share them on the Party tab, then pick a kit from them here.'}
+          : 'Add panels, banks, 12 V packs, converters, controllers and leads to the locker or share them on the Party tab, then pick a kit from them here.'}
       </EmptyState>
     );
 

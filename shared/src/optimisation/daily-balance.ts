@@ -1,5 +1,5 @@
 import { evaluateDailyModel } from './energy-cuts.js';
-import type { PresolvedProblem } from './presolve.js';
+import { alternativePresent, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts, MissingPath } from './types.js';
 
 /** The daily model's verdict for one fixed kit. */
@@ -22,7 +22,8 @@ export interface DailyBalance {
 export function dailyBalance(pre: PresolvedProblem, kit: KitCounts): DailyBalance {
   const count = (i: number): number =>
     Math.min(kit.get(pre.items[i]?.candidate.itemId ?? '') ?? 0, pre.items[i]?.candidate.ownedCount ?? 0);
-  const present = (alt: readonly (readonly [number, number])[]): boolean => alt.every(([i, n]) => count(i) >= n);
+  const counts = pre.items.map((_, i) => count(i));
+  const present = (alt: IndexedAlternative): boolean => alternativePresent(alt, counts);
   const missingPaths: MissingPath[] = [
     ...pre.missingNeeds.map((n) => ({ needId: n.needId, ...(n.label ? { label: n.label } : {}) })),
     ...pre.needs

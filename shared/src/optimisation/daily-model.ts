@@ -87,7 +87,8 @@ function cumulative(row: readonly number[]): number[] {
  * Stores start full, so stored energy at the end of day t is A_{s,t+1} = C + Σ_{u≤t}(N_{s,u} − D_{s,u}) − spill, and:
  *   room:    Σ_{u≤t} N_{s,u} ≤ Σ_{u≤t} D_{s,u} (`overlapping`) or Σ_{u<t} D_{s,u} (`after-harvest`: full before top-ups),
  *   reserve: (1 − r) C + Σ_{u≤t} N_{s,u} − m ≥ Σ_{u≤t} D_{s,u} (rows only on days with demand: the others are implied).
- * Paths: per need d, Σ_a z_{d,a} ≥ 1 with z_{d,a} ≤ Σ_{k≥c} y_{i,k} for each item i the alternative needs c times.
+ * Paths: per need d, Σ_a z_{d,a} ≥ 1 with z_{d,a} ≤ Σ_{k≥c} y_{i,k} for each item i the alternative needs c times,
+ * and z_{d,a} ≤ Σ_{i∈anyOf} Σ_k y_{i,k} when it needs one of a list.
  * Dominance (presolve): Σ_{k≥1} y_{i,k} ≤ y_{j,owned_j}. Cuts as `KitCut`.
  * Source: the formulation is ours; one-hot integer expansion and no-good cuts are textbook MILP modelling
  * (H. P. Williams, Model Building in Mathematical Programming, 5th ed., Wiley 2013, ch. 9).
@@ -134,12 +135,18 @@ export function buildDailyModel(
       ? []
       : range(1, pre.items[i]?.candidate.ownedCount ?? 0).map((k) => [yColumn(i, k), factor * k] as const);
 
+  /** Terms −Σ_{i∈items} Σ_k y_{i,k}: "one of these items is packed" (for "alternative ≤ that" rows). */
+  const anyOfTerms = (items: readonly number[]): (readonly [string, number])[] =>
+    items.flatMap((i) => atLeast(i, 1, -1));
+
   // Paths for devices.
   pre.needs.forEach((need, d) => {
     need.alternatives.forEach((alt, a) => {
       columns.push(zColumn(d, a));
-      for (const [item, n] of alt)
+      for (const [item, n] of alt.items)
         rows.push({ name: `zp${d}_${a}_${item}`, terms: [[zColumn(d, a), 1], ...atLeast(item, n, -1)], upper: 0 });
+      if (alt.anyOf.length > 0)
+        rows.push({ name: `zq${d}_${a}`, terms: [[zColumn(d, a), 1], ...anyOfTerms(alt.anyOf)], upper: 0 });
     });
     rows.push({ name: `need${d}`, terms: need.alternatives.map((_, a) => [zColumn(d, a), 1] as const), lower: 1 });
   });
@@ -148,8 +155,10 @@ export function buildDailyModel(
     g.requiresAnyOf.forEach((alt, a) => {
       columns.push(wColumn(gi, a));
       upperBounds[wColumn(gi, a)] = 1;
-      for (const [item, n] of alt)
+      for (const [item, n] of alt.items)
         rows.push({ name: `wp${gi}_${a}_${item}`, terms: [[wColumn(gi, a), 1], ...atLeast(item, n, -1)], upper: 0 });
+      if (alt.anyOf.length > 0)
+        rows.push({ name: `wq${gi}_${a}`, terms: [[wColumn(gi, a), 1], ...anyOfTerms(alt.anyOf)], upper: 0 });
     });
   });
 

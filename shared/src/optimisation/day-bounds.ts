@@ -1,4 +1,4 @@
-import type { PresolvedProblem } from './presolve.js';
+import type { ActiveItem, PresolvedProblem } from './presolve.js';
 
 /**
  * One upper bound on a sky-day's stored harvest, linear in the item counts: Σ_i coefficientWh[i] · n_i (Wh, already
@@ -42,16 +42,20 @@ function hasStepDetail(pre: PresolvedProblem): boolean {
  * @example dayBoundsOf(pre)(0, 0).accept.length // pre.items.length
  */
 export function dayBoundsOf(pre: PresolvedProblem): (s: number, t: number) => DayBounds {
-  let hit = boundsCache.get(pre);
+  let hit = boundsCache.get(pre.items);
   if (!hit) {
     hit = buildDayBounds(pre);
-    boundsCache.set(pre, hit);
+    boundsCache.set(pre.items, hit);
   }
   return hit;
 }
 
-/** One bounds function per presolved problem: every evaluation of a search reads the same memo. */
-const boundsCache = new WeakMap<PresolvedProblem, (s: number, t: number) => DayBounds>();
+/**
+ * One bounds function per items array: every evaluation of a search reads the same memo. The bounds depend only on
+ * the items (their panel and store coefficients), the best charge efficiency and the trip's steps, which every
+ * problem sharing an items array shares (a kit view with other demand keeps its items array, see `kit-views.ts`).
+ */
+const boundsCache = new WeakMap<readonly ActiveItem[], (s: number, t: number) => DayBounds>();
 
 function buildDayBounds(pre: PresolvedProblem): (s: number, t: number) => DayBounds {
   const c = pre.problem.coefficients;

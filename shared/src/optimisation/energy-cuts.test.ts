@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDailyModel } from './daily-model.js';
 import { clearlyBroken, evaluateDailyModel } from './energy-cuts.js';
 import { solveWithJsLp } from './js-lp-backend.js';
-import { presolve } from './presolve.js';
+import { alternativePresent, presolve } from './presolve.js';
 import { smallSyntheticWorld, syntheticProblem } from './synthetic-problem.js';
 import type { KitCandidate } from './types.js';
 
@@ -46,7 +46,10 @@ describe('the forward pass of the daily model', () => {
           });
           const paths = pre.needs.every((n) =>
             n.alternatives.some((alt) =>
-              alt.every(([i, count]) => (kit.get(pre.items[i]?.candidate.itemId ?? '') ?? 0) >= count),
+              alternativePresent(
+                alt,
+                pre.items.map((it) => kit.get(it.candidate.itemId) ?? 0),
+              ),
             ),
           );
           const passes = evaluateDailyModel(pre, kit).shortfalls.length === 0 && paths && pre.missingNeeds.length === 0;

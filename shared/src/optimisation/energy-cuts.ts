@@ -1,6 +1,6 @@
 import { dayBoundsOf, dot, type BoundVector } from './day-bounds.js';
 import { groupBigM } from './daily-model.js';
-import type { PresolvedProblem } from './presolve.js';
+import { alternativePresent, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts } from './types.js';
 
 /** Wh a reserve row may miss by and still count as met (float noise of the forward pass). */
@@ -88,9 +88,9 @@ export function evaluateDailyModel(
     for (const i of packed) sum += (v[i] ?? 0) * (counts[i] ?? 0);
     return sum;
   };
-  const present = (alt: readonly (readonly [number, number])[]): boolean =>
-    alt.every(([i, n]) => (counts[i] ?? 0) >= n);
-  const groupOn = pre.groups.map((g) => !g.hasRequirement || g.requiresAnyOf.some(present));
+  const groupOn = pre.groups.map(
+    (g) => !g.hasRequirement || g.requiresAnyOf.some((alt) => alternativePresent(alt, counts)),
+  );
   const capacity = new Float64Array(itemCount);
   pre.items.forEach((it, i) => {
     if (it.store) capacity[i] = (1 - c.reserveShare) * it.store.usableWh;
@@ -222,9 +222,7 @@ function argMin(values: readonly number[]): number {
  */
 export function clearlyBroken(pre: PresolvedProblem, cut: EnergyCut, kit: KitCounts): boolean {
   const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
-  const on = pre.groups.map(
-    (g) => g.requiresAnyOf.filter((alt) => alt.every(([i, n]) => (counts[i] ?? 0) >= n)).length,
-  );
+  const on = pre.groups.map((g) => g.requiresAnyOf.filter((alt) => alternativePresent(alt, counts)).length);
   const lhsWh = dot(cut.itemWh, counts) + dot(cut.groupWh, on);
   return cut.lowerWh - lhsWh > 1e-6 * Math.max(1, Math.abs(cut.lowerWh));
 }

@@ -1,5 +1,6 @@
 import { buildDailyModel, kitFromValues, modelScale, type KitCut, type ModelScale } from './daily-model.js';
 import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
+import { kitViewCuts, kitViewsShort } from './kit-views.js';
 import { solveWithJsLp } from './js-lp-backend.js';
 import { kitKey, kitMassG, kitNoLarger } from './kit.js';
 import type { LinearSolver } from './linear-model.js';
@@ -57,6 +58,11 @@ export interface KitSearchOptions extends OptimiseOptions {
    * save rounds.
    */
   knownRejected?: readonly KitCounts[];
+  /**
+   * Check each kit the daily model passes against its own views too (`kit-views.ts`; default true). Off, the search
+   * finds the daily model's own optimum (the HiGHS cross-check compares that).
+   */
+  kitViews?: boolean;
 }
 
 const stillClock = (): number => 0;
@@ -79,9 +85,12 @@ export function createKitSearch(
   const solverTimeoutMs = options.solverTimeoutMs ?? defaultSolverTimeoutMs;
   const tieBreak = options.tieBreakByMargin ?? true;
   const solve = options.solver ?? solveWithJsLp;
+  const useViews = options.kitViews ?? true;
   const cuts: KitCut[] = [];
   const cache = new Map<string, JudgeVerdict>();
   const rejected: KitCounts[] = [];
+  /** Maximal kits their own views reject (so the judge does too), cut off by their view cuts. */
+  const viewRejected: KitCounts[] = [];
   const stats = { rounds: 0, judgedKits: 0, dailyRejected: 0 };
   const energyCuts: EnergyCut[] = [];
   let lastRunsDry: RunsDry | undefined;
@@ -109,6 +118,7 @@ export function createKitSearch(
   const judgeRejects = (trial: KitCounts): boolean =>
     knownRejectedHolding(trial) !== undefined ||
     evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
+    (useViews && kitViewsShort(presolved, trial)) ||
     !judge(trial).feasible;
 
   // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.
@@ -157,7 +167,26 @@ export function createKitSearch(
   /** Whether the daily model rejects a kit, adding its feasibility cuts to the master when it does. */
   const dailyRejects = (counts: KitCounts): boolean => {
     const evaluation = evaluateDailyModel(presolved, counts);
-    if (evaluation.cuts.length === 0) return false;
+    if (evaluation.cuts.length === 0) {
+      if (!useViews) return false;
+      // The kit's own views (its paths' efficiencies, the stores they reach): their cuts, lifted by the blockers.
+      const viewCuts = kitViewCuts(presolved, counts).filter((cut) => clearlyBroken(presolved, cut, counts));
+      if (viewCuts.length === 0) return false;
+      stats.dailyRejected++;
+      energyCuts.push(...viewCuts);
+      // Grown to a maximal kit its views still reject, the kit has fewer blockers: its cuts hold off a larger region.
+      // Every kit no larger than it holds none of its blockers, so its cuts cut that whole down-set off.
+      const grown = lift(
+        counts,
+        Infinity,
+        (trial) =>
+          evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
+          (useViews && kitViewsShort(presolved, trial)),
+      );
+      energyCuts.push(...evaluateDailyModel(presolved, grown).cuts, ...kitViewCuts(presolved, grown));
+      viewRejected.push(grown);
+      return true;
+    }
     stats.dailyRejected++;
     energyCuts.push(...evaluation.cuts);
     {
@@ -286,6 +315,8 @@ export function createKitSearch(
     get lastRunsDry() {
       return lastRunsDry;
     },
-    rejectedKits: rejected,
+    get rejectedKits() {
+      return [...rejected, ...viewRejected];
+    },
   };
 }

@@ -5,6 +5,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { dailyBalance } from './daily-balance.js';
 import { buildDailyModel } from './daily-model.js';
+import { clearlyBroken } from './energy-cuts.js';
+import { kitViewCuts } from './kit-views.js';
 import { solveWithJsLp } from './js-lp-backend.js';
 import { kitCounts, kitMassG } from './kit.js';
 import { createKitSearch } from './kit-search.js';
@@ -21,7 +23,12 @@ const seedArb = fc.integer({ min: 1, max: 1_000_000 });
 
 function randomKit(candidates: readonly KitCandidate[], picks: readonly number[]): Map<string, number> {
   // Biased towards big kits so that many are feasible.
-  return new Map(candidates.map((c, i) => [c.itemId, Math.min(c.ownedCount, Math.round(((picks[i % picks.length] ?? 0) * (c.ownedCount + 0.49)) / 0.999))]));
+  return new Map(
+    candidates.map((c, i) => [
+      c.itemId,
+      Math.min(c.ownedCount, Math.round(((picks[i % picks.length] ?? 0) * (c.ownedCount + 0.49)) / 0.999)),
+    ]),
+  );
 }
 
 function grams(problem: OptimisationProblem, world: SyntheticWorld): number | null {
@@ -33,18 +40,22 @@ function grams(problem: OptimisationProblem, world: SyntheticWorld): number | nu
 describe('the synthetic judge itself', () => {
   it('is monotone: adding a unit of any item never turns a feasible kit into one that runs dry', () => {
     fc.assert(
-      fc.property(seedArb, fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }), (seed, picks) => {
-        const world = smallSyntheticWorld(seed);
-        const judge = syntheticJudge(world);
-        const { candidates } = syntheticProblem(world);
-        const kit = randomKit(candidates, picks);
-        if (!judge(kit).feasible) return;
-        for (const c of candidates) {
-          if ((kit.get(c.itemId) ?? 0) >= c.ownedCount) continue;
-          const more = new Map(kit).set(c.itemId, (kit.get(c.itemId) ?? 0) + 1);
-          expect(judge(more).feasible).toBe(true);
-        }
-      }),
+      fc.property(
+        seedArb,
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }),
+        (seed, picks) => {
+          const world = smallSyntheticWorld(seed);
+          const judge = syntheticJudge(world);
+          const { candidates } = syntheticProblem(world);
+          const kit = randomKit(candidates, picks);
+          if (!judge(kit).feasible) return;
+          for (const c of candidates) {
+            if ((kit.get(c.itemId) ?? 0) >= c.ownedCount) continue;
+            const more = new Map(kit).set(c.itemId, (kit.get(c.itemId) ?? 0) + 1);
+            expect(judge(more).feasible).toBe(true);
+          }
+        },
+      ),
       { seed: propertySeed, numRuns: 300 },
     );
   });
@@ -54,31 +65,70 @@ describe('the daily model is a relaxation of the judge', () => {
   it('every kit the judge accepts is feasible in the daily model with that kit fixed (forward pass and MILP)', () => {
     let accepted = 0;
     fc.assert(
-      fc.property(seedArb, fc.array(fc.double({ min: 0.3, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }), (seed, picks) => {
-        const world = smallSyntheticWorld(seed);
-        const problem = syntheticProblem(world);
-        const kit = randomKit(problem.candidates, picks);
-        if (!syntheticJudge(world)(kit).feasible) return;
-        accepted++;
-        const pre = presolve(problem);
-        expect(dailyBalance(pre, kit).feasible).toBe(true);
-        const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), { timeoutMs: 5000, now: () => 0 });
-        expect(fixed.status).toBe('optimal');
-      }),
+      fc.property(
+        seedArb,
+        fc.array(fc.double({ min: 0.3, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }),
+        (seed, picks) => {
+          const world = smallSyntheticWorld(seed);
+          const problem = syntheticProblem(world);
+          const kit = randomKit(problem.candidates, picks);
+          if (!syntheticJudge(world)(kit).feasible) return;
+          accepted++;
+          const pre = presolve(problem);
+          expect(dailyBalance(pre, kit).feasible).toBe(true);
+          const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
+            timeoutMs: 5000,
+            now: () => 0,
+          });
+          expect(fixed.status).toBe('optimal');
+        },
+      ),
       { seed: propertySeed, numRuns: 300 },
     );
     expect(accepted).toBeGreaterThan(50);
   });
 
+  it("no kit the judge accepts breaks a cut of another kit's views (their demand through its paths, lifted by the blockers)", () => {
+    let checked = 0;
+    fc.assert(
+      fc.property(
+        seedArb,
+        // Small kits to cut from (a path, too little energy), big kits to accept.
+        fc.array(fc.double({ min: 0, max: 0.75, noNaN: true }), { minLength: 7, maxLength: 7 }),
+        fc.array(fc.double({ min: 0.3, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }),
+        (seed, cutPicks, acceptedPicks) => {
+          const world = smallSyntheticWorld(seed);
+          const problem = syntheticProblem(world);
+          const pre = presolve(problem);
+          const accepted = randomKit(problem.candidates, acceptedPicks);
+          if (!syntheticJudge(world)(accepted).feasible) return;
+          for (const cut of kitViewCuts(pre, randomKit(problem.candidates, cutPicks))) {
+            checked++;
+            expect(clearlyBroken(pre, cut, accepted)).toBe(false);
+          }
+        },
+      ),
+      { seed: propertySeed, numRuns: 1500 },
+    );
+    expect(checked).toBeGreaterThan(10);
+  });
+
   it('the forward pass and the MILP agree on fixed kits, accepted or not', () => {
     fc.assert(
-      fc.property(seedArb, fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }), (seed, picks) => {
-        const world = smallSyntheticWorld(seed);
-        const pre = presolve(syntheticProblem(world));
-        const kit = randomKit(pre.problem.candidates, picks);
-        const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), { timeoutMs: 5000, now: () => 0 });
-        expect(fixed.status === 'optimal').toBe(dailyBalance(pre, kit).feasible);
-      }),
+      fc.property(
+        seedArb,
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 7, maxLength: 7 }),
+        (seed, picks) => {
+          const world = smallSyntheticWorld(seed);
+          const pre = presolve(syntheticProblem(world));
+          const kit = randomKit(pre.problem.candidates, picks);
+          const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
+            timeoutMs: 5000,
+            now: () => 0,
+          });
+          expect(fixed.status === 'optimal').toBe(dailyBalance(pre, kit).feasible);
+        },
+      ),
       { seed: propertySeed, numRuns: 200 },
     );
   });
@@ -158,7 +208,10 @@ describe('answers', () => {
           const key = JSON.stringify(swap.kit.lines);
           expect(keys.has(key)).toBe(false);
           keys.add(key);
-          for (const line of swap.kit.lines) expect(line.count).toBeLessThanOrEqual(problem.candidates.find((c) => c.itemId === line.itemId)?.ownedCount ?? 0);
+          for (const line of swap.kit.lines)
+            expect(line.count).toBeLessThanOrEqual(
+              problem.candidates.find((c) => c.itemId === line.itemId)?.ownedCount ?? 0,
+            );
         }
       }),
       { seed: propertySeed, numRuns: 60 },
@@ -198,7 +251,12 @@ describe('answers', () => {
         const problem = syntheticProblem(world);
         const bare: OptimisationProblem = {
           ...problem,
-          candidates: problem.candidates.map((c) => ({ itemId: c.itemId, kind: c.kind, massG: c.massG, ownedCount: c.ownedCount })),
+          candidates: problem.candidates.map((c) => ({
+            itemId: c.itemId,
+            kind: c.kind,
+            massG: c.massG,
+            ownedCount: c.ownedCount,
+          })),
         };
         expect(presolve(bare).dominance).toEqual([]);
         const a = optimiseKit(problem, syntheticJudge(world));

@@ -8,8 +8,27 @@ import type {
   StoreCoefficients,
 } from './types.js';
 
-/** An alternative as item indices with the count each needs. */
-export type IndexedAlternative = readonly (readonly [itemIndex: number, count: number])[];
+/**
+ * An alternative as item indices: every item of `items` with the count it needs, and (when `anyOf` is not empty) at
+ * least one unit of one of the `anyOf` items.
+ */
+export interface IndexedAlternative {
+  items: readonly (readonly [itemIndex: number, count: number])[];
+  anyOf: readonly number[];
+  /** `PathAlternative.efficiency`, when given. */
+  efficiency?: number;
+}
+
+/**
+ * Whether a kit (counts by active index) holds an alternative.
+ * @example alternativePresent({ items: [[0, 1]], anyOf: [2, 3] }, [1, 0, 0, 1]) // true
+ */
+export function alternativePresent(alt: IndexedAlternative, counts: ArrayLike<number>): boolean {
+  return (
+    alt.items.every(([i, n]) => (counts[i] ?? 0) >= n) &&
+    (alt.anyOf.length === 0 || alt.anyOf.some((i) => (counts[i] ?? 0) >= 1))
+  );
+}
 
 /** An item the model keeps. */
 export interface ActiveItem {
@@ -112,6 +131,12 @@ export function validateProblem(problem: OptimisationProblem): void {
     for (const s of c.stores)
       if (s.acceptWhByStep) assertGrid(`store ${s.itemId} acceptWhByStep`, s.acceptWhByStep, skyCount, steps);
   }
+  for (const need of c.needs) {
+    if (need.gainWh) assertGrid(`need ${need.needId} gainWh`, need.gainWh, skyCount, c.dayCount);
+    for (const a of need.alternatives)
+      if (a.efficiency !== undefined && !(a.efficiency > 0 && a.efficiency <= 1))
+        throw new Error(`need ${need.needId}: an alternative's efficiency must be in (0, 1]`);
+  }
   if (problem.gramLimitG !== undefined && !(problem.gramLimitG >= 0)) throw new Error('gramLimitG must be ≥ 0');
 }
 
@@ -145,10 +170,19 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
     else dropped.push({ itemId: cand.itemId, reason: 'not-owned' });
   }
 
+  // An `anyOfItemIds` list keeps only its items still in the model; emptied, the alternative is unusable.
   const usableAlternatives = (alternatives: readonly PathAlternative[]): PathAlternative[] =>
-    alternatives.filter((a) =>
-      [...countIds(a.itemIds)].every(([id, n]) => alive.has(id) && (candidateById.get(id)?.ownedCount ?? 0) >= n),
-    );
+    alternatives.flatMap((a) => {
+      if (!a.anyOfItemIds || a.anyOfItemIds.length === 0)
+        return [...countIds(a.itemIds)].every(
+          ([id, n]) => alive.has(id) && (candidateById.get(id)?.ownedCount ?? 0) >= n,
+        )
+          ? [a]
+          : [];
+      const anyOfItemIds = a.anyOfItemIds.filter((id) => alive.has(id));
+      if (anyOfItemIds.length === 0) return [];
+      return usableAlternatives([{ ...a, anyOfItemIds: undefined }]).length > 0 ? [{ ...a, anyOfItemIds }] : [];
+    });
 
   const groupIdOf = (p: PanelCoefficients): string => p.groupId ?? '';
   let changed = true;
@@ -177,7 +211,8 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
       ...[...groupSpecs.values()].filter((g) => groupsWithPanels.has(g.groupId)).map((g) => g.requiresAnyOf ?? []),
     ];
     for (const alternatives of pathSets)
-      for (const a of usableAlternatives(alternatives)) for (const id of a.itemIds) role.add(id);
+      for (const a of usableAlternatives(alternatives))
+        for (const id of [...a.itemIds, ...(a.anyOfItemIds ?? [])]) role.add(id);
     for (const id of [...alive]) {
       if (!role.has(id)) {
         alive.delete(id);
@@ -199,8 +234,11 @@ export function presolve(problem: OptimisationProblem): PresolvedProblem {
     if (s && s.usableWh > 0) item.store = s;
     items.push(item);
   }
-  const index = (a: PathAlternative): IndexedAlternative =>
-    [...countIds(a.itemIds)].map(([id, n]) => [itemIndexById.get(id) as number, n] as const);
+  const index = (a: PathAlternative): IndexedAlternative => ({
+    items: [...countIds(a.itemIds)].map(([id, n]) => [itemIndexById.get(id) as number, n] as const),
+    anyOf: [...new Set(a.anyOfItemIds ?? [])].map((id) => itemIndexById.get(id) as number).sort((x, y) => x - y),
+    ...(a.efficiency !== undefined ? { efficiency: a.efficiency } : {}),
+  });
 
   const groups: ActiveGroup[] = [];
   const groupIndexById = new Map<string, number>();
@@ -256,9 +294,23 @@ function gridCompare(gj: readonly (readonly number[])[], gi: readonly (readonly 
   return strict;
 }
 
-/** Whether multiset `small` ⊆ multiset `big` (as [item, count] lists). */
+/** Whether the kit `big` (counts by item) holds the alternative `small`. */
 function contains(big: Map<number, number>, small: IndexedAlternative): boolean {
-  return small.every(([item, n]) => (big.get(item) ?? 0) >= n);
+  return (
+    small.items.every(([item, n]) => (big.get(item) ?? 0) >= n) &&
+    (small.anyOf.length === 0 || small.anyOf.some((item) => (big.get(item) ?? 0) >= 1))
+  );
+}
+
+/** The smallest kits that hold an alternative: its items, plus one of its `anyOf` items when it has some. */
+function witnesses(alt: IndexedAlternative): Map<number, number>[] {
+  const base = (): Map<number, number> => new Map(alt.items.map(([item, n]) => [item, n]));
+  if (alt.anyOf.length === 0) return [base()];
+  return alt.anyOf.map((b) => {
+    const kit = base();
+    kit.set(b, (kit.get(b) ?? 0) + 1);
+    return kit;
+  });
 }
 
 function findDominance(
@@ -311,15 +363,18 @@ function findDominance(
         if (r > 0) strict = 1;
       }
     }
-    // j must stand in for i in every alternative that uses i (once).
+    // j must stand in for i in every smallest kit of every alternative that uses i (once).
     for (const list of pathLists) {
       for (const alt of list) {
-        const ni = alt.find(([item]) => item === i)?.[1] ?? 0;
-        if (ni === 0) continue;
-        if (ni > 1) return -1;
-        const swapped = new Map<number, number>(alt.filter(([item]) => item !== i).map(([item, n]) => [item, n]));
-        swapped.set(j, (swapped.get(j) ?? 0) + 1);
-        if (!list.some((other) => contains(swapped, other))) return -1;
+        for (const witness of witnesses(alt)) {
+          const ni = witness.get(i) ?? 0;
+          if (ni === 0) continue;
+          if (ni > 1) return -1;
+          const swapped = new Map(witness);
+          swapped.delete(i);
+          swapped.set(j, (swapped.get(j) ?? 0) + 1);
+          if (!list.some((other) => contains(swapped, other))) return -1;
+        }
       }
     }
     return strict;

@@ -191,10 +191,17 @@ export function syntheticProblem(world: SyntheticWorld, gramLimitG?: number): Op
     if (d.demandWh <= 0) continue;
     const best = Math.max(0, ...d.alternatives.map((a) => pathEfficiency(world, a)));
     if (best > 0) dailyDemandWh += (d.demandWh * world.demandScale) / best;
+    // Per-device data for the kit views: the judge draws demand / (best path packed) every day.
+    const efficiencies = d.alternatives.map((a) => pathEfficiency(world, a));
+    const withEfficiency = efficiencies.every((e) => e > 0 && e <= 1);
     needs.push({
       needId: d.deviceId,
       label: d.deviceId,
-      alternatives: d.alternatives.map((a): PathAlternative => ({ itemIds: a })),
+      alternatives: d.alternatives.map((a, k): PathAlternative => ({
+        itemIds: a,
+        ...(withEfficiency ? { efficiency: efficiencies[k] } : {}),
+      })),
+      ...(withEfficiency ? { gainWh: grid(() => d.demandWh * world.demandScale) } : {}),
     });
   }
   const candidates: KitCandidate[] = [

@@ -46,6 +46,18 @@ export interface PathAlternative {
   /** For reports ("USB-C lead + boost converter"); defaults to the item ids joined. */
   pathId?: string;
   itemIds: readonly string[];
+  /**
+   * Optional: besides `itemIds`, at least one of these items must be present (e.g. the stores a converter-and-lead set
+   * fits: the set charges the device only from one of them). Empty or absent: no such requirement. It keeps "this set
+   * with one of these banks" exact without one alternative per bank.
+   */
+  anyOfItemIds?: readonly string[];
+  /**
+   * Optional, 0–1: the MOST of each Wh drawn from a store that this alternative can put into the device's battery (the
+   * best path through it × the device's charge efficiency; a device run live counts its best share too). With
+   * `PathNeed.gainWh` on the need, the search may judge a kit by the alternatives it holds (see `kit-views.ts`).
+   */
+  efficiency?: number;
 }
 
 /** A device that needs a charging path (its own battery cannot cover the trip): at least one alternative must be present. */
@@ -55,6 +67,13 @@ export interface PathNeed {
   label?: string;
   /** Compatible alternatives (the caller filters connectors, volts, amps); empty means no path exists in the locker. */
   alternatives: readonly PathAlternative[];
+  /**
+   * Optional `[sky][day]`: the LEAST Wh the device's battery must gain from stores that day (beyond its own battery).
+   * With an `efficiency` on every alternative, `demandWh` must count at least gain / (best alternative's efficiency)
+   * for this device; the search then also checks a kit against the device's draw through the alternatives the kit
+   * holds, from the stores they reach.
+   */
+  gainWh?: readonly (readonly number[])[];
 }
 
 /** Panels whose harvest counts only when one of the alternatives is present (e.g. a 12 V panel needs a controller). */

@@ -1,0 +1,176 @@
+import { evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
+import { alternativePresent, type ActiveItem, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
+import type { KitCounts } from './types.js';
+
+/**
+ * A kit's view of the daily model: the model with what the kit's own paths allow (its devices' draw through the
+ * alternatives it holds, only from the stores those reach), and the BLOCKERS — items the kit lacks whose addition
+ * could loosen that view (a better path, a path to another store). The view is a relaxation of the judge for every
+ * kit that holds no blocker, so a cut found in it holds for those kits and, lifted by the blockers, for all.
+ */
+export interface KitView {
+  pre: PresolvedProblem;
+  blockers: readonly number[];
+}
+
+/** Views sharing a store set share their items array (and so their memoised day bounds, see `dayBoundsOf`). */
+const itemsCache = new WeakMap<PresolvedProblem, Map<string, { items: ActiveItem[]; bestChargeEfficiency: number }>>();
+
+/** The needs that carry per-device data: a gain grid and an efficiency on every usable alternative. */
+function deviceNeeds(pre: PresolvedProblem) {
+  return pre.needs.flatMap((need) =>
+    need.need.gainWh && need.alternatives.length > 0 && need.alternatives.every((a) => a.efficiency !== undefined)
+      ? [{ gainWh: need.need.gainWh, alternatives: need.alternatives }]
+      : [],
+  );
+}
+
+/**
+ * The views of a kit (none when no need carries per-device data, or when they would say nothing new).
+ *
+ * Why each is a relaxation of the judge for a kit K' holding no blocker (K' may hold more units of anything else):
+ * - Draw: a device's battery gains at most `efficiency` per Wh drawn through an alternative, so it draws at least
+ *   gain / e, with e the best efficiency among the alternatives K' holds. Every alternative better than the best the
+ *   kit holds has a blocker (an item of it the kit lacks, or all its stores when the kit lacks them), so K' holds none
+ *   and its best e is no better than the kit's.
+ * - Pooled view: the daily model with the demand raised by gain × (1/e_kit − 1/e_best) per device — the caller's demand
+ *   counts each device at its best alternative's efficiency, so the raised demand is still no more than K' draws.
+ * - Device view (one device, when the kit's alternatives reach only some of the stores): the device's energy can only
+ *   come from the stores its alternatives in K' reach, and the stores start full and never give energy to each other,
+ *   so what it draws by a day's end is at most those stores' capacity above the reserve plus the harvest they took by
+ *   then. Every store K' could reach through an alternative beyond those of the kit is a blocker (the other stores of an
+ *   alternative the kit holds; an alternative the kit lacks is blocked by an item of it), so K' reaches no more store
+ *   types. Harvest into those stores is bounded as in the pooled model (every bound of `dayBoundsOf` holds store by
+ *   store), counting only panels whose group can reach one of them, at the best charge efficiency among them; the
+ *   room rows keep every device's most draw (any device may empty those stores).
+ * @example kitViews(pre, kit).length // 0 without per-device data
+ */
+export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
+  const needs = deviceNeeds(pre);
+  if (needs.length === 0) return [];
+  const c = pre.problem.coefficients;
+  const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
+  const inKit = (i: number): boolean => (counts[i] ?? 0) > 0;
+  const storeIndices = pre.items.flatMap((it, i) => (it.store ? [i] : []));
+  /** Items that keep an alternative the kit lacks out of a kit: one item it lacks, or all its stores. */
+  const blockerOf = (a: IndexedAlternative): number[] => {
+    const lacking = a.items.find(([i, n]) => (counts[i] ?? 0) < n);
+    if (lacking) return [lacking[0]];
+    return a.anyOf.length > 0 ? [...a.anyOf] : [];
+  };
+
+  const extraDemand = c.demandWh.map((row) => row.map(() => 0));
+  const pooledBlockers = new Set<number>();
+  const views: KitView[] = [];
+  for (const need of needs) {
+    const held = need.alternatives.filter((a) => alternativePresent(a, counts));
+    if (held.length === 0) continue;
+    const eKit = Math.max(...held.map((a) => a.efficiency ?? 1));
+    const eBest = Math.max(...need.alternatives.map((a) => a.efficiency ?? 1));
+    const better = need.alternatives.filter((a) => !held.includes(a) && (a.efficiency ?? 1) > eKit);
+    const effBlockers = better.flatMap(blockerOf);
+    if (eKit < eBest) {
+      for (const b of effBlockers) pooledBlockers.add(b);
+      need.gainWh.forEach((row, s) =>
+        row.forEach((wh, t) => {
+          const out = extraDemand[s] as number[];
+          out[t] = (out[t] ?? 0) + wh * (1 / eKit - 1 / eBest);
+        }),
+      );
+    }
+
+    // The stores the kit's alternatives reach (an alternative without a store list reaches every store).
+    if (held.some((a) => a.anyOf.length === 0)) continue;
+    const reached = new Set(held.flatMap((a) => a.anyOf.filter(inKit)));
+    const blockers = new Set(effBlockers);
+    for (const a of held) for (const b of a.anyOf) if (!inKit(b)) blockers.add(b);
+    for (const a of need.alternatives) {
+      if (held.includes(a)) continue;
+      if (a.anyOf.length === 0 || a.anyOf.some((b) => !reached.has(b))) for (const b of blockerOf(a)) blockers.add(b);
+    }
+    if (storeIndices.every((i) => reached.has(i))) continue;
+    const demandWh = need.gainWh.map((row) => row.map((wh) => wh / eKit));
+    views.push({ pre: restricted(pre, reached, demandWh), blockers: [...blockers].sort((x, y) => x - y) });
+  }
+  if (extraDemand.some((row) => row.some((wh) => wh > 0))) {
+    views.unshift({
+      pre: {
+        ...pre,
+        problem: {
+          ...pre.problem,
+          coefficients: {
+            ...c,
+            demandWh: c.demandWh.map((row, s) => row.map((wh, t) => wh + (extraDemand[s]?.[t] ?? 0))),
+            roomDemandWh: c.roomDemandWh ?? c.demandWh,
+          },
+        },
+      },
+      blockers: [...pooledBlockers].sort((x, y) => x - y),
+    });
+  }
+  return views;
+}
+
+/** The problem with only `stores` as stores, only the panels that can reach one of them, and `demandWh`. */
+function restricted(pre: PresolvedProblem, stores: ReadonlySet<number>, demandWh: number[][]): PresolvedProblem {
+  let byKey = itemsCache.get(pre);
+  if (!byKey) {
+    byKey = new Map();
+    itemsCache.set(pre, byKey);
+  }
+  const key = [...stores].sort((a, b) => a - b).join(',');
+  let hit = byKey.get(key);
+  if (!hit) {
+    // A panel counts when its group has no requirement or some alternative of it may feed one of the stores.
+    const groupReaches = pre.groups.map(
+      (g) =>
+        !g.hasRequirement || g.requiresAnyOf.some((a) => a.anyOf.length === 0 || a.anyOf.some((b) => stores.has(b))),
+    );
+    const items = pre.items.map((it, i): ActiveItem => {
+      const { store, panel, ...rest } = it;
+      const keepsPanel = panel && it.groupIndex !== undefined && groupReaches[it.groupIndex];
+      return { ...rest, ...(store && stores.has(i) ? { store } : {}), ...(keepsPanel ? { panel } : {}) };
+    });
+    const bestChargeEfficiency = Math.max(0, ...items.map((it) => it.store?.chargeEfficiency ?? 0));
+    hit = { items, bestChargeEfficiency };
+    byKey.set(key, hit);
+  }
+  const c = pre.problem.coefficients;
+  return {
+    ...pre,
+    items: hit.items,
+    bestChargeEfficiency: hit.bestChargeEfficiency,
+    problem: {
+      ...pre.problem,
+      coefficients: { ...c, demandWh, roomDemandWh: c.roomDemandWh ?? c.demandWh },
+    },
+  };
+}
+
+/**
+ * The energy cuts of a kit's views that the kit breaks, each lifted to hold for every kit: a blocker's coefficient is
+ * raised to the cut's right-hand side, so any kit holding a blocker meets the cut (every other term is ≥ 0).
+ * @example kitViewCuts(pre, kit).length // 0 when every view of the kit holds
+ */
+export function kitViewCuts(pre: PresolvedProblem, kit: KitCounts): EnergyCut[] {
+  const cuts: EnergyCut[] = [];
+  for (const view of kitViews(pre, kit)) {
+    for (const cut of evaluateDailyModel(view.pre, kit).cuts) {
+      if (!(cut.lowerWh > 0)) continue;
+      const itemWh = Float64Array.from(cut.itemWh);
+      for (const b of view.blockers) itemWh[b] = Math.max(itemWh[b] ?? 0, cut.lowerWh);
+      cuts.push({ ...cut, itemWh });
+    }
+  }
+  return cuts;
+}
+
+/**
+ * Whether some view of the kit runs short (a quick necessary check before the judge; no cuts built).
+ * @example kitViewsShort(pre, kit) // false when every view holds
+ */
+export function kitViewsShort(pre: PresolvedProblem, kit: KitCounts): boolean {
+  return kitViews(pre, kit).some(
+    (view) => evaluateDailyModel(view.pre, kit, { withCuts: false }).shortfalls.length > 0,
+  );
+}

@@ -356,7 +356,8 @@ export function runSky(
     //    rate; then, only while the device holds less than the least level from which it reaches the trip's end charging
     //    at those rates (`leastLevelsWh`), the stores speed up, in the same order, within the charge power left, each
     //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
-    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate.
+    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
+    //    step (not always in later steps: see the README's known gap (3)).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
       for (let d = 0; d < D; d++) {

@@ -71,9 +71,14 @@ describe('planningContext', () => {
     expect(plan.kit?.lines.map((l) => l.itemId).sort()).toEqual(['bank-c', 'lead-a-c', 'lead-c-micro', 'panel']);
   });
 
-  it("a panel's harvest needs a bank its plug fits or a lead that joins it to a bank, and no other lead", () => {
+  it("a panel's harvest needs a bank its plug fits, or a lead with a bank it joins the plug to, and no other lead", () => {
     // The USB-A to USB-C lead fits neither end of the panel-to-bank hop: it must not switch the panel's harvest on.
     const groups = planningContext(panelLeadTrip()).problem.coefficients.harvestGroups ?? [];
-    expect(groups.map((g) => g.requiresAnyOf?.map((a) => a.itemIds))).toEqual([[['bank-micro'], ['lead-c-micro']]]);
+    expect(groups.map((g) => g.requiresAnyOf?.map((a) => [a.itemIds, a.anyOfItemIds]))).toEqual([
+      [
+        [[], ['bank-micro']],
+        [['lead-c-micro'], ['bank-c']],
+      ],
+    ]);
   });
 });

@@ -69,15 +69,17 @@ const signature = (spec: object, omit: readonly string[]): DominanceAttribute =>
  * The daily coefficients are a RELAXATION of the simulation, so no kit the simulation accepts is lost:
  * - panels: per step the power `panelPowerSeries` gives at the port, with no harvest in steps below 0 °C (every store
  *   is a lithium bank), summed per day; when some owned bank does not take a panel's plug directly, the panel counts
- *   only with a bank that does or a lead that joins it to some bank (so a lead that only some banks need is kept);
- * - banks: usable Wh, charge efficiency, and the input limit × step hours outside frozen steps;
+ *   only with a bank that does, or a lead together with a bank it joins the plug to;
+ * - banks: usable Wh, usable Wh gained per input Wh (charge × output efficiency, as the simulation books harvest), and
+ *   the input limit × step hours outside frozen steps;
  * - devices: the LEAST cumulative draw by each day's end — what the device has used beyond its own battery (which
  *   starts full) over its best path's efficiency — for the reserve rows, and the MOST (everything it used, over its
  *   worst path, since a battery is never topped up past full) for the room rows;
  * - the first camp step of each day: before it no store gives energy to a device, so a full bank spills the morning;
- * - charging paths: from every bank, converter and lead combination `chargePaths` accepts (each lead needed once), the
- *   device needs one of the minimal converter-and-lead sets and one bank some path starts from (a relaxation of the
- *   pairs, far smaller in big lockers).
+ * - charging paths: from every store, converter and lead combination `chargePaths` (or `packChargePaths`) accepts (each
+ *   lead needed once), the device needs one converter-and-lead set together with one of the stores it starts a path
+ *   from (exact, one alternative per set), and each set carries its best share of a drawn Wh that reaches the device;
+ *   the need carries what the device must gain each day, so the search can check a kit by the sets it holds.
  * `reuse`: a context of the same trip (same `solarInput` object and solar options) whose sun series and panels' power
  * this one may share — the gram prices change only demand or the reserve.
  * @example planningContext(input).problem.candidates.length // input.gear.length
@@ -172,13 +174,21 @@ export function planningContext(
       }
     });
     let groupId: string | undefined;
-    if (viaLeads.length > 0) {
-      // Harvest needs a bank the plug fits or a lead that joins it to some bank (looser than bank-and-lead pairs: a
-      // relaxation, and it keeps such leads in the model).
-      const requiresAnyOf = [...directBanks.map((b) => b.itemId), ...viaLeads.map((l) => l.itemId)]
-        .sort()
-        .map((id) => ({ itemIds: [id] }));
-      groupId = `reach:${requiresAnyOf.map((a) => a.itemIds[0]).join('|')}`;
+    if (directBanks.length < banks.length) {
+      // Harvest needs a bank the plug fits, or a lead with a bank it joins the plug to (one hop, as the simulation).
+      const joinedBy = (l: KitLead): string[] =>
+        banks
+          .filter((b) => {
+            const hop = joinPorts(spec.outputPort, b.spec.inputPort, [l]);
+            return hop.joined && hop.leadItemId === l.itemId;
+          })
+          .map((b) => b.itemId)
+          .sort();
+      const requiresAnyOf: PathAlternative[] = [
+        ...(directBanks.length > 0 ? [{ itemIds: [], anyOfItemIds: directBanks.map((b) => b.itemId).sort() }] : []),
+        ...viaLeads.map((l) => ({ itemIds: [l.itemId], anyOfItemIds: joinedBy(l) })),
+      ];
+      groupId = `reach:${requiresAnyOf.map((a) => `${a.itemIds.join('+')}>${(a.anyOfItemIds ?? []).join('|')}`).join(',')}`;
       if (!harvestGroups.some((h) => h.groupId === groupId)) harvestGroups.push({ groupId, requiresAnyOf });
     }
     panels.push({
@@ -258,7 +268,8 @@ export function planningContext(
   const bankStores: StoreCoefficients[] = banks.map((b) => ({
     itemId: b.itemId,
     usableWh: bankUsableWh(b.spec),
-    chargeEfficiency: b.spec.chargeEfficiency,
+    // Usable Wh gained per input Wh: the simulation books the output loss as harvest enters (`bankUsableGainWh`).
+    chargeEfficiency: b.spec.chargeEfficiency * b.spec.outputEfficiency,
     ...acceptGrids(b.spec.inputMaxW),
   }));
   const stores = [...bankStores, ...packStores];
@@ -283,9 +294,16 @@ export function planningContext(
   for (const d of input.devices) {
     if (!needsChargingPath(d.spec, tripHours / 24)) continue;
     const alternatives = new Map<string, { itemIds: string[]; efficiency: number }>();
-    /** What a path needs besides its bank (converter and leads), by key; and the banks some path starts from. */
+    /** What a path needs besides its store (converter and leads), by key. */
     const tails = new Map<string, string[]>();
-    const banksWithPath = new Set<string>();
+    /** Per tail (by key): the stores it starts a path from, and the best share of a drawn Wh that reaches the device. */
+    const tailStores = new Map<string, Set<string>>();
+    const tailShare = new Map<string, number>();
+    const noteTail = (tail: readonly string[], storeIds: readonly string[], share: number): void => {
+      const key = tail.join('|');
+      tailStores.set(key, new Set([...(tailStores.get(key) ?? []), ...storeIds]));
+      tailShare.set(key, Math.max(tailShare.get(key) ?? 0, share));
+    };
     // Only leads that fit some hop of this device's paths can be part of one; a 12 V device's paths pair a lead into
     // the converter with a lead out of it. Banks with the same output ports have the same paths: found once.
     const hopPorts = banks.flatMap((b) => b.spec.outputPorts.map((p) => p.connector));
@@ -324,8 +342,12 @@ export function planningContext(
               ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
             ].sort();
             tails.set(tail.join('|'), tail);
+            noteTail(
+              tail,
+              sameBanks.map((b) => b.itemId),
+              d.spec.chargeEfficiency * path.pathEfficiency,
+            );
             for (const bank of sameBanks) {
-              banksWithPath.add(bank.itemId);
               const itemIds = [bank.itemId, ...tail].sort();
               const key = itemIds.join('|');
               const known = alternatives.get(key);
@@ -353,8 +375,6 @@ export function planningContext(
       for (const a of packLeads) for (const b of packLeads) if (a.itemId < b.itemId) packLeadSets.push([a, b]);
     const packConverterSets: KitConverter[][] = twelveVolt ? [[]] : adapters.map((c) => [c]);
     let liveShare = 0;
-    /** Each pack with the tail of a path from it: a pack counts as this device's store only with a whole path. */
-    const packWithTails = new Map<string, string[]>();
     for (const pack of packs) {
       for (const cs of packConverterSets) {
         for (const ls of packLeadSets) {
@@ -363,8 +383,9 @@ export function planningContext(
               ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
             ].sort();
             tails.set(tail.join('|'), tail);
+            const live = (path as ChargePath & Partial<PackPath>).live === true;
+            noteTail(tail, [pack.itemId], live ? path.pathEfficiency : d.spec.chargeEfficiency * path.pathEfficiency);
             const itemIds = [pack.itemId, ...tail].sort();
-            packWithTails.set(itemIds.join('|'), itemIds);
             const key = itemIds.join('|');
             const known = alternatives.get(key);
             if (!known || known.efficiency < path.pathEfficiency)
@@ -376,37 +397,32 @@ export function planningContext(
     }
     const list = [...alternatives.values()];
     const label = input.deviceNames?.[d.deviceId] ?? d.deviceId;
-    // The need is split in two (a relaxation of "some bank with some tail that fits it", which keeps the model small:
-    // banks × tails alternatives grow into the hundreds): some tail, and some bank that starts a path. The judge rejects
-    // a kit whose bank and tail do not fit together. A tail holding another tail is left out (it adds nothing).
-    const minimalTails = [...tails.values()].filter(
-      (t) => ![...tails.values()].some((o) => o.length < t.length && o.every((id) => t.includes(id))),
+    // One alternative per tail, with the stores it starts a path from (exact: "this tail and one of these stores",
+    // without one alternative per store). A tail holding another is left out when the smaller one fits every store it
+    // fits at least as well.
+    const storesOf = (t: readonly string[]): Set<string> => tailStores.get(t.join('|')) ?? new Set<string>();
+    const shareOf = (t: readonly string[]): number => tailShare.get(t.join('|')) ?? 0;
+    const usefulTails = [...tails.values()].filter(
+      (t) =>
+        ![...tails.values()].some(
+          (o) =>
+            o.length < t.length &&
+            o.every((id) => t.includes(id)) &&
+            shareOf(o) >= shareOf(t) &&
+            [...storesOf(t)].every((b) => storesOf(o).has(b)),
+        ),
     );
-    if (list.length === 0 || !minimalTails.some((t) => t.length === 0)) {
-      needs.push({
-        needId: d.deviceId,
-        label,
-        alternatives: minimalTails.map((t): PathAlternative => ({ itemIds: t, pathId: t.join(' + ') })),
-      });
-    }
-    // Some store that starts a path: a bank alone (its tail is in the tail need), or a pack with a whole path's tail —
-    // a pack path's tail (a 12 V → USB adapter and its leads) often holds a bank path's tail (the phone's lead), so the
-    // tail need alone would let a pack stand in without its adapter, and leave the adapter with no role at all.
-    const packAlternatives = [...packWithTails.values()].filter(
-      (a) => ![...packWithTails.values()].some((o) => o.length < a.length && o.every((id) => a.includes(id))),
-    );
-    if (list.length > 0 && (banksWithPath.size < banks.length || packAlternatives.length > 0)) {
-      needs.push({
-        needId: `${d.deviceId}:store`,
-        label,
-        alternatives: [
-          ...[...banksWithPath].sort().map((b): PathAlternative => ({ itemIds: [b], pathId: b })),
-          ...packAlternatives
-            .sort((a, b) => (a.join('|') < b.join('|') ? -1 : 1))
-            .map((ids): PathAlternative => ({ itemIds: ids, pathId: ids.join(' + ') })),
-        ],
-      });
-    }
+    const need: PathNeed = {
+      needId: d.deviceId,
+      label,
+      alternatives: usefulTails.map((t): PathAlternative => ({
+        itemIds: t,
+        anyOfItemIds: [...storesOf(t)].sort(),
+        pathId: t.join(' + '),
+        ...(shareOf(t) > 0 ? { efficiency: Math.min(1, shareOf(t)) } : {}),
+      })),
+    };
+    needs.push(need);
     if (list.length === 0) continue;
     const best = Math.max(...list.map((a) => a.efficiency));
     const worst = Math.min(...list.map((a) => a.efficiency));
@@ -414,12 +430,18 @@ export function planningContext(
     // it uses it: its least draw by a day's end counts the use up to then, at the better of the two shares.
     const bestShare = Math.max(d.spec.chargeEfficiency * best, liveShare);
     const perHourWh = deviceDemandWhPerDay(d.spec) / 24;
+    /** What the device must have gained from stores by each day's end (its least draw × the best share). */
+    const gainCum = new Array<number>(dayCount).fill(0);
     hoursByDayEnd.forEach((h, t) => {
       const usedWh = perHourWh * h;
       const neededWh = liveShare > 0 ? usedWh : perHourWh * (hoursToNextTopUp[t] ?? h);
-      leastCum[t] = (leastCum[t] ?? 0) + Math.max(0, neededWh - d.spec.ownBatteryWh) / bestShare;
+      gainCum[t] = Math.max(0, neededWh - d.spec.ownBatteryWh);
+      leastCum[t] = (leastCum[t] ?? 0) + (gainCum[t] ?? 0) / bestShare;
       mostCum[t] = (mostCum[t] ?? 0) + usedWh / (d.spec.chargeEfficiency * worst);
     });
+    need.gainWh = Array.from({ length: skyCount }, () =>
+      gainCum.map((v, t) => Math.max(0, v - (t > 0 ? (gainCum[t - 1] ?? 0) : 0))),
+    );
   }
   const daily = (cum: readonly number[]): Grid =>
     Array.from({ length: skyCount }, () => cum.map((v, t) => Math.max(0, v - (t > 0 ? (cum[t - 1] ?? 0) : 0))));

@@ -9,14 +9,15 @@ import type { LockerItemInputRaw } from '@gramwatt/shared';
  */
 
 /** USB port of a panel or a charge input without a fixed cable. */
-const socket = (
-  connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc' | '12v-accessory' | 'ring-terminal',
-) => ({
+type DemoConnector =
+  'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1' | 'radio-dc' | '12v-accessory' | 'ring-terminal';
+
+const socket = (connector: DemoConnector) => ({
   connector,
   captiveCable: false,
 });
 /** A fixed cable ending in this plug. */
-const cable = (connector: 'usb-a' | 'usb-c' | 'micro-usb' | 'barrel-5.5x2.1') => ({ connector, captiveCable: true });
+const cable = (connector: DemoConnector) => ({ connector, captiveCable: true });
 
 const ridgeline: LockerItemInputRaw = {
   name: 'Ridgeline 10 W fold-out',

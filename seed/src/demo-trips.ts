@@ -53,6 +53,30 @@ export const demoTrips: readonly DemoTrip[] = [
     ],
   },
   {
+    // A radio weekend where only the 12 V station keeps up: 90 minutes on the air a day from the knoll's top.
+    leaderEmail: 'fern@gramwatt.example',
+    startInDays: 35,
+    trip: {
+      name: 'Cinder Knoll radio weekend',
+      notes: 'Two nights on Cinder Knoll for a summit radio contest; long hours on the air from camp.',
+      latitudeDeg: -29.3,
+      longitudeDeg: 29.5,
+      nights: 2,
+      walkWindow: { start: '08:00', end: '11:00' },
+      campWindow: { start: '11:00', end: '08:00' },
+      skyPresetId: 'mixed',
+      temperatures: { lowC: 4, highC: 18 },
+      elevationM: 3000,
+      gramLimitG: 2200,
+    },
+    devices: [
+      {
+        itemName: 'Dual-band handheld radio, 5 W',
+        useProfileOverride: { transmitMinutesPerDay: 90, receiveHoursPerDay: 3, standbyHoursPerDay: 4 },
+      },
+    ],
+  },
+  {
     leaderEmail: 'tobin@gramwatt.example',
     startInDays: 24,
     trip: {

@@ -98,11 +98,13 @@ export function pathChoice(
   const otherWords = pathWords(other, otherCounts, usesPack ? 'banks' : 'pack');
   const savedG = answer.kit.massG - kitG;
   const exact = answer.status !== 'best-so-far';
+  // "Two banks and a boost converter" is plural, "the pack path" singular.
+  const [is, weighs] = path === 'banks' ? ['are', 'weigh'] : ['is', 'weighs'];
   const text =
     savedG > 0
-      ? `${capitalised} is ${exact ? '' : 'at least '}${gramsText(savedG)} lighter than ${otherWords} for this trip.`
+      ? `${capitalised} ${is} ${exact ? '' : 'at least '}${gramsText(savedG)} lighter than ${otherWords} for this trip.`
       : savedG === 0
-        ? `${capitalised} weighs the same as ${otherWords} for this trip and keeps more to spare.`
-        : `${capitalised} is ${gramsText(-savedG)} heavier than ${otherWords} for this trip: the search for this kit stopped early.`;
+        ? `${capitalised} ${weighs} the same as ${otherWords} for this trip and keep${path === 'banks' ? '' : 's'} more to spare.`
+        : `${capitalised} ${is} ${gramsText(-savedG)} heavier than ${otherWords} for this trip: the search for this kit stopped early.`;
   return { path, otherMassG: answer.kit.massG, savedG, text };
 }

@@ -80,7 +80,7 @@ describe('the solver chooses the power path by grams', () => {
     ]);
     expect(plan.pathChoice).toMatchObject({ path: 'banks', otherMassG: 540, savedG: 115 });
     expect(plan.pathChoice?.text).toBe(
-      'Two banks and a boost converter is 115 g lighter than the lithium polymer pack path for this trip.',
+      'Two banks and a boost converter are 115 g lighter than the lithium polymer pack path for this trip.',
     );
   });
 

@@ -1,7 +1,7 @@
 import { dayBoundsOf, type BoundVector } from './day-bounds.js';
 import type { EnergyCut } from './energy-cuts.js';
 import type { LinearModel, LinearRow } from './linear-model.js';
-import type { PresolvedProblem } from './presolve.js';
+import { alternativePresent, type PresolvedProblem } from './presolve.js';
 import type { KitCounts } from './types.js';
 
 /**
@@ -328,6 +328,24 @@ function range(from: number, to: number): number[] {
   const out: number[] = [];
   for (let k = from; k <= to; k++) out.push(k);
   return out;
+}
+
+/**
+ * Sets the path and group columns of a master solution from its kit: an alternative is switched on exactly when the
+ * kit holds it. In the master every row meets such a column on its "≤ presence" side or with a coefficient ≥ 0 on a
+ * "≥" row, so this is the best value each can take; it mends the solver's float slips on them (javascript-lp-solver has
+ * returned 0.011 for an alternative whose items were all 0 on a 200-item locker) before the answer is checked.
+ * @example completeMasterColumns(pre, values) // values' z and w columns now 0 or 1
+ */
+export function completeMasterColumns(pre: PresolvedProblem, values: Map<string, number>): void {
+  const kit = kitFromValues(pre, values);
+  const counts = pre.items.map((it) => kit.get(it.candidate.itemId) ?? 0);
+  pre.needs.forEach((need, d) =>
+    need.alternatives.forEach((alt, a) => values.set(zColumn(d, a), alternativePresent(alt, counts) ? 1 : 0)),
+  );
+  pre.groups.forEach((g, gi) =>
+    g.requiresAnyOf.forEach((alt, a) => values.set(wColumn(gi, a), alternativePresent(alt, counts) ? 1 : 0)),
+  );
 }
 
 /**

@@ -1,6 +1,12 @@
 import * as lpModule from 'javascript-lp-solver';
 import type { Model as JsLpModel, SolveResult } from 'javascript-lp-solver';
-import { checkSolution, objectiveValue, type LinearModel, type LinearSolution, type LinearSolveOptions } from './linear-model.js';
+import {
+  checkSolution,
+  objectiveValue,
+  type LinearModel,
+  type LinearSolution,
+  type LinearSolveOptions,
+} from './linear-model.js';
 
 /** The solver object. The package's typings are read as CommonJS under NodeNext, its ESM build exports a default. */
 interface JsLpApi {
@@ -25,8 +31,13 @@ export function toJsLpModel(model: LinearModel, timeoutMs: number): JsLpModel {
     if (v) v[objectiveKey] = coefficient;
   }
   for (const row of model.rows) {
-    if (row.lower !== undefined && row.upper !== undefined && row.lower === row.upper) constraints[row.name] = { equal: row.lower };
-    else constraints[row.name] = { ...(row.lower !== undefined ? { min: row.lower } : {}), ...(row.upper !== undefined ? { max: row.upper } : {}) };
+    if (row.lower !== undefined && row.upper !== undefined && row.lower === row.upper)
+      constraints[row.name] = { equal: row.lower };
+    else
+      constraints[row.name] = {
+        ...(row.lower !== undefined ? { min: row.lower } : {}),
+        ...(row.upper !== undefined ? { max: row.upper } : {}),
+      };
     for (const [column, coefficient] of row.terms) {
       const v = variables[column];
       if (v) v[row.name] = (v[row.name] ?? 0) + coefficient;
@@ -77,8 +88,15 @@ export function solveWithJsLp(model: LinearModel, options: LinearSolveOptions): 
     const v = typeof raw === 'number' ? raw : 0;
     values.set(column, model.binaries.has(column) ? Math.round(v) : v);
   }
+  options.complete?.(values);
   // Check the rounded point: binaries are used as integers downstream, so the rows must hold for them.
   const violation = checkSolution(model, values);
-  if (violation) return { status: 'failed', reason: `solver answer breaks the model: ${violation}` };
-  return { status: 'optimal', objective: objectiveValue(model, values), values, proven: elapsedMs < 0.98 * options.timeoutMs };
+  if (violation)
+    return { status: 'failed', reason: `solver answer breaks the model: ${violation}`, brokenValues: values };
+  return {
+    status: 'optimal',
+    objective: objectiveValue(model, values),
+    values,
+    proven: elapsedMs < 0.98 * options.timeoutMs,
+  };
 }

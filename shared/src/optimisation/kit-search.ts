@@ -1,4 +1,11 @@
-import { buildDailyModel, kitFromValues, modelScale, type KitCut, type ModelScale } from './daily-model.js';
+import {
+  buildDailyModel,
+  completeMasterColumns,
+  kitFromValues,
+  modelScale,
+  type KitCut,
+  type ModelScale,
+} from './daily-model.js';
 import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { kitViewCuts, kitViewsShort } from './kit-views.js';
 import { solveWithJsLp } from './js-lp-backend.js';
@@ -169,22 +176,29 @@ export function createKitSearch(
     const evaluation = evaluateDailyModel(presolved, counts);
     if (evaluation.cuts.length === 0) {
       if (!useViews) return false;
-      // The kit's own views (its paths' efficiencies, the stores they reach): their cuts, lifted by the blockers.
+      // The kit's own views (its paths' efficiencies, the stores they reach), lifted by the blockers.
       const viewCuts = kitViewCuts(presolved, counts).filter((cut) => clearlyBroken(presolved, cut, counts));
       if (viewCuts.length === 0) return false;
       stats.dailyRejected++;
-      energyCuts.push(...viewCuts);
-      // Grown to a maximal kit its views still reject, the kit has fewer blockers: its cuts hold off a larger region.
-      // Every kit no larger than it holds none of its blockers, so its cuts cut that whole down-set off.
+      // Only the cuts of a maximal kit its views still reject go to the master: it has fewer blockers, so they hold
+      // off a larger region, and every kit no larger holds none of them (its whole down-set is cut off). The kit's own
+      // cuts add big-M rows that slow each master solve more than they save rounds.
       const grown = lift(
         counts,
         Infinity,
         (trial) =>
           evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
-          (useViews && kitViewsShort(presolved, trial)),
+          kitViewsShort(presolved, trial),
       );
-      energyCuts.push(...evaluateDailyModel(presolved, grown).cuts, ...kitViewCuts(presolved, grown));
-      viewRejected.push(grown);
+      const grownCuts = [...evaluateDailyModel(presolved, grown).cuts, ...kitViewCuts(presolved, grown)];
+      energyCuts.push(...grownCuts);
+      // The grown kit fails its views, so the judge rejects it and every kit no larger: when its cuts hold the kit off
+      // by float noise only, its down-set is cut off outright.
+      if (grownCuts.some((cut) => clearlyBroken(presolved, cut, counts))) viewRejected.push(grown);
+      else {
+        rejected.push(grown);
+        cuts.push({ kind: 'no-larger-than', counts: grown });
+      }
       return true;
     }
     stats.dailyRejected++;
@@ -218,7 +232,7 @@ export function createKitSearch(
         energyCuts,
         ...(maxMassG !== undefined ? { maxMassG } : {}),
       }),
-      { timeoutMs, now },
+      { timeoutMs, now, complete: (values) => completeMasterColumns(presolved, values) },
     );
 
   /**
@@ -271,8 +285,20 @@ export function createKitSearch(
       stats.rounds++;
       const first = propose(timeoutMs);
       if (first.status === 'infeasible') return { kind: 'exhausted' };
-      if (first.status === 'failed')
+      if (first.status === 'failed') {
+        // A point that breaks the model proves nothing about grams, but a kit in it that the judge rejects may still be
+        // cut off (the cut holds whatever found the kit); a kit it would accept cannot be trusted as the lightest.
+        const broken = first.brokenValues ? kitFromValues(presolved, first.brokenValues) : undefined;
+        if (broken && !rejected.some((r) => kitNoLarger(broken, r)) && !knownRejectedHolding(broken)) {
+          if (dailyRejects(broken)) continue;
+          const brokenVerdict = judge(broken);
+          if (!brokenVerdict.feasible) {
+            reject(broken, brokenVerdict, deadlineMs);
+            continue;
+          }
+        }
         return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: first.reason };
+      }
       const counts = kitFromValues(presolved, first.values);
       const massG = kitMassG(counts, problem.candidates);
       const proven = first.proven;

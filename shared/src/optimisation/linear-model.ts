@@ -36,7 +36,12 @@ export type LinearSolution =
       proven: boolean;
     }
   | { status: 'infeasible' }
-  | { status: 'failed'; reason: string };
+  | {
+      status: 'failed';
+      reason: string;
+      /** The rounded point that broke a row, when the solver returned one (never to be trusted as an optimum). */
+      brokenValues?: ReadonlyMap<string, number>;
+    };
 
 /** Absolute tolerance (in the model's scaled units) for a row or bound to count as met. */
 export const rowToleranceScaled = 1e-6;
@@ -45,7 +50,11 @@ export const rowToleranceScaled = 1e-6;
  * Checks a point against every row, bound and binary of the model; returns the first violation or null.
  * @example checkSolution(model, values) // null when every row holds
  */
-export function checkSolution(model: LinearModel, values: ReadonlyMap<string, number>, tolerance = rowToleranceScaled): string | null {
+export function checkSolution(
+  model: LinearModel,
+  values: ReadonlyMap<string, number>,
+  tolerance = rowToleranceScaled,
+): string | null {
   for (const column of model.columns) {
     const v = values.get(column) ?? 0;
     if (!Number.isFinite(v)) return `column ${column} is ${v}`;
@@ -82,4 +91,9 @@ export interface LinearSolveOptions {
   timeoutMs: number;
   /** The caller's clock in ms, used only to tell whether the solver stopped on its timeout. */
   now: () => number;
+  /**
+   * Sets auxiliary continuous columns from the binaries of the rounded point before it is checked (the master's path
+   * columns, see `completeMasterColumns`). Absent: the solver's values are checked as they are.
+   */
+  complete?: (values: Map<string, number>) => void;
 }

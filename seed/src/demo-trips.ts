@@ -62,8 +62,6 @@ export const demoTrips: readonly DemoTrip[] = [
       latitudeDeg: -29.3,
       longitudeDeg: 29.5,
       nights: 2,
-      walkWindow: { start: '08:00', end: '11:00' },
-      campWindow: { start: '11:00', end: '08:00' },
       skyPresetId: 'mixed',
       temperatures: { lowC: 4, highC: 18 },
       elevationM: 3000,

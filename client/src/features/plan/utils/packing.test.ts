@@ -95,11 +95,17 @@ describe('hopsOf with the 12 V path', () => {
           session('live', 'pack#1', 'radio'),
           session('top-up', 'pack#1', 'radio'),
           session('harvest', 'panel', 'pack#1'),
+          session('live', 'pack#1', 'handheld'),
         ],
       },
       [],
     );
-    expect(hops.map((h) => h.kind)).toEqual(['harvest', 'top-up', 'live']);
+    // The radio's top-up and live hop are one line (same pack, same lead).
+    expect(hops.map((h) => [h.kind, h.to])).toEqual([
+      ['harvest', 'pack#1'],
+      ['top-up', 'radio'],
+      ['live', 'handheld'],
+    ]);
     expect(scheduleKindLabels.live).toBe('Runs live: ');
   });
 });

@@ -49,8 +49,10 @@ export const hopsOf = (evaluation: Pick<KitEvaluation, 'schedule'>, lines: reado
   const counts = new Map(lines.map((line) => [line.itemId, line.count]));
   const hops = new Map<string, PackingHop>();
   for (const s of evaluation.schedule) {
-    const key = [s.kind, s.fromId, s.toId, s.converterItemId ?? '', ...s.leadItemIds].join('|');
-    if (hops.has(key)) continue;
+    // A radio topped up from a pack and run live from it takes the same hop: one line, the earlier in the flow.
+    const key = [s.fromId, s.toId, s.converterItemId ?? '', ...s.leadItemIds].join('|');
+    const known = hops.get(key);
+    if (known && hopOrder[known.kind] <= hopOrder[s.kind]) continue;
     hops.set(key, {
       from: unitName(s.fromName, s.fromId, counts),
       to: unitName(s.toName, s.toId, counts),

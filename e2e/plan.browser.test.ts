@@ -18,9 +18,12 @@ interface SolvedPlan {
   gramPrices: { requirement: string; kind: string; extraG: number | null; text: string }[];
 }
 
-async function openTrip(page: Page): Promise<string> {
+/** The demo trip where only the 12 V station keeps the radio going (its notes say so). */
+const stationTrip = demoTrips.find((t) => t.trip.name.includes('radio weekend'))!;
+
+async function openTrip(page: Page, tripName = radioTrip.trip.name): Promise<string> {
   await page.goto(appUrl('/trips'));
-  await page.getByRole('link', { name: radioTrip.trip.name }).click();
+  await page.getByRole('link', { name: tripName }).click();
   await page.getByRole('tab', { name: 'Plan' }).waitFor();
   return new URL(page.url()).pathname;
 }
@@ -154,6 +157,34 @@ describe.skipIf(browserMissing)('the plan in the built app', () => {
       expect(await packed.first().isVisible()).toBe(true);
       await saveScreenshot(page, 'plan-packing-list-print');
       await page.emulateMedia({ media: 'screen' });
+    },
+  );
+
+  it(
+    'plans the 12 V station where only it keeps up, says why, and packs the controller hop and the live radio',
+    {
+      timeout: 300_000,
+    },
+    async () => {
+      const page = await (await newContext(browser)).newPage();
+      await signIn(page, stationTrip.leaderEmail, demoPassword);
+      await expect.poll(() => new URL(page.url()).pathname).not.toBe('/sign-in');
+      await openTrip(page, stationTrip.trip.name);
+      const { plan } = await solve(page);
+      expect(plan.massG).not.toBeNull();
+      const kitTable = page.getByRole('table', { name: 'The kit' });
+      await kitTable.waitFor();
+      for (const kind of ['Battery', 'Controller', 'Panel']) await kitTable.getByRole('cell', { name: kind }).waitFor();
+      const note = page.getByRole('note', { name: 'Power path' });
+      await note.waitFor();
+      expect(await note.innerText()).toMatch(/12 V pack path/i);
+      await saveScreenshot(page, 'plan-twelve-volt');
+      await page.getByRole('tab', { name: 'Packing list' }).click();
+      await page.getByRole('heading', { name: 'Leads for each hop' }).waitFor();
+      const schedule = page.getByRole('table', { name: /Charging schedule/ });
+      await schedule.getByText(/ via /).first().waitFor();
+      await schedule.getByText('Runs live:').first().waitFor();
+      await saveScreenshot(page, 'plan-twelve-volt-packing');
     },
   );
 

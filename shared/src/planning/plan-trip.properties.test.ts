@@ -152,6 +152,38 @@ describe('the daily model is a relaxation of the simulation on real trips', () =
   );
 });
 
+describe('the daily model is a relaxation with both power paths', () => {
+  it(
+    'every kit of USB and 12 V gear the simulation accepts is feasible in the daily model with that kit fixed',
+    () => {
+      let accepted = 0;
+      let withPack = 0;
+      fc.assert(
+        fc.property(seedArb, picksArb, (seed, picks) => {
+          const input = feasibleInputOf(seed, (s) => inputOf(s, { bothPaths: true }));
+          const context = planningContext(input);
+          const kit = randomKit(input.gear, picks);
+          if (!context.judge(kit).feasible) return;
+          accepted++;
+          if (input.gear.some((g) => g.spec.kind === 'battery' && (kit.get(g.itemId) ?? 0) > 0)) withPack++;
+          const pre = presolve(context.problem);
+          expect(dailyBalance(pre, kit)).toMatchObject({ feasible: true, missingPaths: [], shortfalls: [] });
+          const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
+            timeoutMs: 5000,
+            now: () => 0,
+          });
+          expect(fixed.status).toBe('optimal');
+        }),
+        { seed: propertySeed, numRuns: 200 },
+      );
+      console.info(`both paths: ${accepted} accepted kits, ${withPack} with a pack`);
+      expect(accepted).toBeGreaterThan(40);
+      expect(withPack).toBeGreaterThan(20);
+    },
+    slowTestMs,
+  );
+});
+
 describe('answers on real trips', () => {
   it(
     'with a gram limit below the optimum, the answer is over-limit with the same kit as without a limit',

@@ -171,6 +171,24 @@ export function createKitSearch(
       lastRunsDry = verdict.runsDry;
   };
 
+  /**
+   * Adds energy cuts to the master, each strengthened (a coefficient above the right-hand side is lowered to it: one
+   * unit of that item meets the cut alone either way, every other term being ≥ 0) and kept only when no cut already
+   * there implies it; cuts it implies leave. Fewer, tighter rows make each master solve cheaper.
+   * Source: coefficient reduction of knapsack rows, textbook MILP preprocessing (L. A. Wolsey, Integer Programming,
+   * Wiley 1998, §7.2).
+   */
+  const addEnergyCuts = (found: readonly EnergyCut[]): void => {
+    for (const cut of found) {
+      if (!(cut.lowerWh > 0)) continue;
+      const strong = strengthenedCut(cut);
+      if (energyCuts.some((other) => implies(other, strong))) continue;
+      for (let k = energyCuts.length - 1; k >= 0; k--)
+        if (implies(strong, energyCuts[k] as EnergyCut)) energyCuts.splice(k, 1);
+      energyCuts.push(strong);
+    }
+  };
+
   /** Whether the daily model rejects a kit, adding its feasibility cuts to the master when it does. */
   const dailyRejects = (counts: KitCounts): boolean => {
     const evaluation = evaluateDailyModel(presolved, counts);
@@ -191,7 +209,7 @@ export function createKitSearch(
           kitViewsShort(presolved, trial),
       );
       const grownCuts = [...evaluateDailyModel(presolved, grown).cuts, ...kitViewCuts(presolved, grown)];
-      energyCuts.push(...grownCuts);
+      addEnergyCuts(grownCuts);
       // The grown kit fails its views, so the judge rejects it and every kit no larger: when its cuts hold the kit off
       // by float noise only, its down-set is cut off outright.
       if (grownCuts.some((cut) => clearlyBroken(presolved, cut, counts))) viewRejected.push(grown);
@@ -202,7 +220,7 @@ export function createKitSearch(
       return true;
     }
     stats.dailyRejected++;
-    energyCuts.push(...evaluation.cuts);
+    addEnergyCuts(evaluation.cuts);
     {
       // The cut at a maximal short kit (grown from this one) holds the master off a larger region near the boundary.
       const grown = lift(
@@ -210,7 +228,7 @@ export function createKitSearch(
         Infinity,
         (trial) => evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0,
       );
-      energyCuts.push(...evaluateDailyModel(presolved, grown).cuts);
+      addEnergyCuts(evaluateDailyModel(presolved, grown).cuts);
     }
     // A cut the kit breaks only by float noise could let the master propose it again: exclude its down-set as well.
     if (!evaluation.cuts.some((cut) => clearlyBroken(presolved, cut, counts))) {
@@ -345,4 +363,23 @@ export function createKitSearch(
       return [...rejected, ...viewRejected];
     },
   };
+}
+
+/** A cut with every coefficient at most its right-hand side (see `addEnergyCuts`). */
+function strengthenedCut(cut: EnergyCut): EnergyCut {
+  const cap = (v: Float64Array): Float64Array => v.map((x) => Math.min(x, cut.lowerWh));
+  return { ...cut, itemWh: cap(cut.itemWh), groupWh: cap(cut.groupWh) };
+}
+
+/**
+ * Whether cut `a` implies cut `b` for every kit: with both divided by their right-hand sides, every coefficient of `a`
+ * is at most `b`'s (then b's left side ≥ a's ≥ 1).
+ */
+function implies(a: EnergyCut, b: EnergyCut): boolean {
+  const ra = 1 / a.lowerWh;
+  const rb = 1 / b.lowerWh;
+  for (let i = 0; i < a.itemWh.length; i++) if ((a.itemWh[i] ?? 0) * ra > (b.itemWh[i] ?? 0) * rb + 1e-12) return false;
+  for (let g = 0; g < a.groupWh.length; g++)
+    if ((a.groupWh[g] ?? 0) * ra > (b.groupWh[g] ?? 0) * rb + 1e-12) return false;
+  return true;
 }

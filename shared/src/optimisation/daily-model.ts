@@ -247,7 +247,10 @@ export function buildDailyModel(
   }
 
   master?.energyCuts.forEach((cut, ci) => {
-    const terms = pre.items.flatMap((_, i) => countTerms(i, (cut.itemWh[i] ?? 0) * e));
+    // k units of an item give k × its Wh, but never need more than the right-hand side (one count is chosen per item).
+    const terms = pre.items.flatMap((_, i) =>
+      countTerms(i, (cut.itemWh[i] ?? 0) * e).map(([col, v]) => [col, Math.min(v, cut.lowerWh * e)] as const),
+    );
     pre.groups.forEach((g, gi) => {
       const wh = cut.groupWh[gi] ?? 0;
       if (wh !== 0) g.requiresAnyOf.forEach((_, a) => terms.push([wColumn(gi, a), wh * e]));

@@ -68,11 +68,11 @@ export interface SkyScratch {
   aboveFloorStartByDayWh: Float64Array;
   storeLimitWh: Float64Array;
   breakpoints: Float64Array;
-  /** Per store, harvest rounds: 1 when open (room, input limit left, a panel with harvest left reaches it). */
-  harvestOpen: Uint8Array;
-  /** Per store: 1 when it takes part in the current harvest round (open, and no open store outranks it). */
-  harvestActive: Uint8Array;
-  /** Per store: 1 when the current panel of the round water-fills it. */
+  /** Per panel × store: the store's harvest tier for that panel's harvest (`harvestTiers`; fixed by the kit). */
+  harvestTier: Uint16Array;
+  /** One more than the highest harvest tier. */
+  harvestTierCount: number;
+  /** Per store: 1 when the current panel water-fills it in the current tier. */
   harvestFillSet: Uint8Array;
   /** Per store: the charge rate (W of battery gain) it gives the device being topped up in this step. */
   topUpRateW: Float64Array;
@@ -90,8 +90,7 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     aboveFloorStartByDayWh: new Float64Array(k.dayCount),
     storeLimitWh: new Float64Array(k.storeCount),
     breakpoints: new Float64Array(2 * k.storeCount + 1),
-    harvestOpen: new Uint8Array(k.storeCount),
-    harvestActive: new Uint8Array(k.storeCount),
+    ...harvestTiers(k),
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
     leastLevelWh: leastLevelsWh(k),
@@ -127,6 +126,39 @@ function leastLevelsWh(k: CompiledKit): Float64Array {
   return levels;
 }
 
+/**
+ * Per panel × store: the store's harvest tier for that panel — 0 when no store the panel reaches outranks it, else one
+ * more than the highest tier of those that do (`storeOutranks` is a strict partial order, so this is its depth among the
+ * panel's stores). Each panel's harvest goes tier by tier; a store's tier depends only on the kit, never on what any
+ * store holds, so each step's harvest is a fixed sequence of water-fills and stays monotone in the sun and in every
+ * store's energy.
+ */
+function harvestTiers(k: CompiledKit): { harvestTier: Uint16Array; harvestTierCount: number } {
+  const { storeCount: S, panelCount: P } = k;
+  const tier = new Uint16Array(P * S);
+  let count = S > 0 ? 1 : 0;
+  for (let p = 0; p < P; p++) {
+    // Relax until stable: at most S passes, as a chain of outranking stores has at most S members.
+    for (let pass = 0, changed = true; changed && pass < S; pass++) {
+      changed = false;
+      for (let s = 0; s < S; s++) {
+        if (k.panelReach[p * S + s] !== 1) continue;
+        let t0 = 0;
+        for (let t = 0; t < S; t++) {
+          if (k.storeOutranks[s * S + t] !== 1 || k.panelReach[p * S + t] !== 1) continue;
+          t0 = Math.max(t0, (tier[p * S + t] ?? 0) + 1);
+        }
+        if (t0 !== tier[p * S + s]) {
+          tier[p * S + s] = t0;
+          changed = true;
+        }
+        count = Math.max(count, t0 + 1);
+      }
+    }
+  }
+  return { harvestTier: tier, harvestTierCount: count };
+}
+
 /** Allocates record buffers for a compiled kit. */
 export function skyRecord(k: CompiledKit): SkyRecord {
   return {
@@ -144,7 +176,7 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 
 /**
  * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
- * none below 0 °C; a store only once the stores that outrank it are full or at their limit), then each device uses its
+ * none below 0 °C; tier by tier, a store only after the stores that outrank it), then each device uses its
  * demand for the step from its own battery, then — in the camp window — the devices that need charging are topped up:
  * from the stores only they reach first, then from shared stores; to full, or — for a device that reaches a shared
  * store — from every store only as far as it will still use (merit order, down to each store's reserve, over the paths'
@@ -246,49 +278,23 @@ export function runSky(
     }
     if (availWh > 0 && !frozen) {
       // Harvest goes to the stores with the most room (usable Wh), levelling their room, within input limits — but never
-      // to a store while a store that outranks it (`storeOutranks`: keeps more per input Wh, charges the same devices as
-      // fast and as efficiently) can still take it. Each panel in turn (item id order) water-fills the stores its port
-      // reaches.
+      // to a store ahead of a store that outranks it (`storeOutranks`: keeps more per input Wh, charges the same devices
+      // as fast and as efficiently). Tier by tier (`harvestTiers`, fixed by the kit), each panel in turn (item id order)
+      // water-fills the stores of the tier its port reaches; what a tier cannot take passes to the next. Every step is a
+      // water-fill over a fixed set, so a fuller store or more harvest never leaves any store lower after the step; a
+      // store admitted only once its outrankers were full or at their limit was not (see the README's harvest notes).
       const limitLeft = scratch.storeLimitWh;
       for (let s = 0; s < S; s++) limitLeft[s] = (k.storeInputMaxW[s] ?? 0) * dt;
-      const open = scratch.harvestOpen;
-      const active = scratch.harvestActive;
+      const tierOf = scratch.harvestTier;
       const fillSet = scratch.harvestFillSet;
-      // Rounds over all panels: a store takes part in a round when it is open (room and input limit left, and some
-      // panel with harvest left reaches it) and no open store outranks it; a round's stores are fixed at its start, so
-      // a store that closes during the round opens the stores it outranked only in the next round (more sun then never
-      // lets an outranked store compete with the others earlier in the same round). At most one round per store.
-      for (let round = 0; round <= S; round++) {
-        for (let s = 0; s < S; s++) {
-          open[s] = 0;
-          if ((k.storeCapWh[s] ?? 0) - (E[s] ?? 0) <= tiny || (limitLeft[s] ?? 0) <= tiny) continue;
-          for (let p = 0; p < P; p++) {
-            if (k.panelReach[p * S + s] === 1 && (rem[p] ?? 0) > tiny) {
-              open[s] = 1;
-              break;
-            }
-          }
-        }
-        let anyActive = false;
-        for (let s = 0; s < S; s++) {
-          active[s] = 0;
-          if (open[s] !== 1) continue;
-          let outranked = false;
-          for (let t = 0; t < S && !outranked; t++)
-            if (k.storeOutranks[s * S + t] === 1 && open[t] === 1) outranked = true;
-          if (outranked) continue;
-          active[s] = 1;
-          anyActive = true;
-        }
-        if (!anyActive) break;
-        let took = false;
+      for (let tier = 0; tier < scratch.harvestTierCount; tier++) {
         for (let p = 0; p < P; p++) {
           const h = rem[p] ?? 0;
           if (h <= tiny) continue;
           let total0 = 0;
           for (let s = 0; s < S; s++) {
             fillSet[s] = 0;
-            if (active[s] !== 1 || k.panelReach[p * S + s] !== 1) continue;
+            if (k.panelReach[p * S + s] !== 1 || tierOf[p * S + s] !== tier) continue;
             const room = (k.storeCapWh[s] ?? 0) - (E[s] ?? 0);
             if (room <= tiny) continue;
             fillSet[s] = 1;
@@ -303,7 +309,6 @@ export function runSky(
             const etaO = k.storeOutputEff[s] ?? 1;
             const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
             if (!(take > 0)) continue;
-            took = true;
             rem[p] = (rem[p] ?? 0) - take;
             limitLeft[s] = (limitLeft[s] ?? 0) - take;
             E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
@@ -315,7 +320,6 @@ export function runSky(
             }
           }
         }
-        if (!took) break;
       }
     }
     if (ledger) {
@@ -568,7 +572,7 @@ function storeEta(k: CompiledKit, s: number): number {
   return (k.storeChargeEff[s] ?? 1) * (k.storeOutputEff[s] ?? 1);
 }
 
-/** Input Wh that brings the room of every store of the harvest round (`active`) down to `level` (usable Wh). */
+/** Input Wh that brings the room of every store being water-filled (`active`) down to `level` (usable Wh). */
 function fillAtLevel(
   k: CompiledKit,
   E: Float64Array,
@@ -588,7 +592,7 @@ function fillAtLevel(
 }
 
 /**
- * The room level (usable Wh) to which `inputWh` brings the stores of the harvest round (`active`): `fillAtLevel` is piecewise
+ * The room level (usable Wh) to which `inputWh` brings the stores being water-filled (`active`): `fillAtLevel` is piecewise
  * linear and falling in the level, with breaks where a store starts taking harvest (level = its room) and where its
  * input limit binds; find the two breaks around `inputWh` and interpolate. No allocation: `breaks` is scratch.
  */

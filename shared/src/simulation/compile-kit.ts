@@ -93,8 +93,9 @@ export interface CompiledKit {
   /**
    * store × store: `[s * storeCount + t]` is 1 when store t outranks store s for harvest — t keeps more of each input Wh
    * (charge × output efficiency, strictly) and, for every device s can charge, t can charge it too, at least as fast and
-   * through a path at least as efficient. Harvest reaches s only once every such t the panel reaches is full or at its
-   * input limit, so a lossy bank added beside a better one never takes the harvest the better one would have kept.
+   * through a path at least as efficient. Harvest reaches s in a later tier than every such t the panel reaches (see
+   * `harvestTiers` in run-sky.ts), so a lossy bank added beside a better one never takes the harvest the better one
+   * would have kept.
    */
   storeOutranks: Uint8Array;
   freezeBlocksDeviceTopUps: boolean;

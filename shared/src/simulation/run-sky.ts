@@ -281,8 +281,8 @@ export function runSky(
       // to a store ahead of a store that outranks it (`storeOutranks`: keeps more per input Wh, charges the same devices
       // as fast and as efficiently). Tier by tier (`harvestTiers`, fixed by the kit), each panel in turn (item id order)
       // water-fills the stores of the tier its port reaches; what a tier cannot take passes to the next. Every step is a
-      // water-fill over a fixed set, so a fuller store or more harvest never leaves any store lower after the step; a
-      // store admitted only once its outrankers were full or at their limit was not (see the README's harvest notes).
+      // water-fill over a fixed set, so a fuller store or more harvest never leaves any store lower after the step;
+      // admitting a store once its outrankers were full or at their limit was not (the README's known gap (5)).
       const limitLeft = scratch.storeLimitWh;
       for (let s = 0; s < S; s++) limitLeft[s] = (k.storeInputMaxW[s] ?? 0) * dt;
       const tierOf = scratch.harvestTier;

@@ -75,7 +75,7 @@ export const leadArb = fc
   })
   .map((l) => leadSpecSchema.parse({ kind: 'lead', ...l }));
 
-// The 12 V path's gear. Not in `kitItemArb` yet: the simulation does not use it.
+// The 12 V path's gear, kept out of `kitItemArb` so the USB-only properties keep their seeds; `bothPathsItemArb` mixes it in.
 
 const dcConnector = fc.constantFrom<Connector>('ring-terminal', '12v-accessory', 'barrel-5.5x2.1', 'radio-dc', 'other');
 const dcPort = fc.record({ connector: dcConnector, captiveCable: fc.boolean() });

@@ -57,6 +57,51 @@ export function dayBoundsOf(pre: PresolvedProblem): (s: number, t: number) => Da
  */
 const boundsCache = new WeakMap<readonly ActiveItem[], (s: number, t: number) => DayBounds>();
 
+/**
+ * Registers the bounds of a view of `base` (same steps; some panels and stores left out, a lower best charge
+ * efficiency — see `kit-views.ts`) as the base's bounds with the items left out set to 0 and the rest scaled by the
+ * ratio of best charge efficiencies (every panel and step vector is η* × Wh; the acceptance vector carries each
+ * store's own efficiency and is only masked). The base's choice of step thresholds is kept: any subset of thresholds
+ * is a valid bound, so the view's bounds stay a relaxation. Far cheaper than building them again for every view.
+ * @example deriveDayBounds(view, pre) // dayBoundsOf(view) now reads pre's memo
+ */
+export function deriveDayBounds(view: PresolvedProblem, base: PresolvedProblem): void {
+  if (boundsCache.has(view.items)) return;
+  const baseBounds = dayBoundsOf(base);
+  const ratio = base.bestChargeEfficiency > 0 ? view.bestChargeEfficiency / base.bestChargeEfficiency : 0;
+  const kept = view.items.map((it) => it.panel !== undefined || it.store !== undefined);
+  const scaled = (v: BoundVector, factor: number): BoundVector => v.map((x, i) => (kept[i] ? x * factor : 0));
+  const memo = new Map<number, DayBounds>();
+  const dayCount = base.problem.coefficients.dayCount;
+  boundsCache.set(view.items, (s, t) => {
+    const key = s * (dayCount + 1) + t;
+    let hit = memo.get(key);
+    if (!hit) {
+      const b = baseBounds(s, t);
+      const groupHarvest = b.groupHarvest.map((v) => {
+        if (!v) return null;
+        const out = scaled(v, ratio);
+        return out.some((x) => x > 0) ? out : null;
+      });
+      hit = {
+        groupHarvest,
+        accept: scaled(b.accept, 1),
+        steps: b.steps.map((v) => scaled(v, ratio)),
+        ...(b.split
+          ? {
+              split: {
+                early: b.split.early.map((v) => scaled(v, ratio)),
+                late: b.split.late.map((v) => scaled(v, ratio)),
+              },
+            }
+          : {}),
+      };
+      memo.set(key, hit);
+    }
+    return hit;
+  });
+}
+
 function buildDayBounds(pre: PresolvedProblem): (s: number, t: number) => DayBounds {
   const c = pre.problem.coefficients;
   const n = pre.items.length;

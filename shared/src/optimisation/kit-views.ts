@@ -1,3 +1,4 @@
+import { deriveDayBounds } from './day-bounds.js';
 import { evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { alternativePresent, type ActiveItem, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
 import type { KitCounts } from './types.js';
@@ -136,7 +137,7 @@ function restricted(pre: PresolvedProblem, stores: ReadonlySet<number>, demandWh
     byKey.set(key, hit);
   }
   const c = pre.problem.coefficients;
-  return {
+  const view: PresolvedProblem = {
     ...pre,
     items: hit.items,
     bestChargeEfficiency: hit.bestChargeEfficiency,
@@ -145,6 +146,8 @@ function restricted(pre: PresolvedProblem, stores: ReadonlySet<number>, demandWh
       coefficients: { ...c, demandWh, roomDemandWh: c.roomDemandWh ?? c.demandWh },
     },
   };
+  deriveDayBounds(view, pre);
+  return view;
 }
 
 /**

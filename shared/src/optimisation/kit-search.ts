@@ -125,7 +125,6 @@ export function createKitSearch(
   const judgeRejects = (trial: KitCounts): boolean =>
     knownRejectedHolding(trial) !== undefined ||
     evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
-    (useViews && kitViewsShort(presolved, trial)) ||
     !judge(trial).feasible;
 
   // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.

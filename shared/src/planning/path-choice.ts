@@ -50,7 +50,7 @@ function pathWords(context: PlanningContext, counts: KitCounts, path: 'pack' | '
 export function pathChoice(
   context: PlanningContext,
   counts: KitCounts,
-  options: { now?: () => number; timeBudgetMs?: number } = {},
+  options: { now?: () => number; timeBudgetMs?: number; knownRejected?: readonly KitCounts[] } = {},
 ): PlanPathChoice | null {
   const { input } = context;
   const tripDays = context.solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
@@ -79,9 +79,13 @@ export function pathChoice(
     context.solarOptions,
     context,
   );
+  // Only the grams matter here, and every kit the trip's own search rejected (same trip, same judge) is rejected in the
+  // smaller gear too.
   const answer = optimiseKit(other.problem, other.judge, {
     ...(options.now ? { now: options.now } : {}),
     ...(options.timeBudgetMs !== undefined ? { timeBudgetMs: options.timeBudgetMs } : {}),
+    tieBreakByMargin: false,
+    knownRejected: options.knownRejected ?? [],
   });
   const chosen = pathWords(context, counts, path);
   const capitalised = chosen.charAt(0).toUpperCase() + chosen.slice(1);

@@ -294,7 +294,7 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   evaluation.verdict.text = withDeviceNames(context, evaluation.verdict.text);
   const swaps: PlanSwap[] = [];
   const gramPrices: PlanGramPrice[] = [];
-  const choice = pathChoice(context, counts, { now, ...left() });
+  const choice = pathChoice(context, counts, { now, ...left(), knownRejected: [...search.rejectedKits] });
   if (options.withExtras !== false) {
     const named = (lines: { itemId: string; count: number }[]) =>
       lines.map((l) => ({ ...l, name: context.gearById.get(l.itemId)?.name ?? l.itemId }));

@@ -254,9 +254,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   // Top-ups draw the least contested stores first (fewest devices that can charge from them), then in merit order: a
   // device whose banks it shares with a headlamp keeps off a pack that the radio also needs while its banks hold
   // energy — an added 12 V → USB adapter gives the phone that pack without letting it drain it first.
-  storeEntries.sort(
-    (a, b) => (reachCount.get(a.itemId) ?? 0) - (reachCount.get(b.itemId) ?? 0) || meritCompare(a, b),
-  );
+  storeEntries.sort((a, b) => (reachCount.get(a.itemId) ?? 0) - (reachCount.get(b.itemId) ?? 0) || meritCompare(a, b));
 
   const storeCount = storeEntries.length;
   const stores: StoreUnit[] = storeEntries.map((s) => ({

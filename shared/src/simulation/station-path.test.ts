@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { KitEntry, TripDevice } from '../schemas/kit.js';
-import { syntheticTripSolar } from '../testing/synthetic-solar.js';
+import { scaleSolar, syntheticTripSolar } from '../testing/synthetic-solar.js';
+import { controllerHarvestW } from '../station/controller-harvest.js';
+import { cellTemperatureC } from '../temperature/cell-temperature.js';
 import { testBank, testLead, testPhone, testRadio } from '../testing/fixtures.js';
 import {
   testController,
@@ -11,7 +13,7 @@ import {
 } from '../testing/station-fixtures.js';
 import { compileKit } from './compile-kit.js';
 import { simulateKit } from './simulate-kit.js';
-import { leadPassShare, packStore } from './station-path.js';
+import { leadPassShare, packStore, stationPanelSeries } from './station-path.js';
 
 /**
  * The 12 V path in the simulation: a pack is a store, a 12 V panel reaches it through a controller, a 12 V radio
@@ -238,5 +240,41 @@ describe('a USB device from a pack through a 12 V → USB adapter', () => {
     expect(result.devices[0]?.paths[0]).toMatchObject({ converterItemId: 'adapter', pathEfficiency: 0.9 });
     // Phone 7.5 Wh a day through 0.9 × 0.85: 9.8039 Wh from the pack a full day.
     expect(result.skies[0]?.ledger[0]?.storesEndWh).toBeCloseTo(69.12 - 7.5 / (0.9 * 0.85), 4);
+  });
+});
+
+describe('a 12 V panel whose harvest would fall with more sun', () => {
+  // A 5 W panel at 15 V maximum power (16.5 V open-circuit, −0.5 and −0.4 %/°C) through PWM into a 4S lithium
+  // polymer pack (14.8 V): more light heats the cell, its voltage sinks towards the pack's, and the PWM current falls
+  // with it (the straight-segment curve) — the shrunk case of a "more sun" soak.
+  const panel = testTwelveVoltPanel({
+    ratedW: 5,
+    maxPowerVolts: 15,
+    maxPowerAmps: 5 / 15,
+    openCircuitVolts: 16.5,
+    tempCoeffPctPerC: -0.5,
+    tempCoeffVocPctPerC: -0.4,
+  });
+  const controller = testController({ controllerType: 'pwm' });
+  const trip = syntheticTripSolar({ nights: 2, peakWm2: 280, lowC: 8, highC: 20 });
+
+  it('the raw physics: at 20 °C air, 840 W/m² harvests less than 280 W/m²', () => {
+    const at = (g: number) =>
+      controllerHarvestW(
+        panel,
+        controller,
+        14.8,
+        { irradianceWm2: g, cellTempC: cellTemperatureC(20, g) },
+        { panelLossFactor: 1 },
+      );
+    expect(at(840)).toBeLessThan(at(280));
+  });
+
+  it('the series keeps the peak light harvest, so three times the sun never harvests less in any step', () => {
+    const base = stationPanelSeries(panel, controller, 14.8, trip);
+    const sunnier = stationPanelSeries(panel, controller, 14.8, scaleSolar(trip, 3));
+    let worstDropW = 0;
+    base.forEach((sky, k) => sky.forEach((w, i) => (worstDropW = Math.max(worstDropW, w - (sunnier[k]?.[i] ?? 0)))));
+    expect(worstDropW).toBe(0);
   });
 });

@@ -113,23 +113,70 @@ export function stationPanelSeries(
   options: PanelPowerOptions = {},
 ): Float64Array[] {
   const panelLossFactor = stationPanelLossFactor();
+  // The peak light of a step depends only on its air temperature: found once per distinct temperature.
+  const peakByAirC = new Map<number, number>();
   return solar.skies.map((sky) => {
     const series = new Float64Array(solar.steps.length);
     for (let i = 0; i < solar.steps.length; i++) {
       const step = solar.steps[i];
       const g = sky.planeIrradianceWm2[i] ?? 0;
       if (!step || !(g > 0) || g < panel.dropoutIrradianceWm2) continue;
-      const cellTempC = cellTemperatureC(step.airTempC, g, options.cellTemperature);
-      series[i] = controllerHarvestW(
-        panel,
-        controller,
-        batteryVolts,
-        { irradianceWm2: g, cellTempC },
-        { panelLossFactor },
-      );
+      const harvestAtW = (light: number): number =>
+        controllerHarvestW(
+          panel,
+          controller,
+          batteryVolts,
+          { irradianceWm2: light, cellTempC: cellTemperatureC(step.airTempC, light, options.cellTemperature) },
+          { panelLossFactor },
+        );
+      let peak = peakByAirC.get(step.airTempC);
+      if (peak === undefined) {
+        peak = peakLightWm2(harvestAtW, panel.dropoutIrradianceWm2);
+        peakByAirC.set(step.airTempC, peak);
+      }
+      series[i] = harvestAtW(Math.min(g, peak));
     }
     return series;
   });
+}
+
+/** Highest light the peak search looks at, W/m²: well above any sun, so the "more sun" checks have headroom. */
+const peakSearchMaxWm2 = 5000;
+/** Golden-section steps: the bracket shrinks to 5000 × 0.618⁶⁰ W/m², far below any visible change in harvest. */
+const peakSearchSteps = 60;
+
+/**
+ * The light at which a 12 V panel's harvest peaks at a given air temperature, W/m². More light heats the cell, and
+ * through a PWM controller (or an MPPT one with the pack above the panel's hot maximum-power voltage) the harvest can
+ * then fall as the panel's voltage sinks towards the pack's; a step brighter than the peak keeps the peak's harvest,
+ * so harvest never falls with more sun (the solver relies on it) — optimistic only in that corner, where the pack's
+ * voltage nearly matches the hot panel's. Harvest rises, then may fall (a single peak), so a golden-section search
+ * finds it.
+ */
+function peakLightWm2(harvestAtW: (light: number) => number, fromWm2: number): number {
+  const ratio = (Math.sqrt(5) - 1) / 2;
+  let lo = fromWm2;
+  let hi = peakSearchMaxWm2;
+  let a = hi - ratio * (hi - lo);
+  let b = lo + ratio * (hi - lo);
+  let fa = harvestAtW(a);
+  let fb = harvestAtW(b);
+  for (let k = 0; k < peakSearchSteps; k++) {
+    if (fa < fb) {
+      lo = a;
+      a = b;
+      fa = fb;
+      b = lo + ratio * (hi - lo);
+      fb = harvestAtW(b);
+    } else {
+      hi = b;
+      b = a;
+      fb = fa;
+      a = hi - ratio * (hi - lo);
+      fa = harvestAtW(a);
+    }
+  }
+  return (lo + hi) / 2;
 }
 
 /** The cache key of `stationPanelSeries` for one panel, controller and pack voltage. */

@@ -1,31 +1,19 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isKitFeasible, simulateKit } from './simulate-kit.js';
-import type { KitEntry, TripDevice } from '../schemas/kit.js';
+import {
+  kitWithOneMore,
+  scaleDemand,
+  worstLedgerImbalanceWh,
+  worstStoreRiseWh,
+  worstUnitDropWh,
+} from '../testing/simulation-checks.js';
 import { devicesArb, kitArb, kitItemArb, share, tripArb } from '../testing/arbitraries.js';
 import { compileKit } from './compile-kit.js';
 import { scaleSolar } from '../testing/synthetic-solar.js';
 
 const reserveArb = share(0, 0.3);
 const runs = { numRuns: 300 };
-
-function scaleDemand(devices: TripDevice[], factor: number): TripDevice[] {
-  return devices.map((d) => {
-    const p = d.spec.useProfile;
-    const useProfile =
-      p.basis === 'radio-hours'
-        ? {
-            ...p,
-            transmitMinutesPerDay: p.transmitMinutesPerDay * factor,
-            receiveHoursPerDay: p.receiveHoursPerDay * factor,
-            standbyHoursPerDay: p.standbyHoursPerDay * factor,
-          }
-        : p.basis === 'battery-share'
-          ? { ...p, batterySharePerDay: p.batterySharePerDay * factor }
-          : { ...p, energyWhPerDay: p.energyWhPerDay * factor };
-    return { ...d, spec: { ...d.spec, useProfile } };
-  });
-}
 
 // Property runs take seconds; the timeout is for CI machines under load, not a speed check.
 const propertyTimeoutMs = 120_000;
@@ -37,24 +25,7 @@ describe('simulation properties (fast-check)', () => {
       fc.assert(
         fc.property(tripArb, kitArb(), devicesArb, reserveArb, (solar, kit, devices, reserveShare) => {
           const result = simulateKit({ solar, kit, devices, reserveShare });
-          let worstImbalanceWh = 0;
-          for (const sky of result.skies) {
-            for (const d of sky.ledger) {
-              const flows =
-                d.harvestWh -
-                d.storeChargeLossWh -
-                d.storeOutputLossWh -
-                d.converterLossWh -
-                d.deviceChargeLossWh -
-                d.deliveredWh;
-              worstImbalanceWh = Math.max(
-                worstImbalanceWh,
-                Math.abs(d.storedEndWh - d.storedStartWh - flows),
-                Math.abs(d.availableHarvestWh - d.harvestWh - d.spilledWh),
-              );
-            }
-          }
-          expect(worstImbalanceWh).toBeLessThan(1e-9);
+          expect(worstLedgerImbalanceWh(result)).toBeLessThan(1e-9);
         }),
         runs,
       );
@@ -80,15 +51,7 @@ describe('simulation properties (fast-check)', () => {
             if (!isKitFeasible({ solar, kit, devices, reserveShare })) return;
             if (compileKit({ solar, kit, devices, reserveShare }).devices.some((d) => d.needsChargingPath))
               meaningful++;
-            let bigger: KitEntry[];
-            if (asCount && kit.length > 0) {
-              const i = where % kit.length;
-              bigger = kit.map((e, j) => (j === i ? { ...e, count: e.count + 1 } : e));
-            } else {
-              // Insert anywhere, so the new line's position in the kit cannot matter.
-              const i = where % (kit.length + 1);
-              bigger = [...kit.slice(0, i), { itemId: 'added', count: 1, spec: extra }, ...kit.slice(i)];
-            }
+            const bigger = kitWithOneMore(kit, extra, where, asCount);
             expect(isKitFeasible({ solar, kit: bigger, devices, reserveShare })).toBe(true);
           },
         ),
@@ -112,12 +75,7 @@ describe('simulation properties (fast-check)', () => {
           (solar, kit, devices, reserveShare, factor) => {
             const base = simulateKit({ solar, kit, devices, reserveShare });
             const sunnier = simulateKit({ solar: scaleSolar(solar, factor), kit, devices, reserveShare });
-            let worstDropWh = 0;
-            base.skies.forEach((sky, k) => {
-              const more = sunnier.skies[k]?.unitWhByStep ?? new Float64Array();
-              sky.unitWhByStep.forEach((wh, i) => (worstDropWh = Math.max(worstDropWh, wh - (more[i] ?? -Infinity))));
-            });
-            expect(worstDropWh).toBeLessThan(1e-9);
+            expect(worstUnitDropWh(base, sunnier)).toBeLessThan(1e-9);
           },
         ),
         runs,
@@ -141,15 +99,7 @@ describe('simulation properties (fast-check)', () => {
           (solar, kit, devices, reserveShare, factor) => {
             const base = simulateKit({ solar, kit, devices, reserveShare });
             const hungrier = simulateKit({ solar, kit, devices: scaleDemand(devices, factor), reserveShare });
-            const units = base.stores.length + base.devices.length;
-            let worstRiseWh = 0;
-            base.skies.forEach((sky, k) => {
-              const more = hungrier.skies[k]?.unitWhByStep ?? new Float64Array();
-              sky.unitWhByStep.forEach((wh, i) => {
-                if (i % units < base.stores.length) worstRiseWh = Math.max(worstRiseWh, (more[i] ?? Infinity) - wh);
-              });
-            });
-            expect(worstRiseWh).toBeLessThan(1e-9);
+            expect(worstStoreRiseWh(base, hungrier)).toBeLessThan(1e-9);
           },
         ),
         runs,

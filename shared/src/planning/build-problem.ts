@@ -13,15 +13,14 @@ import type {
   PathNeed,
   StoreCoefficients,
 } from '../optimisation/types.js';
-import { deviceChargePowerW } from '../demand/device-demand.js';
 import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { KitEntry } from '../schemas/kit.js';
 import type { BatterySpec, ControllerSpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
 import { chargePaths, joinPorts, type ChargePath, type KitConverter, type KitLead } from '../simulation/connections.js';
 import {
   packChargePaths,
-  packStore,
   panelReachesPack,
+  tripPackStore,
   stationPanelSeries,
   stationSeriesKey,
   type KitController,
@@ -30,6 +29,7 @@ import {
 import { isKitFeasible, simulateKit } from '../simulation/simulate-kit.js';
 import type { KitSimulation } from '../simulation/types.js';
 import { bankUsableWh } from '../storage/bank.js';
+import { packVolts } from '../station/pack-volts.js';
 import { computeTripSolar, type TripSolarOptions } from '../sun/trip-solar.js';
 import type { TripSolarSeries } from '../sun/trip-solar-types.js';
 import type { PlanningGear, PlanningInput } from './planning-input.js';
@@ -126,14 +126,6 @@ export function planningContext(
   const controllers: KitController[] = owned.flatMap((g) =>
     g.spec.kind === 'controller' ? [{ itemId: g.itemId, spec: g.spec as ControllerSpec }] : [],
   );
-  // A pack's usable energy as the simulation takes it: Peukert at the heaviest steady draw of the trip's 12 V devices.
-  const packDrawA = (pack: BatterySpec) => {
-    const volts = packStore(pack).volts.nominalVolts;
-    return Math.max(
-      0,
-      ...input.devices.filter((d) => d.spec.chargesVia === '12v-dc').map((d) => deviceChargePowerW(d.spec) / volts),
-    );
-  };
   const leads: KitLead[] = owned.flatMap((g) =>
     g.spec.kind === 'lead' ? [{ itemId: g.itemId, spec: g.spec as LeadSpec }] : [],
   );
@@ -209,7 +201,7 @@ export function planningContext(
     const requiresAnyOf: PathAlternative[] = [];
     const best = gridOf(skyCount, stepCount);
     for (const pack of packs) {
-      const volts = packStore(pack.spec).volts.nominalVolts;
+      const volts = packVolts(pack.spec.chemistry, pack.spec.cellsInSeries).nominalVolts;
       for (const reach of panelReachesPack(spec, pack.spec, controllers, leads, coldestAirC)) {
         requiresAnyOf.push({ itemIds: [reach.controllerItemId, pack.itemId, ...reach.leadItemIds].sort() });
         const key = stationSeriesKey(g.itemId, reach.controllerItemId, volts);
@@ -257,7 +249,7 @@ export function planningContext(
   };
   // A pack takes at most its own charge limit (its controllers can only lower it): an upper bound, as the model needs.
   const packStores: StoreCoefficients[] = packs.map((b) => {
-    const pack = packStore(b.spec, packDrawA(b.spec));
+    const pack = tripPackStore(b.spec, input.devices);
     return {
       itemId: b.itemId,
       usableWh: pack.usableWh,

@@ -14,7 +14,7 @@ import {
 } from './connections.js';
 import {
   packChargePaths,
-  packStore,
+  tripPackStore,
   panelReachesPack,
   stationPanelSeries,
   stationSeriesKey,
@@ -183,13 +183,6 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   stationPanels.sort(byId);
   const usedItemIds = new Set<string>();
   const coldestAirC = solar.steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity);
-  // A lead-acid pack's capacity is taken at the heaviest steady draw of the trip's 12 V devices (Peukert's law).
-  const packDrawA = (volts: number) =>
-    Math.max(
-      0,
-      ...devices.filter((d) => d.spec.chargesVia === '12v-dc').map((d) => deviceChargePowerW(d.spec) / volts),
-    );
-
   // Which controllers join each 12 V panel to each pack line (the cold open-circuit check included).
   const packReach = new Map<string, StationReach[]>();
   for (const p of stationPanels)
@@ -212,7 +205,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     }
   }
   for (const b of packLines) {
-    const pack = packStore(b.spec, packDrawA(packStore(b.spec).volts.nominalVolts));
+    const pack = tripPackStore(b.spec, devices);
     // The controllers feeding a pack cap its input with their charge current (each controller counted once per pack).
     const feeding = new Set<string>();
     for (const p of stationPanels)
@@ -237,20 +230,23 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
       });
     }
   }
-  // How many of the trip's devices each store item can charge (needed or not, so the order never moves with demand).
-  const reachCount = new Map<string, number>();
+  // Every path from each store item to each device, found once: they rank the stores and then become the hulls.
+  const pathsByItem = new Map<string, ReturnType<typeof chargePaths>[]>();
   for (const e of storeEntries) {
-    if (reachCount.has(e.itemId)) continue;
-    let n = 0;
-    for (const d of devices) {
-      const found =
+    if (pathsByItem.has(e.itemId)) continue;
+    pathsByItem.set(
+      e.itemId,
+      devices.map((d) =>
         e.kind === 'bank'
           ? chargePaths(e.spec, d.spec, converters, leads)
-          : packChargePaths(e.spec, d.spec, converters, leads);
-      if (found.paths.length > 0) n++;
-    }
-    reachCount.set(e.itemId, n);
+          : packChargePaths(e.spec, d.spec, converters, leads),
+      ),
+    );
   }
+  // How many of the trip's devices each store item can charge (needed or not, so the order never moves with demand).
+  const reachCount = new Map(
+    [...pathsByItem].map(([itemId, found]) => [itemId, found.filter((f) => f.paths.length > 0).length]),
+  );
   // Top-ups draw the least contested stores first (fewest devices that can charge from them), then in merit order: a
   // device whose banks it shares with a headlamp keeps off a pack that the radio also needs while its banks hold
   // energy — an added 12 V → USB adapter gives the phone that pack without letting it drain it first.
@@ -347,10 +343,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     const paths: (ChargePath | null)[] = [];
     const missing = new Map<string, MissingLink>();
     storeEntries.forEach((s, si) => {
-      const found =
-        s.kind === 'bank'
-          ? chargePaths(s.spec, d.spec, converters, leads)
-          : packChargePaths(s.spec, d.spec, converters, leads);
+      const found = pathsByItem.get(s.itemId)?.[di] ?? { paths: [], missing: [] };
       const best = found.paths[0] ?? null;
       paths.push(best);
       const idx = si * deviceCount + di;

@@ -65,6 +65,20 @@ export function packStore(battery: BatterySpec, drawA?: number): PackStore {
   };
 }
 
+/**
+ * A pack as a store on a trip: its usable energy taken at the heaviest steady draw of the trip's 12 V devices (their
+ * charge power at the pack's nominal voltage; Peukert's law for lead-acid). The simulation and the planner both use
+ * this one figure.
+ */
+export function tripPackStore(battery: BatterySpec, devices: readonly { spec: DeviceSpec }[]): PackStore {
+  const volts = packVolts(battery.chemistry, battery.cellsInSeries).nominalVolts;
+  const drawA = Math.max(
+    0,
+    ...devices.filter((d) => d.spec.chargesVia === '12v-dc').map((d) => deviceChargePowerW(d.spec) / volts),
+  );
+  return packStore(battery, drawA);
+}
+
 /** How a 12 V panel reaches a pack: through which controller and leads. */
 export interface StationReach {
   controllerItemId: string;

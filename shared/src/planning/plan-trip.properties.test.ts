@@ -124,29 +124,42 @@ function withMoreSun(input: PlanningInput, shadeKept: number, cloudGain: number)
   };
 }
 
+/**
+ * Draws `numRuns` inputs, keeps the random kits the simulation accepts and checks each is feasible in the daily model
+ * with that kit fixed (forward pass and MILP); returns the accepted kits, and those holding a 12 V pack.
+ */
+function checkRelaxation(
+  draw: (seed: number) => PlanningInput,
+  numRuns: number,
+): { accepted: number; withPack: number } {
+  let accepted = 0;
+  let withPack = 0;
+  fc.assert(
+    fc.property(seedArb, picksArb, (seed, picks) => {
+      const input = feasibleInputOf(seed, draw);
+      const context = planningContext(input);
+      const kit = randomKit(input.gear, picks);
+      if (!context.judge(kit).feasible) return;
+      accepted++;
+      if (input.gear.some((g) => g.spec.kind === 'battery' && (kit.get(g.itemId) ?? 0) > 0)) withPack++;
+      const pre = presolve(context.problem);
+      expect(dailyBalance(pre, kit)).toMatchObject({ feasible: true, missingPaths: [], shortfalls: [] });
+      const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
+        timeoutMs: 5000,
+        now: () => 0,
+      });
+      expect(fixed.status).toBe('optimal');
+    }),
+    { seed: propertySeed, numRuns },
+  );
+  return { accepted, withPack };
+}
+
 describe('the daily model is a relaxation of the simulation on real trips', () => {
   it(
     'every kit the simulation accepts is feasible in the daily model with that kit fixed (forward pass and MILP)',
     () => {
-      let accepted = 0;
-      fc.assert(
-        fc.property(seedArb, picksArb, (seed, picks) => {
-          const input = feasibleInputOf(seed);
-          const context = planningContext(input);
-          const kit = randomKit(input.gear, picks);
-          if (!context.judge(kit).feasible) return;
-          accepted++;
-          const pre = presolve(context.problem);
-          expect(dailyBalance(pre, kit)).toMatchObject({ feasible: true, missingPaths: [], shortfalls: [] });
-          const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
-            timeoutMs: 5000,
-            now: () => 0,
-          });
-          expect(fixed.status).toBe('optimal');
-        }),
-        { seed: propertySeed, numRuns: 300 },
-      );
-      expect(accepted).toBeGreaterThan(100);
+      expect(checkRelaxation(widerInputOf, 300).accepted).toBeGreaterThan(100);
     },
     slowTestMs,
   );
@@ -156,26 +169,7 @@ describe('the daily model is a relaxation with both power paths', () => {
   it(
     'every kit of USB and 12 V gear the simulation accepts is feasible in the daily model with that kit fixed',
     () => {
-      let accepted = 0;
-      let withPack = 0;
-      fc.assert(
-        fc.property(seedArb, picksArb, (seed, picks) => {
-          const input = feasibleInputOf(seed, (s) => inputOf(s, { bothPaths: true }));
-          const context = planningContext(input);
-          const kit = randomKit(input.gear, picks);
-          if (!context.judge(kit).feasible) return;
-          accepted++;
-          if (input.gear.some((g) => g.spec.kind === 'battery' && (kit.get(g.itemId) ?? 0) > 0)) withPack++;
-          const pre = presolve(context.problem);
-          expect(dailyBalance(pre, kit)).toMatchObject({ feasible: true, missingPaths: [], shortfalls: [] });
-          const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
-            timeoutMs: 5000,
-            now: () => 0,
-          });
-          expect(fixed.status).toBe('optimal');
-        }),
-        { seed: propertySeed, numRuns: 200 },
-      );
+      const { accepted, withPack } = checkRelaxation((s) => inputOf(s, { bothPaths: true }), 200);
       console.info(`both paths: ${accepted} accepted kits, ${withPack} with a pack`);
       expect(accepted).toBeGreaterThan(40);
       expect(withPack).toBeGreaterThan(20);

@@ -211,10 +211,10 @@ const commonLeads = [
 ];
 
 /** A kit from a list of item specs (each its own line, count 1–2), half the time with the common leads. */
-export const kitArb = (maxLines = 6): fc.Arbitrary<KitEntry[]> =>
+export const kitArb = (maxLines = 6, itemArb: fc.Arbitrary<KitItemSpec> = kitItemArb): fc.Arbitrary<KitEntry[]> =>
   fc
     .tuple(
-      fc.array(fc.record({ spec: kitItemArb, count: fc.integer({ min: 1, max: 2 }) }), {
+      fc.array(fc.record({ spec: itemArb, count: fc.integer({ min: 1, max: 2 }) }), {
         maxLength: maxLines,
         size: 'max',
       }),
@@ -332,19 +332,7 @@ export const bothPathsItemArb: fc.Arbitrary<KitItemSpec> = fc.oneof(
 );
 
 /** A kit of both paths (each line count 1–2), half the time with the common leads. */
-export const bothPathsKitArb = (maxLines = 7): fc.Arbitrary<KitEntry[]> =>
-  fc
-    .tuple(
-      fc.array(fc.record({ spec: bothPathsItemArb, count: fc.integer({ min: 1, max: 2 }) }), {
-        maxLength: maxLines,
-        size: 'max',
-      }),
-      fc.boolean(),
-    )
-    .map(([lines, withCommonLeads]) => [
-      ...lines.map((l, i) => ({ itemId: `item-${i}`, count: l.count, spec: l.spec })),
-      ...(withCommonLeads ? commonLeads.map((spec, i) => ({ itemId: `common-lead-${i}`, count: 1, spec })) : []),
-    ]);
+export const bothPathsKitArb = (maxLines = 7): fc.Arbitrary<KitEntry[]> => kitArb(maxLines, bothPathsItemArb);
 
 /** Trip devices where radios may run live from a pack. */
 export const bothPathsDevicesArb: fc.Arbitrary<TripDevice[]> = fc

@@ -30,7 +30,7 @@ const radio = (overrides: Parameters<typeof testRadio>[0] = {}): TripDevice => (
 const radioDayWh = 13.8 * (1.6 / 3 + 0.35 * 2 + 0.08 * 8);
 
 /**
- * 16 AWG copper, 13.17 Ω/km at 20 °C (NIST Handbook 100, Copper Wire Tables, 1966, table 3: 4.016 Ω/1000 ft);
+ * 16 AWG copper, 13.17 Ω/km at 20 °C (NBS Handbook 100, Copper Wire Tables, 1966, table 1: 4.016 Ω/1000 ft; from memory);
  * the 1 m lead's loop is 2 m. The radio charges at 0.5 A × 13.8 V = 6.9 W, i.e. 6.9 / 12.8 = 0.539 A from the pack.
  */
 const leadShare = 1 - ((6.9 / 12.8) * 0.002 * 13.17) / 12.8;

@@ -5,12 +5,14 @@ import {
   modelScale,
   type KitCut,
   type ModelScale,
+  yColumn,
 } from './daily-model.js';
 import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { kitViewCuts, kitViewsShort } from './kit-views.js';
 import { solveWithJsLp } from './js-lp-backend.js';
 import { kitKey, kitMassG, kitNoLarger } from './kit.js';
-import type { LinearSolver } from './linear-model.js';
+import type { LinearSolution, LinearSolver } from './linear-model.js';
+import { createMasterSearch } from './master-branching.js';
 import { presolve, type PresolvedProblem } from './presolve.js';
 import type { JudgeVerdict, KitCounts, KitJudge, OptimisationProblem, OptimiseOptions, RunsDry } from './types.js';
 
@@ -43,7 +45,14 @@ export interface KitSearch {
   /** The judge, with a cache (kits are judged once). */
   judge(counts: KitCounts): JudgeVerdict;
   readonly now: () => number;
-  readonly stats: { rounds: number; judgedKits: number; dailyRejected: number };
+  readonly stats: {
+    rounds: number;
+    judgedKits: number;
+    dailyRejected: number;
+    /** Branch-and-bound nodes of the master, and how often it gave up and the MILP solver answered. */
+    masterNodes?: number;
+    masterFallbacks?: number;
+  };
   /** The earliest dry finding among rejected kits (for reports). */
   readonly lastRunsDry: RunsDry | undefined;
   /**
@@ -70,6 +79,8 @@ export interface KitSearchOptions extends OptimiseOptions {
    * finds the daily model's own optimum (the HiGHS cross-check compares that).
    */
   kitViews?: boolean;
+  /** Nodes the master's branch and bound may open before the MILP solver takes over (tests lower it). */
+  masterNodeLimit?: number;
 }
 
 const stillClock = (): number => 0;
@@ -98,8 +109,9 @@ export function createKitSearch(
   const rejected: KitCounts[] = [];
   /** Maximal kits their own views reject (so the judge does too), cut off by their view cuts. */
   const viewRejected: KitCounts[] = [];
-  const stats = { rounds: 0, judgedKits: 0, dailyRejected: 0 };
+  const stats: KitSearch['stats'] = { rounds: 0, judgedKits: 0, dailyRejected: 0, masterNodes: 0, masterFallbacks: 0 };
   const energyCuts: EnergyCut[] = [];
+  const master = createMasterSearch(presolved);
   let lastRunsDry: RunsDry | undefined;
   let roundsThisSearch = 0;
 
@@ -256,15 +268,47 @@ export function createKitSearch(
     return true;
   };
 
-  /** The lightest kit the master allows (with `extra` cuts and a gram cap for the tie-break). */
-  const propose = (timeoutMs: number, extra: readonly KitCut[] = [], maxMassG?: number) =>
-    solve(
-      buildDailyModel(presolved, [...cuts, ...extra], { phase: 'min-grams' }, scale, {
+  /**
+   * The lightest kit the master allows (with `extra` cuts and a gram cap for the tie-break): our branch and bound
+   * first, the MILP solver when it gives up on its node limit or when a solver was passed in.
+   */
+  const propose = (timeoutMs: number, extra: readonly KitCut[] = [], maxMassG?: number): LinearSolution => {
+    const allCuts = [...cuts, ...extra];
+    const startMs = now();
+    if (!options.solver) {
+      const instance = { cuts: allCuts, energyCuts, ...(maxMassG !== undefined ? { maxMassG } : {}) };
+      // The search's own cuts only grow, so one tree serves every solve; a tie-break's passing cuts get a tree of their own.
+      const answer = (extra.length === 0 && maxMassG === undefined ? master : createMasterSearch(presolved)).next(
+        instance,
+        {
+          deadlineMs: startMs + timeoutMs,
+          now,
+          ...(options.masterNodeLimit ? { nodeLimit: options.masterNodeLimit } : {}),
+        },
+      );
+      stats.masterNodes = (stats.masterNodes ?? 0) + answer.nodes;
+      if (answer.status === 'infeasible') return { status: 'infeasible' };
+      if (answer.status === 'optimal')
+        return {
+          status: 'optimal',
+          objective: answer.massG / scale.massG,
+          values: masterValues(presolved, answer.counts),
+          proven: true,
+        };
+      stats.masterFallbacks = (stats.masterFallbacks ?? 0) + 1;
+    }
+    return solve(
+      buildDailyModel(presolved, allCuts, { phase: 'min-grams' }, scale, {
         energyCuts,
         ...(maxMassG !== undefined ? { maxMassG } : {}),
       }),
-      { timeoutMs, now, complete: (values) => completeMasterColumns(presolved, values) },
+      {
+        timeoutMs: Math.max(1, timeoutMs - (now() - startMs)),
+        now,
+        complete: (values) => completeMasterColumns(presolved, values),
+      },
     );
+  };
 
   /**
    * Among kits of the same grams as `found`, the one the judge gives the most worst-day margin: a few more master
@@ -376,6 +420,16 @@ export function createKitSearch(
       return [...rejected, ...viewRejected];
     },
   };
+}
+
+/** A master solution's columns for a kit: the one-hot count columns, then the path and group columns it implies. */
+function masterValues(pre: PresolvedProblem, counts: readonly number[]): Map<string, number> {
+  const values = new Map<string, number>();
+  pre.items.forEach((it, i) => {
+    for (let k = 1; k <= it.candidate.ownedCount; k++) values.set(yColumn(i, k), counts[i] === k ? 1 : 0);
+  });
+  completeMasterColumns(pre, values);
+  return values;
 }
 
 /** A cut with every coefficient at most its right-hand side (see `addEnergyCuts`). */

@@ -1,0 +1,438 @@
+import type { KitCut } from './daily-model.js';
+import type { EnergyCut } from './energy-cuts.js';
+import { alternativePresent, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
+
+/**
+ * The master problem of the kit search solved by a branch-and-bound of our own, in item counts, without an LP.
+ *
+ * Every row of the master but three kinds is upward closed — a kit that meets it still meets it with more of any item:
+ * a device's paths, an energy cut (coefficients ≥ 0), a "no larger than" cut. So within a node (each count between a
+ * floor and a ceiling) the kit at the floors is the lightest candidate, and it is the node's answer when it meets every
+ * row. Otherwise the search picks a row the floor kit breaks and branches on the ways to meet it (raise one item, or
+ * make one path present), the siblings kept apart where a way is a single item (a later sibling may not raise it).
+ * The bound of a node is the floor kit's grams plus, over the rows it breaks, the most grams any one of them still
+ * needs (a fractional knapsack for an energy cut). The rest: dominance rows tie an item's use to another's full count
+ * (propagated on floors and ceilings), a "no superset of" cut and the gram cap prune, a "not exactly" cut branches
+ * like a "no larger than" cut when the floor kit is that kit.
+ * Source: branch and bound (A. H. Land and A. G. Doig, An automatic method of solving discrete programming problems,
+ * Econometrica 28(3), 1960); branching on a violated covering row is the usual set-covering scheme (E. Balas and
+ * A. Ho, Set covering algorithms using cutting planes, heuristics, and subgradient optimization, Mathematical
+ * Programming Study 12, 1980).
+ */
+
+/** One master instance: the presolved problem with the search's cuts and an optional gram cap. */
+export interface MasterInstance {
+  pre: PresolvedProblem;
+  cuts: readonly KitCut[];
+  energyCuts: readonly EnergyCut[];
+  maxMassG?: number;
+}
+
+/** The answer: the lightest kit (counts by item index), none, or gave up (node or time limit: ask the LP master). */
+export type MasterAnswer =
+  | { status: 'optimal'; counts: number[]; massG: number; nodes: number }
+  | { status: 'infeasible'; nodes: number }
+  | { status: 'gave-up'; nodes: number };
+
+/** Limits of one solve. */
+export interface MasterLimits {
+  /** Nodes before giving up (default `defaultMasterNodeLimit`). */
+  nodeLimit?: number;
+  deadlineMs?: number;
+  now?: () => number;
+}
+
+/** Nodes one master solve may open before the LP master takes over: about a second of search on this machine. */
+export const defaultMasterNodeLimit = 200_000;
+
+/** Relative slack on an energy cut: a kit short by less than this share of the right-hand side meets it. */
+const energySlack = 1e-9;
+
+/** A way to meet a row: raise these items to at least these counts. */
+type Raise = readonly (readonly [item: number, count: number])[];
+
+/** A row in the branching form. */
+interface CoverRow {
+  /** Whether the kit meets the row. */
+  met(counts: Int32Array): boolean;
+  /** When lb breaks the row: at least the grams the lightest kit within [lb, ub] that meets it adds to lb's. */
+  bound(lb: Int32Array, ub: Int32Array): number;
+  /** The ways to meet the row from lb (only called when lb breaks it). Single-item ways are kept apart by `apart`. */
+  raises(lb: Int32Array, ub: Int32Array): Raise[];
+}
+
+/** The cuts of one master solve (the search's cuts only grow between solves of one `MasterSearch`). */
+export interface MasterCuts {
+  cuts: readonly KitCut[];
+  energyCuts: readonly EnergyCut[];
+  maxMassG?: number;
+}
+
+/** A branch-and-bound search kept between the master solves of one kit search. */
+export interface MasterSearch {
+  /**
+   * The lightest kit that meets every cut. The cuts passed must hold every cut of earlier calls (or cuts implying
+   * them): the open nodes of earlier calls are reused, each re-bounded under the new cuts when it comes up.
+   */
+  next(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
+}
+
+/** An open node: every count between its floor and ceiling; its bound as of the cuts of solve `version`. */
+interface OpenNode {
+  lb: Int32Array;
+  ub: Int32Array;
+  boundG: number;
+  version: number;
+}
+
+/** What a node holds under the current cuts. */
+type NodeLook =
+  { kind: 'empty' } | { kind: 'leaf'; floorG: number } | { kind: 'branch'; boundG: number; raises: Raise[] };
+
+/**
+ * Creates a master search over a presolved problem: best-first branch and bound whose open nodes carry over from one
+ * solve to the next (cuts only remove kits, so every open node is still a valid part of what is left, and its bound
+ * only rises). A solve pops the node of least bound, re-bounds it if the cuts changed, and returns its floor kit when
+ * that kit meets every cut — every other open node's bound is at least its grams. The returned node stays open: the
+ * next solve's cuts will split it.
+ * @example createMasterSearch(pre).next({ cuts: [], energyCuts: [] }).status // 'optimal'
+ */
+export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
+  const n = pre.items.length;
+  const massG = pre.items.map((it) => it.candidate.massG);
+  const owned = pre.items.map((it) => it.candidate.ownedCount);
+  const heap = new NodeHeap();
+  let version = 0;
+  let started = false;
+
+  const gramsOf = (lb: Int32Array): number => {
+    let g = 0;
+    for (let i = 0; i < n; i++) g += (lb[i] ?? 0) * (massG[i] ?? 0);
+    return g;
+  };
+
+  /** Dominance: i packed ⇒ j at its full count. False when the node holds no kit. */
+  const propagate = (lb: Int32Array, ub: Int32Array): boolean => {
+    for (let changed = true; changed;) {
+      changed = false;
+      for (const [i, j] of pre.dominance) {
+        const full = owned[j] ?? 0;
+        if ((lb[i] ?? 0) >= 1 && (lb[j] ?? 0) < full) {
+          if ((ub[j] ?? 0) < full) return false;
+          lb[j] = full;
+          changed = true;
+        }
+        if ((ub[j] ?? 0) < full && (ub[i] ?? 0) > 0) {
+          if ((lb[i] ?? 0) > 0) return false;
+          ub[i] = 0;
+          changed = true;
+        }
+      }
+    }
+    return true;
+  };
+
+  return {
+    next(instance, limits = {}) {
+      let nodes = 0;
+      if (pre.missingNeeds.length > 0) return { status: 'infeasible', nodes };
+      if (instance.energyCuts.some((cut) => [...cut.itemWh, ...cut.groupWh].some((w) => w < 0)))
+        return { status: 'gave-up', nodes };
+      const nodeLimit = limits.nodeLimit ?? defaultMasterNodeLimit;
+      const now = limits.now ?? (() => 0);
+      const deadlineMs = limits.deadlineMs ?? Infinity;
+      const capG = instance.maxMassG !== undefined ? instance.maxMassG + 0.5 : Infinity;
+      version++;
+      const rows: CoverRow[] = [
+        ...pre.needs.map((need) => pathRow(need.alternatives, massG)),
+        ...instance.energyCuts.map((cut) => energyRow(cut, pre, massG)),
+        ...instance.cuts.flatMap((cut) =>
+          cut.kind === 'no-larger-than' ? [noLargerRow(countsOf(pre, cut), massG)] : [],
+        ),
+      ];
+      const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
+      const supersets = instance.cuts
+        .filter((cut) => cut.kind === 'no-superset-of')
+        .flatMap((cut) => {
+          const present = [...cut.counts].filter(([, k]) => k > 0);
+          const indexed = present.map(([id, k]) => [pre.itemIndexById.get(id), k] as const);
+          // A kit holding an item the model cannot pack can never be exceeded: nothing to exclude.
+          if (indexed.some(([i, k]) => i === undefined || k > (owned[i] ?? 0))) return [];
+          return [indexed as (readonly [number, number])[]];
+        });
+
+      const look = (lb: Int32Array, ub: Int32Array): NodeLook => {
+        if (supersets.some((s) => s.every(([i, k]) => (lb[i] ?? 0) >= k))) return { kind: 'empty' };
+        const floorG = gramsOf(lb);
+        let needG = 0;
+        let branchRow: CoverRow | null = null;
+        for (const row of rows) {
+          if (row.met(lb)) continue;
+          const g = row.bound(lb, ub);
+          if (g === Infinity) return { kind: 'empty' };
+          if (!branchRow || g > needG) {
+            needG = g;
+            branchRow = row;
+          }
+        }
+        if (branchRow) return { kind: 'branch', boundG: floorG + needG, raises: branchRow.raises(lb, ub) };
+        const same = exactly.find((k) => k.every((v, i) => v === (lb[i] ?? 0)));
+        if (!same) return { kind: 'leaf', floorG };
+        const raises = same.flatMap((v, i) => ((ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : []));
+        return { kind: 'branch', boundG: floorG, raises };
+      };
+
+      /** Opens the children of a node, one per way to meet the row it breaks (see the module comment). */
+      const split = (lb: Int32Array, ub: Int32Array, raises: readonly Raise[]): void => {
+        const siblingsUb = Int32Array.from(ub);
+        const seen = new Set<string>();
+        for (const way of raises) {
+          // Only the counts the way still raises: a way met in part may then be a single item, kept apart below.
+          const raise = way.filter(([i, k]) => (lb[i] ?? 0) < k);
+          const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
+          if (raise.length === 0 || seen.has(key)) continue;
+          seen.add(key);
+          const childLb = Int32Array.from(lb);
+          const childUb = Int32Array.from(siblingsUb);
+          let possible = true;
+          for (const [i, k] of raise) {
+            if ((childUb[i] ?? 0) < k) possible = false;
+            if ((childLb[i] ?? 0) < k) childLb[i] = k;
+          }
+          if (possible && propagate(childLb, childUb)) {
+            const child = look(childLb, childUb);
+            if (child.kind !== 'empty')
+              heap.push({
+                lb: childLb,
+                ub: childUb,
+                boundG: child.kind === 'leaf' ? child.floorG : child.boundG,
+                version,
+              });
+          }
+          // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
+          if (raise.length === 1) {
+            const [i, k] = raise[0] as readonly [number, number];
+            siblingsUb[i] = Math.min(siblingsUb[i] ?? 0, k - 1);
+          }
+        }
+      };
+
+      if (!started) {
+        started = true;
+        const lb = new Int32Array(n);
+        const ub = Int32Array.from(owned);
+        if (propagate(lb, ub)) heap.push({ lb, ub, boundG: 0, version: 0 });
+      }
+      for (;;) {
+        const node = heap.pop();
+        if (!node) return { status: 'infeasible', nodes };
+        if (node.boundG > capG + 1e-9) {
+          // Every open node is above the cap: none is lost, a later solve without the cap may need them.
+          heap.push(node);
+          return { status: 'infeasible', nodes };
+        }
+        nodes++;
+        if (nodes > nodeLimit || ((nodes & 255) === 0 && now() >= deadlineMs)) {
+          heap.push(node);
+          return { status: 'gave-up', nodes };
+        }
+        const seen = look(node.lb, node.ub);
+        if (seen.kind === 'empty') continue;
+        const boundG = seen.kind === 'leaf' ? seen.floorG : seen.boundG;
+        if (boundG > node.boundG + 1e-9) {
+          // Re-bounded under newer cuts: back in line.
+          heap.push({ ...node, boundG, version });
+          continue;
+        }
+        if (seen.kind === 'leaf') {
+          if (seen.floorG > capG + 1e-9) {
+            heap.push(node);
+            return { status: 'infeasible', nodes };
+          }
+          heap.push({ ...node, version });
+          return { status: 'optimal', counts: Array.from(node.lb), massG: seen.floorG, nodes };
+        }
+        split(node.lb, node.ub, seen.raises);
+      }
+    },
+  };
+}
+
+/**
+ * Solves one master instance from scratch (see `createMasterSearch`).
+ * @example solveMasterByBranching({ pre, cuts: [], energyCuts: [] }).status // 'optimal'
+ */
+export function solveMasterByBranching(instance: MasterInstance, limits: MasterLimits = {}): MasterAnswer {
+  return createMasterSearch(instance.pre).next(instance, limits);
+}
+
+/** A binary min-heap of open nodes by bound; among equal bounds the node with more packed first (nearer a leaf). */
+class NodeHeap {
+  private readonly items: OpenNode[] = [];
+  private static before(a: OpenNode, b: OpenNode): boolean {
+    if (a.boundG !== b.boundG) return a.boundG < b.boundG;
+    return packedUnits(a) > packedUnits(b);
+  }
+  push(node: OpenNode): void {
+    const items = this.items;
+    items.push(node);
+    let k = items.length - 1;
+    while (k > 0) {
+      const parent = (k - 1) >> 1;
+      if (!NodeHeap.before(items[k] as OpenNode, items[parent] as OpenNode)) break;
+      [items[k], items[parent]] = [items[parent] as OpenNode, items[k] as OpenNode];
+      k = parent;
+    }
+  }
+  pop(): OpenNode | undefined {
+    const items = this.items;
+    const top = items[0];
+    const last = items.pop();
+    if (items.length > 0 && last) {
+      items[0] = last;
+      let k = 0;
+      for (;;) {
+        const l = 2 * k + 1;
+        const r = l + 1;
+        let m = k;
+        if (l < items.length && NodeHeap.before(items[l] as OpenNode, items[m] as OpenNode)) m = l;
+        if (r < items.length && NodeHeap.before(items[r] as OpenNode, items[m] as OpenNode)) m = r;
+        if (m === k) break;
+        [items[k], items[m]] = [items[m] as OpenNode, items[k] as OpenNode];
+        k = m;
+      }
+    }
+    return top;
+  }
+}
+
+function packedUnits(node: OpenNode): number {
+  let units = 0;
+  for (const v of node.lb) units += v;
+  return units;
+}
+
+/** A cut's counts by item index, at most the counts owned. */
+function countsOf(pre: PresolvedProblem, cut: KitCut): number[] {
+  return pre.items.map((it) => Math.min(cut.counts.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
+}
+
+/** Grams to raise lb to an alternative within ub (Infinity when ub forbids it), and the ways to do it. */
+function alternativeWays(
+  alt: IndexedAlternative,
+  lb: Int32Array,
+  ub: Int32Array,
+  massG: readonly number[],
+): { grams: number; ways: Raise[] } {
+  let grams = 0;
+  for (const [i, k] of alt.items) {
+    if ((ub[i] ?? 0) < k) return { grams: Infinity, ways: [] };
+    grams += Math.max(0, k - (lb[i] ?? 0)) * (massG[i] ?? 0);
+  }
+  if (
+    alt.anyOf.length === 0 ||
+    alt.anyOf.some((i) => (lb[i] ?? 0) >= 1 || alt.items.some(([j, k]) => j === i && k >= 1))
+  )
+    return { grams, ways: [alt.items] };
+  const open = alt.anyOf.filter((i) => (ub[i] ?? 0) >= 1);
+  if (open.length === 0) return { grams: Infinity, ways: [] };
+  return {
+    grams: grams + Math.min(...open.map((i) => massG[i] ?? 0)),
+    ways: open.map((i) => [...alt.items, [i, 1] as const]),
+  };
+}
+
+/** A device's need: one of its path alternatives present. */
+function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly number[]): CoverRow {
+  return {
+    met: (counts) => alternatives.some((alt) => alternativePresent(alt, counts)),
+    bound(lb, ub) {
+      let least = Infinity;
+      for (const alt of alternatives) least = Math.min(least, alternativeWays(alt, lb, ub, massG).grams);
+      return least;
+    },
+    raises: (lb, ub) => alternatives.flatMap((alt) => alternativeWays(alt, lb, ub, massG).ways),
+  };
+}
+
+/** "No larger than K": some item above its count in K. */
+function noLargerRow(limit: readonly number[], massG: readonly number[]): CoverRow {
+  return {
+    met: (counts) => limit.some((k, i) => (counts[i] ?? 0) > k),
+    bound(lb, ub) {
+      let least = Infinity;
+      for (let i = 0; i < limit.length; i++) {
+        const k = limit[i] ?? 0;
+        if ((ub[i] ?? 0) > k) least = Math.min(least, (k + 1 - (lb[i] ?? 0)) * (massG[i] ?? 0));
+      }
+      return least;
+    },
+    raises(_lb, ub) {
+      const ways: Raise[] = [];
+      limit.forEach((k, i) => {
+        if ((ub[i] ?? 0) > k) ways.push([[i, k + 1]]);
+      });
+      return ways;
+    },
+  };
+}
+
+/**
+ * An energy cut Σ_i min(w_i n_i, L) + Σ_g v_g·(alternatives of g present) ≥ L, as the master writes it (a group's
+ * column per alternative, each at most its presence).
+ */
+function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number[]): CoverRow {
+  const target = cut.lowerWh;
+  const slack = energySlack * Math.max(1, Math.abs(target));
+  const items: number[] = [];
+  cut.itemWh.forEach((w, i) => {
+    if (w > 0) items.push(i);
+  });
+  // Cheapest Wh first: the fractional knapsack takes them in this order.
+  items.sort((a, b) => (massG[a] ?? 0) / (cut.itemWh[a] ?? 1) - (massG[b] ?? 0) / (cut.itemWh[b] ?? 1));
+  const groups: number[] = [];
+  cut.groupWh.forEach((w, g) => {
+    if (w > 0) groups.push(g);
+  });
+  const heldWh = (counts: Int32Array): number => {
+    let wh = 0;
+    for (const i of items) wh += Math.min((cut.itemWh[i] ?? 0) * (counts[i] ?? 0), target);
+    for (const g of groups)
+      for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
+        if (alternativePresent(alt, counts)) wh += cut.groupWh[g] ?? 0;
+    return wh;
+  };
+  return {
+    met: (counts) => heldWh(counts) >= target - slack,
+    bound(lb, ub) {
+      let shortWh = target - slack - heldWh(lb);
+      // Groups are counted at no cost wherever their alternative could still be present (an optimistic bound).
+      for (const g of groups)
+        for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
+          if (!alternativePresent(alt, lb) && alternativeWays(alt, lb, ub, massG).grams < Infinity)
+            shortWh -= cut.groupWh[g] ?? 0;
+      if (shortWh <= 0) return 0;
+      let grams = 0;
+      for (const i of items) {
+        const w = cut.itemWh[i] ?? 0;
+        const moreWh = Math.min(w * (ub[i] ?? 0), target) - Math.min(w * (lb[i] ?? 0), target);
+        if (moreWh <= 0) continue;
+        const usedWh = Math.min(moreWh, shortWh);
+        grams += (usedWh * (massG[i] ?? 0)) / w;
+        shortWh -= usedWh;
+        if (shortWh <= 0) return grams;
+      }
+      return Infinity;
+    },
+    raises(lb, ub) {
+      const ways: Raise[] = [];
+      for (const i of items)
+        if ((ub[i] ?? 0) > (lb[i] ?? 0) && (cut.itemWh[i] ?? 0) * (lb[i] ?? 0) < target)
+          ways.push([[i, (lb[i] ?? 0) + 1]]);
+      for (const g of groups)
+        for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
+          if (!alternativePresent(alt, lb)) ways.push(...alternativeWays(alt, lb, ub, massG).ways);
+      return ways;
+    },
+  };
+}

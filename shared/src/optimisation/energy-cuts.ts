@@ -125,7 +125,27 @@ export function evaluateDailyModel(
         anyColumn = true;
         if (groupOn[gi]) harvestWh += value(v);
       });
-      if (anyColumn) {
+      if (anyColumn && !track) {
+        // The same smallest bound as below without naming it: the search checks many kits and needs no cut from them.
+        let bestWh = harvestWh;
+        const acceptWh = value(b.accept);
+        if (acceptWh < bestWh) bestWh = acceptWh;
+        for (const v of b.steps) {
+          const wh = value(v);
+          if (wh < bestWh) bestWh = wh;
+        }
+        if (b.split) {
+          let lateWh = Infinity;
+          for (const v of b.split.late) lateWh = Math.min(lateWh, value(v));
+          let earlyWh = b.split.early.length > 0 ? Infinity : 0;
+          for (const v of b.split.early) earlyWh = Math.min(earlyWh, value(v));
+          const splitWh = Math.min(earlyWh, previousRoomWh - cumWh) + lateWh;
+          if (splitWh < bestWh) bestWh = splitWh;
+        }
+        const roomWh = (timing === 'overlapping' ? cumRoomWh : previousRoomWh) - cumWh;
+        if (roomWh < bestWh) bestWh = roomWh;
+        cumWh += Math.max(0, bestWh);
+      } else if (anyColumn) {
         // The day's stored harvest is the smallest of its bounds; `pick` names it for the cut.
         let bestWh = harvestWh;
         let pick: Pick = { kind: 'harvest' };

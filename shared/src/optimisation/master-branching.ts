@@ -77,24 +77,34 @@ export interface MasterSearch {
   next(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
 }
 
-/** An open node: every count between its floor and ceiling; its bound as of the cuts of solve `version`. */
+/**
+ * An open node: every count between its floor and ceiling. `boundG` is a lower bound on the grams of any kit in it that
+ * meets the rows born up to `seen` (−1: none checked yet, the bound is its parent's or its floor's); `broken` is one of
+ * those rows its floor kit breaks, to branch on (null: the floor meets them all).
+ */
 interface OpenNode {
   lb: Int32Array;
   ub: Int32Array;
+  floorG: number;
   boundG: number;
-  version: number;
+  seen: number;
+  broken: CoverRow | null;
 }
 
-/** What a node holds under the current cuts. */
-type NodeLook =
-  { kind: 'empty' } | { kind: 'leaf'; floorG: number } | { kind: 'branch'; boundG: number; raises: Raise[] };
+/** A row with the number of its birth: a node checked up to birth b needs only the rows born later. */
+interface BornRow {
+  row: CoverRow;
+  birth: number;
+}
 
 /**
  * Creates a master search over a presolved problem: best-first branch and bound whose open nodes carry over from one
  * solve to the next (cuts only remove kits, so every open node is still a valid part of what is left, and its bound
- * only rises). A solve pops the node of least bound, re-bounds it if the cuts changed, and returns its floor kit when
- * that kit meets every cut — every other open node's bound is at least its grams. The returned node stays open: the
- * next solve's cuts will split it.
+ * only rises). A solve pops the node of least bound and checks it against the rows born since it was last checked: a
+ * higher bound puts it back in line; a floor kit that meets every row (and no "not exactly" cut) is the answer — every
+ * other open node's bound is at least its grams — and the node stays open, for the next solve's cuts to split.
+ * Children are opened with their parent's bound (or their floor's grams, if higher) and checked only when they come up:
+ * most never do.
  * @example createMasterSearch(pre).next({ cuts: [], energyCuts: [] }).status // 'optimal'
  */
 export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
@@ -102,7 +112,10 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   const massG = pre.items.map((it) => it.candidate.massG);
   const owned = pre.items.map((it) => it.candidate.ownedCount);
   const heap = new NodeHeap();
-  let version = 0;
+  let births = 0;
+  const pathRows: BornRow[] = pre.needs.map((need) => ({ row: pathRow(need.alternatives, massG), birth: births++ }));
+  /** Rows of cuts seen so far, by cut object: a cut passed again keeps its row and birth. */
+  const cutRows = new WeakMap<object, BornRow>();
   let started = false;
 
   const gramsOf = (lb: Int32Array): number => {
@@ -132,6 +145,15 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     return true;
   };
 
+  const rowOf = (cut: object, make: () => CoverRow): BornRow => {
+    let born = cutRows.get(cut);
+    if (!born) {
+      born = { row: make(), birth: births++ };
+      cutRows.set(cut, born);
+    }
+    return born;
+  };
+
   return {
     next(instance, limits = {}) {
       let nodes = 0;
@@ -142,14 +164,14 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       const now = limits.now ?? (() => 0);
       const deadlineMs = limits.deadlineMs ?? Infinity;
       const capG = instance.maxMassG !== undefined ? instance.maxMassG + 0.5 : Infinity;
-      version++;
-      const rows: CoverRow[] = [
-        ...pre.needs.map((need) => pathRow(need.alternatives, massG)),
-        ...instance.energyCuts.map((cut) => energyRow(cut, pre, massG)),
+      const rows: BornRow[] = [
+        ...pathRows,
+        ...instance.energyCuts.map((cut) => rowOf(cut, () => energyRow(cut, pre, massG))),
         ...instance.cuts.flatMap((cut) =>
-          cut.kind === 'no-larger-than' ? [noLargerRow(countsOf(pre, cut), massG)] : [],
+          cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG))] : [],
         ),
-      ];
+      ].sort((a, b) => a.birth - b.birth);
+      const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
       const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
       const supersets = instance.cuts
         .filter((cut) => cut.kind === 'no-superset-of')
@@ -161,30 +183,38 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
           return [indexed as (readonly [number, number])[]];
         });
 
-      const look = (lb: Int32Array, ub: Int32Array): NodeLook => {
-        if (supersets.some((s) => s.every(([i, k]) => (lb[i] ?? 0) >= k))) return { kind: 'empty' };
-        const floorG = gramsOf(lb);
-        let needG = 0;
-        let branchRow: CoverRow | null = null;
-        for (const row of rows) {
-          if (row.met(lb)) continue;
-          const g = row.bound(lb, ub);
-          if (g === Infinity) return { kind: 'empty' };
-          if (!branchRow || g > needG) {
+      /**
+       * Checks a node against the rows born since it was last checked. False when it holds no kit that meets them;
+       * otherwise its bound and broken row are brought up to date.
+       */
+      const check = (node: OpenNode): boolean => {
+        const { lb, ub } = node;
+        if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
+        let needG = -1;
+        let broken: CoverRow | null = null;
+        for (let r = rows.length - 1; r >= 0; r--) {
+          const born = rows[r] as BornRow;
+          if (born.birth <= node.seen) break;
+          if (born.row.met(lb)) continue;
+          const g = born.row.bound(lb, ub);
+          if (g === Infinity) return false;
+          if (g > needG) {
             needG = g;
-            branchRow = row;
+            broken = born.row;
           }
         }
-        if (branchRow) return { kind: 'branch', boundG: floorG + needG, raises: branchRow.raises(lb, ub) };
-        const same = exactly.find((k) => k.every((v, i) => v === (lb[i] ?? 0)));
-        if (!same) return { kind: 'leaf', floorG };
-        const raises = same.flatMap((v, i) => ((ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : []));
-        return { kind: 'branch', boundG: floorG, raises };
+        node.seen = newest;
+        if (broken) {
+          node.boundG = Math.max(node.boundG, node.floorG + needG);
+          node.broken ??= broken;
+        }
+        return true;
       };
 
       /** Opens the children of a node, one per way to meet the row it breaks (see the module comment). */
-      const split = (lb: Int32Array, ub: Int32Array, raises: readonly Raise[]): void => {
-        const siblingsUb = Int32Array.from(ub);
+      const split = (node: OpenNode, raises: readonly Raise[]): void => {
+        const { lb } = node;
+        const siblingsUb = Int32Array.from(node.ub);
         const seen = new Set<string>();
         for (const way of raises) {
           // Only the counts the way still raises: a way met in part may then be a single item, kept apart below.
@@ -200,14 +230,15 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
             if ((childLb[i] ?? 0) < k) childLb[i] = k;
           }
           if (possible && propagate(childLb, childUb)) {
-            const child = look(childLb, childUb);
-            if (child.kind !== 'empty')
-              heap.push({
-                lb: childLb,
-                ub: childUb,
-                boundG: child.kind === 'leaf' ? child.floorG : child.boundG,
-                version,
-              });
+            const floorG = gramsOf(childLb);
+            heap.push({
+              lb: childLb,
+              ub: childUb,
+              floorG,
+              boundG: Math.max(node.boundG, floorG),
+              seen: -1,
+              broken: null,
+            });
           }
           // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
           if (raise.length === 1) {
@@ -221,7 +252,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         started = true;
         const lb = new Int32Array(n);
         const ub = Int32Array.from(owned);
-        if (propagate(lb, ub)) heap.push({ lb, ub, boundG: 0, version: 0 });
+        if (propagate(lb, ub)) heap.push({ lb, ub, floorG: 0, boundG: 0, seen: -1, broken: null });
       }
       for (;;) {
         const node = heap.pop();
@@ -236,23 +267,27 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
           heap.push(node);
           return { status: 'gave-up', nodes };
         }
-        const seen = look(node.lb, node.ub);
-        if (seen.kind === 'empty') continue;
-        const boundG = seen.kind === 'leaf' ? seen.floorG : seen.boundG;
-        if (boundG > node.boundG + 1e-9) {
-          // Re-bounded under newer cuts: back in line.
-          heap.push({ ...node, boundG, version });
+        const before = node.boundG;
+        if (!check(node)) continue;
+        if (node.boundG > before + 1e-9) {
+          // Re-bounded under newer rows: back in line.
+          heap.push(node);
           continue;
         }
-        if (seen.kind === 'leaf') {
-          if (seen.floorG > capG + 1e-9) {
-            heap.push(node);
-            return { status: 'infeasible', nodes };
-          }
-          heap.push({ ...node, version });
-          return { status: 'optimal', counts: Array.from(node.lb), massG: seen.floorG, nodes };
+        if (node.broken) {
+          split(node, node.broken.raises(node.lb, node.ub));
+          continue;
         }
-        split(node.lb, node.ub, seen.raises);
+        const same = exactly.find((k) => k.every((v, i) => v === (node.lb[i] ?? 0)));
+        if (same) {
+          split(
+            node,
+            same.flatMap((v, i) => ((node.ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : [])),
+          );
+          continue;
+        }
+        heap.push(node);
+        return { status: 'optimal', counts: Array.from(node.lb), massG: node.floorG, nodes };
       }
     },
   };

@@ -154,6 +154,18 @@ export function createKitSearch(
     return true;
   };
 
+  /** Items the daily forward pass reads: stores, panels, and the items of a panel group's alternatives. */
+  const dailyRole = new Set<ActiveItem>(
+    presolved.items.filter(
+      (it, i) =>
+        it.store !== undefined ||
+        it.panel !== undefined ||
+        presolved.groups.some((g) =>
+          g.requiresAnyOf.some((alt) => alt.anyOf.includes(i) || alt.items.some(([j]) => j === i)),
+        ),
+    ),
+  );
+
   // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.
   const liftOrder = [...presolved.items].sort(
     (a, b) => a.candidate.massG - b.candidate.massG || (a.candidate.itemId < b.candidate.itemId ? -1 : 1),
@@ -180,10 +192,13 @@ export function createKitSearch(
     counts: KitCounts,
     deadlineMs: number,
     rejects: (trial: KitCounts) => boolean = judgeRejects,
-    how: 'each' | 'batches' = rejects === judgeRejects ? 'batches' : 'each',
+    how: 'each' | 'batches' | 'daily' = rejects === judgeRejects ? 'batches' : 'each',
   ): Map<string, number> => {
     const grown = new Map(counts);
     const owned = (it: ActiveItem): number => it.candidate.ownedCount;
+    // The daily forward pass reads only stores, panels and what switches a panel group on: the rest go in unchecked.
+    if (how === 'daily')
+      for (const it of presolved.items) if (!dailyRole.has(it)) grown.set(it.candidate.itemId, owned(it));
     /** Raises every item of a batch to its count owned in one trial; false when the kit did not absorb it whole. */
     const absorb = (batch: readonly ActiveItem[]): boolean => {
       if (batch.length === 0 || now() >= deadlineMs) return true;
@@ -214,9 +229,9 @@ export function createKitSearch(
       return false;
     };
     const open = liftOrder.filter(
-      (it) => (grown.get(it.candidate.itemId) ?? 0) < owned(it) && (how === 'each' || (!it.store && !it.panel)),
+      (it) => (grown.get(it.candidate.itemId) ?? 0) < owned(it) && (how !== 'batches' || (!it.store && !it.panel)),
     );
-    let size = how === 'each' ? 1 : firstLiftBatch;
+    let size = how === 'batches' ? firstLiftBatch : 1;
     for (let i = 0; i < open.length && now() < deadlineMs;) {
       const batch = open.slice(i, i + size);
       i += batch.length;
@@ -284,6 +299,8 @@ export function createKitSearch(
         (trial) =>
           evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0 ||
           kitViewsShort(presolved, trial),
+        // Views cost a daily pass per path: tried like the judge (no stores or panels, in batches).
+        'batches',
       );
       const grownCuts = [...evaluateDailyModel(presolved, grown).cuts, ...kitViewCuts(presolved, grown)];
       addEnergyCuts(grownCuts);
@@ -303,6 +320,7 @@ export function createKitSearch(
       counts,
       Infinity,
       (trial) => evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0,
+      'daily',
     );
     addEnergyCuts(evaluateDailyModel(presolved, grown).cuts);
     // A cut the kit breaks only by float noise could let the master propose it again: exclude its down-set as well.

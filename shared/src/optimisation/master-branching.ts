@@ -43,7 +43,7 @@ export interface MasterLimits {
 }
 
 /** Nodes one master solve may open before the LP master takes over: about a second of search on this machine. */
-export const defaultMasterNodeLimit = 200_000;
+export const defaultMasterNodeLimit = 2_000_000;
 
 /** Relative slack on an energy cut: a kit short by less than this share of the right-hand side meets it. */
 const energySlack = 1e-9;
@@ -89,6 +89,8 @@ interface OpenNode {
   boundG: number;
   seen: number;
   broken: CoverRow | null;
+  /** Units packed at the floor (the heap's tie-break: nearer a leaf first). */
+  units: number;
 }
 
 /** A row with the number of its birth: a node checked up to birth b needs only the rows born later. */
@@ -211,14 +213,18 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         return true;
       };
 
-      /** Opens the children of a node, one per way to meet the row it breaks (see the module comment). */
-      const split = (node: OpenNode, raises: readonly Raise[]): void => {
+      /**
+       * Opens the children of a node: one per way to meet the row it breaks when every way raises a single item (see
+       * the module comment); otherwise two, on the item most of the ways raise — packed to that count, or kept below it
+       * (ways that raise several items would overlap, and a path row may have hundreds).
+       */
+      const split = (node: OpenNode, ways: readonly Raise[]): void => {
         const { lb } = node;
+        const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
+        const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
         const siblingsUb = Int32Array.from(node.ub);
         const seen = new Set<string>();
-        for (const way of raises) {
-          // Only the counts the way still raises: a way met in part may then be a single item, kept apart below.
-          const raise = way.filter(([i, k]) => (lb[i] ?? 0) < k);
+        for (const raise of raises) {
           const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
           if (raise.length === 0 || seen.has(key)) continue;
           seen.add(key);
@@ -238,6 +244,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
               boundG: Math.max(node.boundG, floorG),
               seen: -1,
               broken: null,
+              units: packedUnits(childLb),
             });
           }
           // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
@@ -246,13 +253,36 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
             siblingsUb[i] = Math.min(siblingsUb[i] ?? 0, k - 1);
           }
         }
+        if (raises !== unmet) {
+          // The other half of the two-way split: the item kept below the count (the row is checked again there).
+          const childLb = Int32Array.from(lb);
+          if (propagate(childLb, siblingsUb))
+            heap.push({
+              lb: childLb,
+              ub: siblingsUb,
+              floorG: node.floorG,
+              boundG: node.boundG,
+              seen: -1,
+              broken: null,
+              units: node.units,
+            });
+        }
       };
 
       if (!started) {
         started = true;
         const lb = new Int32Array(n);
         const ub = Int32Array.from(owned);
-        if (propagate(lb, ub)) heap.push({ lb, ub, floorG: 0, boundG: 0, seen: -1, broken: null });
+        if (propagate(lb, ub))
+          heap.push({
+            lb,
+            ub,
+            floorG: gramsOf(lb),
+            boundG: gramsOf(lb),
+            seen: -1,
+            broken: null,
+            units: packedUnits(lb),
+          });
       }
       for (;;) {
         const node = heap.pop();
@@ -306,7 +336,7 @@ class NodeHeap {
   private readonly items: OpenNode[] = [];
   private static before(a: OpenNode, b: OpenNode): boolean {
     if (a.boundG !== b.boundG) return a.boundG < b.boundG;
-    return packedUnits(a) > packedUnits(b);
+    return a.units > b.units;
   }
   push(node: OpenNode): void {
     const items = this.items;
@@ -341,10 +371,31 @@ class NodeHeap {
   }
 }
 
-function packedUnits(node: OpenNode): number {
+function packedUnits(lb: Int32Array): number {
   let units = 0;
-  for (const v of node.lb) units += v;
+  for (const v of lb) units += v;
   return units;
+}
+
+/** The raise most ways share (ties: the heaviest), as a way of its own. */
+function mostRaised(ways: readonly Raise[], massG: readonly number[]): readonly [number, number] {
+  const tally = new Map<string, { raise: readonly [number, number]; ways: number }>();
+  for (const way of ways)
+    for (const raise of way) {
+      const key = `${raise[0]}:${raise[1]}`;
+      const entry = tally.get(key) ?? { raise, ways: 0 };
+      entry.ways++;
+      tally.set(key, entry);
+    }
+  let best: { raise: readonly [number, number]; ways: number } | undefined;
+  for (const entry of tally.values())
+    if (
+      !best ||
+      entry.ways > best.ways ||
+      (entry.ways === best.ways && (massG[entry.raise[0]] ?? 0) > (massG[best.raise[0]] ?? 0))
+    )
+      best = entry;
+  return (best as { raise: readonly [number, number] }).raise;
 }
 
 /** A cut's counts by item index, at most the counts owned. */
@@ -352,29 +403,38 @@ function countsOf(pre: PresolvedProblem, cut: KitCut): number[] {
   return pre.items.map((it) => Math.min(cut.counts.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
 }
 
-/** Grams to raise lb to an alternative within ub (Infinity when ub forbids it), and the ways to do it. */
-function alternativeWays(
-  alt: IndexedAlternative,
-  lb: Int32Array,
-  ub: Int32Array,
-  massG: readonly number[],
-): { grams: number; ways: Raise[] } {
-  let grams = 0;
+/**
+ * What a kit in [lb, ub] must raise to hold an alternative, as ways to branch on: the items it still lacks as one way,
+ * or, when it lacks only one of the "any of" items, each of those alone. Every kit holding the alternative takes one of
+ * them (a way need not complete the alternative: the row is checked again below it).
+ */
+function alternativeNeeds(alt: IndexedAlternative, lb: Int32Array, ub: Int32Array): Raise[] {
+  const lacking: (readonly [number, number])[] = [];
   for (const [i, k] of alt.items) {
-    if ((ub[i] ?? 0) < k) return { grams: Infinity, ways: [] };
-    grams += Math.max(0, k - (lb[i] ?? 0)) * (massG[i] ?? 0);
+    if ((ub[i] ?? 0) < k) return [];
+    if ((lb[i] ?? 0) < k) lacking.push([i, k]);
   }
-  if (
-    alt.anyOf.length === 0 ||
-    alt.anyOf.some((i) => (lb[i] ?? 0) >= 1 || alt.items.some(([j, k]) => j === i && k >= 1))
-  )
-    return { grams, ways: [alt.items] };
-  const open = alt.anyOf.filter((i) => (ub[i] ?? 0) >= 1);
-  if (open.length === 0) return { grams: Infinity, ways: [] };
-  return {
-    grams: grams + Math.min(...open.map((i) => massG[i] ?? 0)),
-    ways: open.map((i) => [...alt.items, [i, 1] as const]),
-  };
+  if (lacking.length > 0) return [lacking];
+  if (alt.anyOf.length === 0 || alt.anyOf.some((i) => (lb[i] ?? 0) >= 1)) return [];
+  return alt.anyOf.filter((i) => (ub[i] ?? 0) >= 1).map((i) => [[i, 1] as const]);
+}
+
+/** The least grams that raise lb to hold an alternative within ub (Infinity when ub forbids it). */
+function alternativeGrams(alt: IndexedAlternative, lb: Int32Array, ub: Int32Array, massG: readonly number[]): number {
+  let grams = 0;
+  let anyMet = alt.anyOf.length === 0;
+  for (const [i, k] of alt.items) {
+    if ((ub[i] ?? 0) < k) return Infinity;
+    grams += Math.max(0, k - (lb[i] ?? 0)) * (massG[i] ?? 0);
+    if (k >= 1 && !anyMet && alt.anyOf.includes(i)) anyMet = true;
+  }
+  if (anyMet) return grams;
+  let cheapest = Infinity;
+  for (const i of alt.anyOf) {
+    if ((lb[i] ?? 0) >= 1) return grams;
+    if ((ub[i] ?? 0) >= 1) cheapest = Math.min(cheapest, massG[i] ?? 0);
+  }
+  return grams + cheapest;
 }
 
 /** A device's need: one of its path alternatives present. */
@@ -383,10 +443,10 @@ function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly nu
     met: (counts) => alternatives.some((alt) => alternativePresent(alt, counts)),
     bound(lb, ub) {
       let least = Infinity;
-      for (const alt of alternatives) least = Math.min(least, alternativeWays(alt, lb, ub, massG).grams);
+      for (const alt of alternatives) least = Math.min(least, alternativeGrams(alt, lb, ub, massG));
       return least;
     },
-    raises: (lb, ub) => alternatives.flatMap((alt) => alternativeWays(alt, lb, ub, massG).ways),
+    raises: (lb, ub) => alternatives.flatMap((alt) => alternativeNeeds(alt, lb, ub)),
   };
 }
 
@@ -444,7 +504,7 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
       // Groups are counted at no cost wherever their alternative could still be present (an optimistic bound).
       for (const g of groups)
         for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
-          if (!alternativePresent(alt, lb) && alternativeWays(alt, lb, ub, massG).grams < Infinity)
+          if (!alternativePresent(alt, lb) && alternativeGrams(alt, lb, ub, massG) < Infinity)
             shortWh -= cut.groupWh[g] ?? 0;
       if (shortWh <= 0) return 0;
       let grams = 0;
@@ -466,7 +526,7 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
           ways.push([[i, (lb[i] ?? 0) + 1]]);
       for (const g of groups)
         for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
-          if (!alternativePresent(alt, lb)) ways.push(...alternativeWays(alt, lb, ub, massG).ways);
+          if (!alternativePresent(alt, lb)) ways.push(...alternativeNeeds(alt, lb, ub));
       return ways;
     },
   };

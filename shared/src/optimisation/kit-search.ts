@@ -63,6 +63,8 @@ export interface KitSearch {
    * the kits a caller excluded. A search under a raised requirement may start from them (`knownRejected`).
    */
   readonly rejectedKits: readonly KitCounts[];
+  /** The lightest kit the judge has accepted so far, in any call (a stopped search shaves it, not the whole locker). */
+  readonly lightestAccepted: KitCounts | undefined;
 }
 
 /** Options of a search, beyond `OptimiseOptions`. */
@@ -116,6 +118,7 @@ export function createKitSearch(
   const energyCuts: EnergyCut[] = [];
   const master = createMasterSearch(presolved);
   let lastRunsDry: RunsDry | undefined;
+  let lightestAccepted: { counts: KitCounts; massG: number } | undefined;
   let roundsThisSearch = 0;
 
   const judge = (counts: KitCounts): JudgeVerdict => {
@@ -125,6 +128,10 @@ export function createKitSearch(
     const verdict = judgeKit(counts);
     cache.set(key, verdict);
     stats.judgedKits++;
+    if (verdict.feasible) {
+      const massG = kitMassG(counts, problem.candidates);
+      if (!lightestAccepted || massG < lightestAccepted.massG) lightestAccepted = { counts: new Map(counts), massG };
+    }
     return verdict;
   };
 
@@ -481,6 +488,9 @@ export function createKitSearch(
     },
     get rejectedKits() {
       return [...rejected, ...viewRejected];
+    },
+    get lightestAccepted() {
+      return lightestAccepted?.counts;
     },
   };
 }

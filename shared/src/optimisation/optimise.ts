@@ -1,7 +1,17 @@
 import { dailyBalance } from './daily-balance.js';
 import { kitLines, kitMassG } from './kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
-import type { JudgeVerdict, KitChoice, KitCounts, KitJudge, KitSwap, OptimisationProblem, OptimiseAnswer, SearchStats } from './types.js';
+import type {
+  KitCandidate,
+  JudgeVerdict,
+  KitChoice,
+  KitCounts,
+  KitJudge,
+  KitSwap,
+  OptimisationProblem,
+  OptimiseAnswer,
+  SearchStats,
+} from './types.js';
 
 /** How many next-best kits `findSwaps` returns by default. */
 export const defaultSwapCount = 5;
@@ -28,28 +38,69 @@ function wholeLocker(problem: OptimisationProblem): Map<string, number> {
  * From a feasible kit, removes units one at a time, heaviest first, while the judge still accepts the kit: a quick
  * feasible kit when the search stops early. At most one judge call per unit.
  */
-function greedyShave(search: KitSearch, start: KitCounts): { counts: Map<string, number>; verdict: JudgeVerdict } {
+/**
+ * Shaves a feasible kit down: items heaviest first are taken out in batches that grow while the kit stays feasible
+ * and halve when it does not (a single item then loses what units it can), so a locker of spares sheds most of them in
+ * a few simulations. The kit returned was judged feasible and keeps no item the judge would let go whole.
+ * Source: adaptive group testing (D.-Z. Du and F. K. Hwang, Combinatorial Group Testing and Its Applications, 2nd ed.,
+ * World Scientific 2000, ch. 2), here on "can these items go".
+ */
+function greedyShave(
+  search: KitSearch,
+  start: KitCounts,
+  deadlineMs: number,
+): { counts: Map<string, number>; verdict: JudgeVerdict } {
   const counts = new Map(start);
   let verdict = search.judge(counts);
-  const order = [...search.problem.candidates].sort((a, b) => b.massG - a.massG || (a.itemId < b.itemId ? -1 : 1));
-  for (const cand of order) {
-    while ((counts.get(cand.itemId) ?? 0) > 0) {
-      const trial = new Map(counts);
-      trial.set(cand.itemId, (trial.get(cand.itemId) ?? 0) - 1);
-      if (trial.get(cand.itemId) === 0) trial.delete(cand.itemId);
-      const v = search.judge(trial);
-      if (!v.feasible) break;
-      counts.clear();
-      for (const [k, n] of trial) counts.set(k, n);
-      verdict = v;
+  const order = [...search.problem.candidates]
+    .filter((c) => (counts.get(c.itemId) ?? 0) > 0)
+    .sort((a, b) => b.massG - a.massG || (a.itemId < b.itemId ? -1 : 1));
+  /** The kit with every item of the batch taken out, or cut down to `keep` units. */
+  const without = (batch: readonly KitCandidate[], keep = 0): Map<string, number> => {
+    const trial = new Map(counts);
+    for (const c of batch) {
+      if (keep > 0) trial.set(c.itemId, keep);
+      else trial.delete(c.itemId);
     }
+    return trial;
+  };
+  const tryKit = (trial: Map<string, number>): boolean => {
+    const v = search.judge(trial);
+    if (!v.feasible) return false;
+    counts.clear();
+    for (const [k, n] of trial) counts.set(k, n);
+    verdict = v;
+    return true;
+  };
+  /** Takes a batch out whole, or halves it; false when it did not go whole. Past its time the shave stops. */
+  const shed = (batch: readonly KitCandidate[]): boolean => {
+    if (batch.length === 0 || search.now() >= deadlineMs) return true;
+    if (tryKit(without(batch))) return true;
+    if (batch.length === 1) {
+      const c = batch[0] as KitCandidate;
+      for (let k = 1; k < (counts.get(c.itemId) ?? 0) && search.now() < deadlineMs; k++)
+        if (tryKit(without(batch, k))) break;
+      return false;
+    }
+    const half = batch.length >> 1;
+    shed(batch.slice(0, half));
+    shed(batch.slice(half));
+    return false;
+  };
+  let size = 4;
+  for (let i = 0; i < order.length && search.now() < deadlineMs;) {
+    const batch = order.slice(i, i + size);
+    i += batch.length;
+    size = shed(batch) ? Math.min(64, size * 2) : Math.max(1, size >> 1);
   }
   return { counts, verdict };
 }
 
 function limitFields(problem: OptimisationProblem, massG: number): { gramLimitG?: number; overLimitG?: number } {
   if (problem.gramLimitG === undefined) return {};
-  return massG > problem.gramLimitG ? { gramLimitG: problem.gramLimitG, overLimitG: massG - problem.gramLimitG } : { gramLimitG: problem.gramLimitG };
+  return massG > problem.gramLimitG
+    ? { gramLimitG: problem.gramLimitG, overLimitG: massG - problem.gramLimitG }
+    : { gramLimitG: problem.gramLimitG };
 }
 
 /**
@@ -60,7 +111,12 @@ function limitFields(problem: OptimisationProblem, massG: number): { gramLimitG?
  * by how many Wh with the whole locker in the daily model; the judge's finding for the whole locker).
  * @example optimiseKit(problem, judge).status // 'optimal'
  */
-export function optimiseKit(problem: OptimisationProblem, judge: KitJudge, options: KitSearchOptions = {}, search: KitSearch = createKitSearch(problem, judge, options)): OptimiseAnswer {
+export function optimiseKit(
+  problem: OptimisationProblem,
+  judge: KitJudge,
+  options: KitSearchOptions = {},
+  search: KitSearch = createKitSearch(problem, judge, options),
+): OptimiseAnswer {
   const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
   const locker = wholeLocker(problem);
   const lockerBalance = dailyBalance(search.presolved, locker);
@@ -81,27 +137,60 @@ export function optimiseKit(problem: OptimisationProblem, judge: KitJudge, optio
     };
   }
   const step = search.next(deadlineMs);
-  return answerFromStep(step, search, locker);
+  // The shave after a stopped search gets a quarter of the budget more (at most `shaveGraceMs`).
+  const shaveDeadlineMs =
+    options.timeBudgetMs === undefined ? Infinity : deadlineMs + Math.min(shaveGraceMs, options.timeBudgetMs / 4);
+  return answerFromStep(step, search, locker, shaveDeadlineMs);
 }
 
-function answerFromStep(step: SearchStep, search: KitSearch, locker: KitCounts): OptimiseAnswer {
+/** The most the shave after a stopped search may run past the time budget, ms (a quarter of the budget below that). */
+export const shaveGraceMs = 5_000;
+
+function answerFromStep(step: SearchStep, search: KitSearch, locker: KitCounts, deadlineMs: number): OptimiseAnswer {
   const problem = search.problem;
   if (step.kind === 'found') {
     const kit = choice(step.counts, search, step.verdict);
-    const notes = step.proven ? [] : ['A model solve stopped on its timeout: the kit is feasible but may not be the lightest.'];
-    if (!step.proven) return { status: 'best-so-far', kit, lowerBoundG: 0, ...limitFields(problem, kit.massG), stats: statsOf(search), notes };
+    const notes = step.proven
+      ? []
+      : ['A model solve stopped on its timeout: the kit is feasible but may not be the lightest.'];
+    if (!step.proven)
+      return {
+        status: 'best-so-far',
+        kit,
+        lowerBoundG: 0,
+        ...limitFields(problem, kit.massG),
+        stats: statsOf(search),
+        notes,
+      };
     if (problem.gramLimitG !== undefined && kit.massG > problem.gramLimitG) {
-      return { status: 'over-limit', kit, gramLimitG: problem.gramLimitG, overLimitG: kit.massG - problem.gramLimitG, stats: statsOf(search), notes };
+      return {
+        status: 'over-limit',
+        kit,
+        gramLimitG: problem.gramLimitG,
+        overLimitG: kit.massG - problem.gramLimitG,
+        stats: statsOf(search),
+        notes,
+      };
     }
-    return { status: 'optimal', kit, ...(problem.gramLimitG !== undefined ? { gramLimitG: problem.gramLimitG } : {}), stats: statsOf(search), notes };
+    return {
+      status: 'optimal',
+      kit,
+      ...(problem.gramLimitG !== undefined ? { gramLimitG: problem.gramLimitG } : {}),
+      stats: statsOf(search),
+      notes,
+    };
   }
-  // The whole locker was judged feasible, so a kit exists: shave it down greedily.
-  const fallback = greedyShave(search, locker);
+  // The whole locker was judged feasible, so a kit exists: shave the lightest kit accepted so far down greedily.
+  const fallback = greedyShave(search, search.lightestAccepted ?? locker, deadlineMs);
   const kit = choice(fallback.counts, search, fallback.verdict);
   const notes =
     step.kind === 'exhausted'
-      ? ['The daily model rejects every kit the judge might accept: its coefficients are stricter than the simulation (a bug in building them). This kit is the whole locker shaved by hand-rules.']
-      : [`The search stopped (${step.reason}${step.detail ? `: ${step.detail}` : ''}); this is the lightest kit found by shaving the whole locker.`];
+      ? [
+          'The daily model rejects every kit the judge might accept: its coefficients are stricter than the simulation (a bug in building them). This kit is the lightest accepted kit shaved by hand-rules.',
+        ]
+      : [
+          `The search stopped (${step.reason}${step.detail ? `: ${step.detail}` : ''}); this is the lightest kit found by shaving the lightest kit it had accepted.`,
+        ];
   return {
     status: 'best-so-far',
     kit,
@@ -117,7 +206,12 @@ function buysOf(search: KitSearch, optimum: KitChoice, swap: KitChoice): string[
   const has = (k: KitChoice, kind: string): boolean => k.lines.some((l) => kinds.get(l.itemId) === kind);
   const units = (k: KitChoice): number => k.lines.reduce((n, l) => n + l.count, 0);
   const buys: string[] = [];
-  if (swap.verdict.margin !== undefined && optimum.verdict.margin !== undefined && swap.verdict.margin > optimum.verdict.margin) buys.push('more-margin');
+  if (
+    swap.verdict.margin !== undefined &&
+    optimum.verdict.margin !== undefined &&
+    swap.verdict.margin > optimum.verdict.margin
+  )
+    buys.push('more-margin');
   if (units(swap) < units(optimum)) buys.push('fewer-items');
   if (has(optimum, 'converter') && !has(swap, 'converter')) buys.push('no-converter');
   if (has(optimum, 'lead') && !has(swap, 'lead')) buys.push('no-lead');

@@ -1,0 +1,80 @@
+/**
+ * A search stopped early (round cap or time budget) still answers with a kit the judge accepted: the lightest it had
+ * accepted, shaved until no item can go whole — never lighter than the true optimum (exhaustive search), never heavier
+ * than the whole locker — and the shave stops on its own deadline. Synthetic worlds (synthetic-problem.ts, invented:
+ * not outside check values).
+ */
+import { describe, expect, it } from 'vitest';
+import { kitMassG } from './kit.js';
+import { optimiseKit, shaveGraceMs } from './optimise.js';
+import { exhaustiveLightestKit } from './oracle.js';
+import {
+  randomSyntheticWorld,
+  seededRandom,
+  smallSyntheticWorld,
+  syntheticJudge,
+  syntheticProblem,
+} from './synthetic-problem.js';
+
+const worlds = 60;
+
+describe('a stopped search', () => {
+  it(`answers with a judged feasible kit that no item can leave whole, on ${worlds} worlds`, () => {
+    let stopped = 0;
+    for (let seed = 1; seed <= worlds; seed++) {
+      const world = smallSyntheticWorld(70_000 + seed);
+      const problem = syntheticProblem(world);
+      const judge = syntheticJudge(world);
+      const answer = optimiseKit(problem, judge, { maxRounds: 1, tieBreakByMargin: false });
+      const oracle = exhaustiveLightestKit(problem.candidates, judge);
+      if (answer.status === 'nothing-feasible') {
+        expect(oracle.best).toBeNull();
+        continue;
+      }
+      expect(oracle.best).not.toBeNull();
+      const kit = new Map(answer.kit.lines.map((l) => [l.itemId, l.count]));
+      expect(judge(kit).feasible).toBe(true);
+      expect(answer.kit.massG).toBe(kitMassG(kit, problem.candidates));
+      expect(answer.kit.massG).toBeGreaterThanOrEqual(oracle.best?.massG ?? Infinity);
+      if (answer.status !== 'best-so-far') continue;
+      stopped++;
+      // No item can go whole: the shave tried each.
+      for (const id of kit.keys()) {
+        const less = new Map(kit);
+        less.delete(id);
+        expect(judge(less).feasible).toBe(false);
+      }
+    }
+    // Most worlds need more than one round, or the check says little.
+    expect(stopped).toBeGreaterThan(worlds / 3);
+  });
+
+  it('stops shaving at its deadline and still answers with a kit the judge accepted', () => {
+    // A locker of 24 types, up to 3 owned: a shave from a large kit needs many simulations.
+    const world = randomSyntheticWorld(seededRandom(70_122), { itemTypes: 24, maxOwned: 3, dayCount: 6, skyCount: 4 });
+    const problem = syntheticProblem(world);
+    const judge = syntheticJudge(world);
+    let calls = 0;
+    let clockMs = 0;
+    // A clock that moves 1 s per simulation.
+    const countingJudge: typeof judge = (kit) => {
+      calls++;
+      clockMs += 1_000;
+      return judge(kit);
+    };
+    const unbounded = optimiseKit(problem, countingJudge, { maxRounds: 1, tieBreakByMargin: false, now: () => 0 });
+    expect(unbounded.status).toBe('best-so-far');
+    const unboundedCalls = calls;
+    calls = 0;
+    clockMs = 0;
+    const budgetMs = 4_000;
+    const answer = optimiseKit(problem, countingJudge, { timeBudgetMs: budgetMs, now: () => clockMs });
+    expect(answer.status).toBe('best-so-far');
+    if (answer.status === 'nothing-feasible') return;
+    expect(judge(new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))).feasible).toBe(true);
+    // The budget, a quarter of it for the shave (below the grace cap), and the one simulation that overran it.
+    expect(budgetMs / 4).toBeLessThan(shaveGraceMs);
+    expect(clockMs).toBeLessThanOrEqual(budgetMs + budgetMs / 4 + 1_000);
+    expect(unboundedCalls).toBeGreaterThan(calls + 5);
+  });
+});

@@ -23,6 +23,8 @@ export const tieBreakCandidates = 3;
 /** Items in the judge's first lifting batch, and the most in one (see `lift`; tuned on the bench lockers). */
 const firstLiftBatch = 4;
 const largestLiftBatch = 64;
+/** The reason a master solve gives when the branch and bound ran out of its time (no MILP is tried then). */
+const outOfTime = 'master out of time';
 /** Default timeout of one MILP solve, ms. */
 export const defaultSolverTimeoutMs = 10_000;
 
@@ -365,6 +367,8 @@ export function createKitSearch(
           values: masterValues(presolved, answer.counts),
           proven: true,
         };
+      // Out of time: the MILP would have less than nothing; the caller stops on its budget.
+      if (now() - startMs >= timeoutMs) return { status: 'failed', reason: outOfTime };
       stats.masterFallbacks = (stats.masterFallbacks ?? 0) + 1;
     }
     return solve(
@@ -430,6 +434,8 @@ export function createKitSearch(
       stats.rounds++;
       const first = propose(timeoutMs);
       if (first.status === 'infeasible') return { kind: 'exhausted' };
+      if (first.status === 'failed' && first.reason === outOfTime)
+        return { kind: 'stopped', reason: 'time-budget', lowerBoundG };
       if (first.status === 'failed') {
         // A point that breaks the model proves nothing about grams, but a kit in it that the judge rejects may still be
         // cut off (the cut holds whatever found the kit); a kit it would accept cannot be trusted as the lightest.

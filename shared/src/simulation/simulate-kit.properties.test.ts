@@ -13,7 +13,13 @@ import { compileKit } from './compile-kit.js';
 import { scaleSolar } from '../testing/synthetic-solar.js';
 
 const reserveArb = share(0, 0.3);
-const runs = { numRuns: 300 };
+/**
+ * One fixed seed, as the both-path properties use: the runs (and the counts of meaningful cases) are the same on every
+ * machine, and a failure reproduces. Wider soaks, many seeds and 50,000 runs each, are recorded in shared/README.md
+ * (one known gap there: "more demand" per store, 2 failures in 250,000 runs, both where the hungrier kit runs dry).
+ */
+const propertySeed = 20261203;
+const runs = { numRuns: 300, seed: propertySeed };
 
 // Property runs take seconds; the timeout is for CI machines under load, not a speed check.
 const propertyTimeoutMs = 120_000;
@@ -55,7 +61,7 @@ describe('simulation properties (fast-check)', () => {
             expect(isKitFeasible({ solar, kit: bigger, devices, reserveShare })).toBe(true);
           },
         ),
-        { numRuns: 2000 },
+        { numRuns: 2000, seed: propertySeed },
       );
       expect(meaningful).toBeGreaterThan(100);
     },

@@ -53,10 +53,11 @@ type Raise = readonly (readonly [item: number, count: number])[];
 
 /** A row in the branching form. */
 interface CoverRow {
-  /** Whether the kit meets the row. */
-  met(counts: Int32Array): boolean;
-  /** When lb breaks the row: at least the grams the lightest kit within [lb, ub] that meets it adds to lb's. */
-  bound(lb: Int32Array, ub: Int32Array): number;
+  /**
+   * −1 when lb meets the row; otherwise at least the grams the lightest kit within [lb, ub] that meets it adds to lb's
+   * (0 is possible: a broken row whose bound is optimistic), Infinity when no kit there meets it.
+   */
+  need(lb: Int32Array, ub: Int32Array): number;
   /** The ways to meet the row from lb (only called when lb breaks it). Single-item ways are kept apart by `apart`. */
   raises(lb: Int32Array, ub: Int32Array): Raise[];
 }
@@ -197,8 +198,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         for (let r = rows.length - 1; r >= 0; r--) {
           const born = rows[r] as BornRow;
           if (born.birth <= node.seen) break;
-          if (born.row.met(lb)) continue;
-          const g = born.row.bound(lb, ub);
+          const g = born.row.need(lb, ub);
+          if (g < 0) continue;
           if (g === Infinity) return false;
           if (g > needG) {
             needG = g;
@@ -440,10 +441,12 @@ function alternativeGrams(alt: IndexedAlternative, lb: Int32Array, ub: Int32Arra
 /** A device's need: one of its path alternatives present. */
 function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly number[]): CoverRow {
   return {
-    met: (counts) => alternatives.some((alt) => alternativePresent(alt, counts)),
-    bound(lb, ub) {
+    need(lb, ub) {
       let least = Infinity;
-      for (const alt of alternatives) least = Math.min(least, alternativeGrams(alt, lb, ub, massG));
+      for (const alt of alternatives) {
+        if (alternativePresent(alt, lb)) return -1;
+        least = Math.min(least, alternativeGrams(alt, lb, ub, massG));
+      }
       return least;
     },
     raises: (lb, ub) => alternatives.flatMap((alt) => alternativeNeeds(alt, lb, ub)),
@@ -453,11 +456,11 @@ function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly nu
 /** "No larger than K": some item above its count in K. */
 function noLargerRow(limit: readonly number[], massG: readonly number[]): CoverRow {
   return {
-    met: (counts) => limit.some((k, i) => (counts[i] ?? 0) > k),
-    bound(lb, ub) {
+    need(lb, ub) {
       let least = Infinity;
       for (let i = 0; i < limit.length; i++) {
         const k = limit[i] ?? 0;
+        if ((lb[i] ?? 0) > k) return -1;
         if ((ub[i] ?? 0) > k) least = Math.min(least, (k + 1 - (lb[i] ?? 0)) * (massG[i] ?? 0));
       }
       return least;
@@ -498,9 +501,9 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
     return wh;
   };
   return {
-    met: (counts) => heldWh(counts) >= target - slack,
-    bound(lb, ub) {
+    need(lb, ub) {
       let shortWh = target - slack - heldWh(lb);
+      if (shortWh <= 0) return -1;
       // Groups are counted at no cost wherever their alternative could still be present (an optimistic bound).
       for (const g of groups)
         for (const alt of pre.groups[g]?.requiresAnyOf ?? [])

@@ -352,6 +352,20 @@ export function completeMasterColumns(pre: PresolvedProblem, values: Map<string,
 }
 
 /**
+ * A master solution's columns for a kit by item index: the one-hot count columns, then the path and group columns it
+ * implies (`completeMasterColumns`).
+ * @example masterValues(pre, [1, 0, 2]).get(yColumn(2, 2)) // 1
+ */
+export function masterValues(pre: PresolvedProblem, counts: readonly number[]): Map<string, number> {
+  const values = new Map<string, number>();
+  pre.items.forEach((it, i) => {
+    for (let k = 1; k <= it.candidate.ownedCount; k++) values.set(yColumn(i, k), counts[i] === k ? 1 : 0);
+  });
+  completeMasterColumns(pre, values);
+  return values;
+}
+
+/**
  * Reads the kit (counts by item id, non-zero only) from a model solution.
  * @example kitFromValues(pre, values).get('bank-a') // 2
  */

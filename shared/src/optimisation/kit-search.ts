@@ -2,10 +2,10 @@ import {
   buildDailyModel,
   completeMasterColumns,
   kitFromValues,
+  masterValues,
   modelScale,
   type KitCut,
   type ModelScale,
-  yColumn,
 } from './daily-model.js';
 import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { kitViewCuts, kitViewsShort } from './kit-views.js';
@@ -503,16 +503,6 @@ export function createKitSearch(
       return lightestAccepted?.counts;
     },
   };
-}
-
-/** A master solution's columns for a kit: the one-hot count columns, then the path and group columns it implies. */
-function masterValues(pre: PresolvedProblem, counts: readonly number[]): Map<string, number> {
-  const values = new Map<string, number>();
-  pre.items.forEach((it, i) => {
-    for (let k = 1; k <= it.candidate.ownedCount; k++) values.set(yColumn(i, k), counts[i] === k ? 1 : 0);
-  });
-  completeMasterColumns(pre, values);
-  return values;
 }
 
 /** A cut with every coefficient at most its right-hand side (see `addEnergyCuts`). */

@@ -13,9 +13,9 @@ import {
   buildDailyModel,
   completeMasterColumns,
   modelScale,
-  yColumn,
   type KitCut,
   type ModelScale,
+  masterValues,
 } from './daily-model.js';
 import { dailyBalance } from './daily-balance.js';
 import { evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
@@ -77,16 +77,6 @@ function milpGrams(pre: PresolvedProblem, model: LinearModel, scale: ModelScale)
   });
   if (answer.status === 'optimal') return Math.round(answer.objective * scale.massG);
   return answer.status;
-}
-
-/** The master's columns for a kit by item index (the kit search's `masterValues`): one-hot counts, then paths. */
-function masterValues(pre: PresolvedProblem, counts: readonly number[]): Map<string, number> {
-  const values = new Map<string, number>();
-  pre.items.forEach((it, i) => {
-    for (let k = 1; k <= it.candidate.ownedCount; k++) values.set(yColumn(i, k), counts[i] === k ? 1 : 0);
-  });
-  completeMasterColumns(pre, values);
-  return values;
 }
 
 /** Grams of a kit by item index. */

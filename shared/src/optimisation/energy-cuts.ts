@@ -1,6 +1,6 @@
 import { dayBoundsOf, dot, type BoundVector } from './day-bounds.js';
 import { groupBigM } from './daily-model.js';
-import { alternativePresent, type PresolvedProblem } from './presolve.js';
+import { alternativePresent, type ActiveGroup, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts } from './types.js';
 
 /** Wh a reserve row may miss by and still count as met (float noise of the forward pass). */
@@ -43,6 +43,9 @@ interface CumulativeBound {
   groupWh: Float64Array;
 }
 
+/** The bound a pass that builds no cut carries (never read). */
+const noBound: CumulativeBound = { constWh: 0, itemWh: new Float64Array(0), groupWh: new Float64Array(0) };
+
 const zeroBound = (items: number, groups: number, constWh = 0): CumulativeBound => ({
   constWh,
   itemWh: new Float64Array(items),
@@ -82,10 +85,11 @@ export function evaluateDailyModel(
   const groupCount = pre.groups.length;
   const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
   // Kits hold few of the locker's items: dot products run over the packed ones only.
-  const packed = counts.flatMap((n, i) => (n > 0 ? [i] : []));
+  const packed = Int32Array.from(counts.flatMap((n, i) => (n > 0 ? [i] : [])));
+  const packedCounts = Float64Array.from(packed, (i) => counts[i] ?? 0);
   const value = (v: BoundVector): number => {
     let sum = 0;
-    for (const i of packed) sum += (v[i] ?? 0) * (counts[i] ?? 0);
+    for (let k = 0; k < packed.length; k++) sum += (v[packed[k] as number] as number) * (packedCounts[k] as number);
     return sum;
   };
   const groupOn = pre.groups.map(
@@ -110,7 +114,7 @@ export function evaluateDailyModel(
     let cumDemandWh = 0;
     let cumRoomWh = 0;
     let cumWh = 0;
-    let bound = zeroBound(itemCount, groupCount);
+    let bound = track ? zeroBound(itemCount, groupCount) : noBound;
     let short = false;
     for (let t = 0; t < c.dayCount; t++) {
       const previousRoomWh = cumRoomWh;
@@ -119,12 +123,13 @@ export function evaluateDailyModel(
       const b = boundsOf(s, t);
       let anyColumn = false;
       let harvestWh = 0;
-      pre.groups.forEach((g, gi) => {
+      for (let gi = 0; gi < groupCount; gi++) {
+        const g = pre.groups[gi] as ActiveGroup;
         const v = b.groupHarvest[gi];
-        if (!v || (g.hasRequirement && g.requiresAnyOf.length === 0)) return;
+        if (!v || (g.hasRequirement && g.requiresAnyOf.length === 0)) continue;
         anyColumn = true;
         if (groupOn[gi]) harvestWh += value(v);
-      });
+      }
       if (anyColumn && !track) {
         // The same smallest bound as below without naming it: the search checks many kits and needs no cut from them.
         let bestWh = harvestWh;

@@ -143,20 +143,19 @@ export function createKitSearch(
   const knownRejectedHolding = (counts: KitCounts): KitCounts | undefined =>
     knownRejected.find((known) => kitNoLarger(counts, known));
 
-  /**
-   * The judge rejects a kit; a known rejected kit holding it, then the daily model's forward pass (a relaxation),
-   * answer first.
-   */
   // The master's branch and bound checks a node against a row only when it comes up, so the known rejected kits join
   // it at once as cuts (a proposed kit inside one would only be cut off then): the 50-item bench trip's full plan took
   // 10 s before, 7 s after.
   for (const known of knownRejected) cuts.push({ kind: 'no-larger-than', counts: new Map(known) });
 
+  /**
+   * The judge rejects a kit (for lifting); a known rejected kit holding it, or an accepted kit it holds, answer first.
+   */
   const judgeRejects = (trial: KitCounts): boolean => {
     if (knownRejectedHolding(trial) !== undefined) return true;
     // The judge is monotone: a kit holding one it accepted is accepted too (no simulation needed).
     if (acceptedKits.some((kit) => kitNoLarger(kit, trial))) return false;
-    if (evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0) return true;
+    // No daily-model check first: the judge lifts only kits the daily model passed, and it passes every larger one.
     if (judge(trial).feasible) {
       // Kept minimal: a kit holding another already listed adds nothing, and one it holds leaves.
       for (let k = acceptedKits.length - 1; k >= 0; k--)
@@ -298,7 +297,7 @@ export function createKitSearch(
   const dailyRejects = (counts: KitCounts): boolean => {
     const evaluation = evaluateDailyModel(presolved, counts);
     if (evaluation.cuts.length === 0) {
-      if (!useViews) return false;
+      if (!useViews || !kitViewsShort(presolved, counts)) return false;
       // The kit's own views (its paths' efficiencies, the stores they reach), lifted by the blockers.
       const viewCuts = kitViewCuts(presolved, counts).filter((cut) => clearlyBroken(presolved, cut, counts));
       if (viewCuts.length === 0) return false;

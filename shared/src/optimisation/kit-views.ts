@@ -12,6 +12,12 @@ import type { KitCounts } from './types.js';
 export interface KitView {
   pre: PresolvedProblem;
   blockers: readonly number[];
+  /**
+   * What the view's model depends on besides the kit's stores and panels: which view (pooled, or one device's) and the
+   * kit's best path efficiency per device. Two kits whose views share a key and hold the same stores, panels and
+   * controllers get the same answer from it.
+   */
+  key: string;
 }
 
 /** Views sharing a store set share their items array (and so their memoised day bounds, see `dayBoundsOf`). */
@@ -61,6 +67,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
   };
 
   const extraDemand = c.demandWh.map((row) => row.map(() => 0));
+  const pooledKey: string[] = [];
   const pooledBlockers = new Set<number>();
   const views: KitView[] = [];
   for (const need of needs) {
@@ -68,6 +75,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     if (held.length === 0) continue;
     const eKit = Math.max(...held.map((a) => a.efficiency ?? 1));
     const eBest = Math.max(...need.alternatives.map((a) => a.efficiency ?? 1));
+    pooledKey.push(`${needs.indexOf(need)}:${eKit}`);
     const better = need.alternatives.filter((a) => !held.includes(a) && (a.efficiency ?? 1) > eKit);
     const effBlockers = better.flatMap(blockerOf);
     if (eKit < eBest) {
@@ -91,7 +99,11 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     }
     if (storeIndices.every((i) => reached.has(i))) continue;
     const demandWh = need.gainWh.map((row) => row.map((wh) => wh / eKit));
-    views.push({ pre: restricted(pre, reached, demandWh), blockers: [...blockers].sort((x, y) => x - y) });
+    views.push({
+      pre: restricted(pre, reached, demandWh),
+      blockers: [...blockers].sort((x, y) => x - y),
+      key: `device ${needs.indexOf(need)} at ${eKit} from ${[...reached].sort((x, y) => x - y).join(',')}`,
+    });
   }
   if (extraDemand.some((row) => row.some((wh) => wh > 0))) {
     views.unshift({
@@ -107,6 +119,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
         },
       },
       blockers: [...pooledBlockers].sort((x, y) => x - y),
+      key: `pooled ${pooledKey.join(' ')}`,
     });
   }
   return views;
@@ -173,7 +186,45 @@ export function kitViewCuts(pre: PresolvedProblem, kit: KitCounts): EnergyCut[] 
  * @example kitViewsShort(pre, kit) // false when every view holds
  */
 export function kitViewsShort(pre: PresolvedProblem, kit: KitCounts): boolean {
-  return kitViews(pre, kit).some(
-    (view) => evaluateDailyModel(view.pre, kit, { withCuts: false }).shortfalls.length > 0,
+  const views = kitViews(pre, kit);
+  if (views.length === 0) return false;
+  let cache = shortCache.get(pre);
+  if (!cache) {
+    cache = { roles: energyRoleItems(pre), answers: new Map() };
+    shortCache.set(pre, cache);
+  }
+  // Lifting tries kits that differ in a lead or a converter: their views' answers are read, not worked out again.
+  const held = cache.roles
+    .map((i) => {
+      const it = pre.items[i] as ActiveItem;
+      return Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount);
+    })
+    .join(',');
+  const { answers } = cache;
+  return views.some((view) => {
+    const key = `${view.key} | ${held}`;
+    let short = answers.get(key);
+    if (short === undefined) {
+      short = evaluateDailyModel(view.pre, kit, { withCuts: false }).shortfalls.length > 0;
+      if (answers.size >= maxCachedAnswers) answers.clear();
+      answers.set(key, short);
+    }
+    return short;
+  });
+}
+
+/** Answers kept per problem before the cache starts over (a plan asks a few thousand). */
+const maxCachedAnswers = 50_000;
+
+const shortCache = new WeakMap<PresolvedProblem, { roles: number[]; answers: Map<string, boolean> }>();
+
+/** The items a view's daily model reads (stores, panels, and the items that switch a panel group on), by index. */
+function energyRoleItems(pre: PresolvedProblem): number[] {
+  return pre.items.flatMap((it, i) =>
+    it.store ||
+    it.panel ||
+    pre.groups.some((g) => g.requiresAnyOf.some((alt) => alt.anyOf.includes(i) || alt.items.some(([j]) => j === i)))
+      ? [i]
+      : [],
   );
 }

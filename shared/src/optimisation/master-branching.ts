@@ -171,7 +171,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         ...pathRows,
         ...instance.energyCuts.map((cut) => rowOf(cut, () => energyRow(cut, pre, massG))),
         ...instance.cuts.flatMap((cut) =>
-          cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG))] : [],
+          cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned))] : [],
         ),
       ].sort((a, b) => a.birth - b.birth);
       const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
@@ -454,21 +454,25 @@ function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly nu
 }
 
 /** "No larger than K": some item above its count in K. */
-function noLargerRow(limit: readonly number[], massG: readonly number[]): CoverRow {
+function noLargerRow(limit: readonly number[], massG: readonly number[], owned: readonly number[]): CoverRow {
+  // Only items below their count owned can go above the limit (a lifted kit holds most spares at their full count).
+  const open = Int32Array.from(limit.flatMap((k, i) => (k < (owned[i] ?? 0) ? [i] : [])));
+  const above = Int32Array.from(open, (i) => (limit[i] ?? 0) + 1);
   return {
     need(lb, ub) {
       let least = Infinity;
-      for (let i = 0; i < limit.length; i++) {
-        const k = limit[i] ?? 0;
-        if ((lb[i] ?? 0) > k) return -1;
-        if ((ub[i] ?? 0) > k) least = Math.min(least, (k + 1 - (lb[i] ?? 0)) * (massG[i] ?? 0));
+      for (let j = 0; j < open.length; j++) {
+        const i = open[j] as number;
+        const k = above[j] as number;
+        if ((lb[i] as number) >= k) return -1;
+        if ((ub[i] as number) >= k) least = Math.min(least, (k - (lb[i] as number)) * (massG[i] ?? 0));
       }
       return least;
     },
     raises(_lb, ub) {
       const ways: Raise[] = [];
-      limit.forEach((k, i) => {
-        if ((ub[i] ?? 0) > k) ways.push([[i, k + 1]]);
+      open.forEach((i, j) => {
+        if ((ub[i] ?? 0) >= (above[j] as number)) ways.push([[i, above[j] as number]]);
       });
       return ways;
     },

@@ -29,6 +29,8 @@ const firstLiftBatch = 4;
 const largestLiftBatch = 64;
 /** The reason a master solve gives when the branch and bound ran out of its time (no MILP is tried then). */
 const outOfTime = 'master out of time';
+/** The reason when the master's search tree outgrows `maxOpenNodes` (the search stops; its best kit is shaved). */
+const masterTooLarge = 'the model search grew too large for memory';
 /** Default timeout of one MILP solve, ms. */
 export const defaultSolverTimeoutMs = 10_000;
 
@@ -91,6 +93,8 @@ export interface KitSearchOptions extends OptimiseOptions {
   kitViews?: boolean;
   /** Nodes the master's branch and bound may open before the MILP solver takes over (tests lower it). */
   masterNodeLimit?: number;
+  /** Open nodes the master may hold before the search stops (default `maxOpenNodes`; tests lower it). */
+  masterOpenLimit?: number;
 }
 
 const stillClock = (): number => 0;
@@ -362,10 +366,12 @@ export function createKitSearch(
           deadlineMs: startMs + timeoutMs,
           now,
           ...(options.masterNodeLimit ? { nodeLimit: options.masterNodeLimit } : {}),
+          ...(options.masterOpenLimit ? { openLimit: options.masterOpenLimit } : {}),
         },
       );
       stats.masterNodes = (stats.masterNodes ?? 0) + answer.nodes;
       if (answer.status === 'infeasible') return { status: 'infeasible' };
+      if (answer.status === 'too-large') return { status: 'failed', reason: masterTooLarge };
       if (answer.status === 'optimal')
         return {
           status: 'optimal',
@@ -442,6 +448,8 @@ export function createKitSearch(
       if (first.status === 'infeasible') return { kind: 'exhausted' };
       if (first.status === 'failed' && first.reason === outOfTime)
         return { kind: 'stopped', reason: 'time-budget', lowerBoundG };
+      if (first.status === 'failed' && first.reason === masterTooLarge)
+        return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: masterTooLarge };
       if (first.status === 'failed') {
         // A point that breaks the model proves nothing about grams, but a kit in it that the judge rejects may still be
         // cut off (the cut holds whatever found the kit); a kit it would accept cannot be trusted as the lightest.

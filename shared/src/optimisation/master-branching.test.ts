@@ -337,6 +337,15 @@ describe('the limits of a master solve', () => {
     expect(gramsOrStatus(exact)).toBe(gramsOrStatus(answer));
   });
 
+  it('stop, as too large, when the open nodes reach their limit, and never before it', () => {
+    const { pre, cuts, answer } = worldNeeding(256);
+    expect(solveMasterByBranching({ pre, ...cuts }, { openLimit: 2 }).status).toBe('too-large');
+    // With room for the whole tree the answer is the unlimited one.
+    expect(gramsOrStatus(solveMasterByBranching({ pre, ...cuts }, { openLimit: 1_000_000 }))).toBe(
+      gramsOrStatus(answer),
+    );
+  });
+
   it('give up at the 256th node when the deadline has passed, and a kept search goes on from there', () => {
     const { pre, cuts, answer } = worldNeeding(256);
     const late = { deadlineMs: 0, now: () => 1 };

@@ -28,22 +28,34 @@ export interface MasterInstance {
   maxMassG?: number;
 }
 
-/** The answer: the lightest kit (counts by item index), none, or gave up (node or time limit: ask the LP master). */
+/**
+ * The answer: the lightest kit (counts by item index), none, gave up (node or time limit: ask the LP master), or too
+ * large (more open nodes than `maxOpenNodes`: the search stops rather than grow its memory).
+ */
 export type MasterAnswer =
   | { status: 'optimal'; counts: number[]; massG: number; nodes: number }
   | { status: 'infeasible'; nodes: number }
-  | { status: 'gave-up'; nodes: number };
+  | { status: 'gave-up'; nodes: number }
+  | { status: 'too-large'; nodes: number };
 
 /** Limits of one solve. */
 export interface MasterLimits {
   /** Nodes before giving up (default `defaultMasterNodeLimit`). */
   nodeLimit?: number;
+  /** Open nodes the search may hold before it answers `too-large` (default `maxOpenNodes`). */
+  openLimit?: number;
   deadlineMs?: number;
   now?: () => number;
 }
 
 /** Nodes one master solve may open before the LP master takes over: about a second of search on this machine. */
 export const defaultMasterNodeLimit = 2_000_000;
+
+/**
+ * Open nodes a search may hold, about 150 MB at 200 items (two byte arrays of counts each): past it the search stops
+ * (a 200-item locker held 2.3 GB after 30 s with four-byte counts and no cap).
+ */
+export const maxOpenNodes = 200_000;
 
 /** Relative slack on an energy cut: a kit short by less than this share of the right-hand side meets it. */
 const energySlack = 1e-9;
@@ -57,9 +69,9 @@ interface CoverRow {
    * −1 when lb meets the row; otherwise at least the grams the lightest kit within [lb, ub] that meets it adds to lb's
    * (0 is possible: a broken row whose bound is optimistic), Infinity when no kit there meets it.
    */
-  need(lb: Int32Array, ub: Int32Array): number;
+  need(lb: Uint8Array, ub: Uint8Array): number;
   /** The ways to meet the row from lb (only called when lb breaks it). Single-item ways are kept apart by `apart`. */
-  raises(lb: Int32Array, ub: Int32Array): Raise[];
+  raises(lb: Uint8Array, ub: Uint8Array): Raise[];
 }
 
 /** The cuts of one master solve (the search's cuts only grow between solves of one `MasterSearch`). */
@@ -84,8 +96,8 @@ export interface MasterSearch {
  * those rows its floor kit breaks, to branch on (null: the floor meets them all).
  */
 interface OpenNode {
-  lb: Int32Array;
-  ub: Int32Array;
+  lb: Uint8Array;
+  ub: Uint8Array;
   floorG: number;
   boundG: number;
   seen: number;
@@ -121,14 +133,14 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   const cutRows = new WeakMap<object, BornRow>();
   let started = false;
 
-  const gramsOf = (lb: Int32Array): number => {
+  const gramsOf = (lb: Uint8Array): number => {
     let g = 0;
     for (let i = 0; i < n; i++) g += (lb[i] ?? 0) * (massG[i] ?? 0);
     return g;
   };
 
   /** Dominance: i packed ⇒ j at its full count. False when the node holds no kit. */
-  const propagate = (lb: Int32Array, ub: Int32Array): boolean => {
+  const propagate = (lb: Uint8Array, ub: Uint8Array): boolean => {
     for (let changed = true; changed;) {
       changed = false;
       for (const [i, j] of pre.dominance) {
@@ -161,6 +173,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     next(instance, limits = {}) {
       let nodes = 0;
       if (pre.missingNeeds.length > 0) return { status: 'infeasible', nodes };
+      // Counts are kept in bytes (a locker holds at most 20 of an item).
+      if (owned.some((k) => k > 255)) return { status: 'gave-up', nodes };
       if (instance.energyCuts.some((cut) => [...cut.itemWh, ...cut.groupWh].some((w) => w < 0)))
         return { status: 'gave-up', nodes };
       const nodeLimit = limits.nodeLimit ?? defaultMasterNodeLimit;
@@ -223,14 +237,14 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         const { lb } = node;
         const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
         const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
-        const siblingsUb = Int32Array.from(node.ub);
+        const siblingsUb = Uint8Array.from(node.ub);
         const seen = new Set<string>();
         for (const raise of raises) {
           const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
           if (raise.length === 0 || seen.has(key)) continue;
           seen.add(key);
-          const childLb = Int32Array.from(lb);
-          const childUb = Int32Array.from(siblingsUb);
+          const childLb = Uint8Array.from(lb);
+          const childUb = Uint8Array.from(siblingsUb);
           let possible = true;
           for (const [i, k] of raise) {
             if ((childUb[i] ?? 0) < k) possible = false;
@@ -256,7 +270,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         }
         if (raises !== unmet) {
           // The other half of the two-way split: the item kept below the count (the row is checked again there).
-          const childLb = Int32Array.from(lb);
+          const childLb = Uint8Array.from(lb);
           if (propagate(childLb, siblingsUb))
             heap.push({
               lb: childLb,
@@ -272,8 +286,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
 
       if (!started) {
         started = true;
-        const lb = new Int32Array(n);
-        const ub = Int32Array.from(owned);
+        const lb = new Uint8Array(n);
+        const ub = Uint8Array.from(owned);
         if (propagate(lb, ub))
           heap.push({
             lb,
@@ -297,6 +311,10 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         if (nodes > nodeLimit || ((nodes & 255) === 0 && now() >= deadlineMs)) {
           heap.push(node);
           return { status: 'gave-up', nodes };
+        }
+        if (heap.size >= (limits.openLimit ?? maxOpenNodes)) {
+          heap.push(node);
+          return { status: 'too-large', nodes };
         }
         const before = node.boundG;
         if (!check(node)) continue;
@@ -335,6 +353,9 @@ export function solveMasterByBranching(instance: MasterInstance, limits: MasterL
 /** A binary min-heap of open nodes by bound; among equal bounds the node with more packed first (nearer a leaf). */
 class NodeHeap {
   private readonly items: OpenNode[] = [];
+  get size(): number {
+    return this.items.length;
+  }
   private static before(a: OpenNode, b: OpenNode): boolean {
     if (a.boundG !== b.boundG) return a.boundG < b.boundG;
     return a.units > b.units;
@@ -372,7 +393,7 @@ class NodeHeap {
   }
 }
 
-function packedUnits(lb: Int32Array): number {
+function packedUnits(lb: Uint8Array): number {
   let units = 0;
   for (const v of lb) units += v;
   return units;
@@ -409,7 +430,7 @@ function countsOf(pre: PresolvedProblem, cut: KitCut): number[] {
  * or, when it lacks only one of the "any of" items, each of those alone. Every kit holding the alternative takes one of
  * them (a way need not complete the alternative: the row is checked again below it).
  */
-function alternativeNeeds(alt: IndexedAlternative, lb: Int32Array, ub: Int32Array): Raise[] {
+function alternativeNeeds(alt: IndexedAlternative, lb: Uint8Array, ub: Uint8Array): Raise[] {
   const lacking: (readonly [number, number])[] = [];
   for (const [i, k] of alt.items) {
     if ((ub[i] ?? 0) < k) return [];
@@ -421,7 +442,7 @@ function alternativeNeeds(alt: IndexedAlternative, lb: Int32Array, ub: Int32Arra
 }
 
 /** The least grams that raise lb to hold an alternative within ub (Infinity when ub forbids it). */
-function alternativeGrams(alt: IndexedAlternative, lb: Int32Array, ub: Int32Array, massG: readonly number[]): number {
+function alternativeGrams(alt: IndexedAlternative, lb: Uint8Array, ub: Uint8Array, massG: readonly number[]): number {
   let grams = 0;
   let anyMet = alt.anyOf.length === 0;
   for (const [i, k] of alt.items) {
@@ -496,7 +517,7 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
   cut.groupWh.forEach((w, g) => {
     if (w > 0) groups.push(g);
   });
-  const heldWh = (counts: Int32Array): number => {
+  const heldWh = (counts: Uint8Array): number => {
     let wh = 0;
     for (const i of items) wh += Math.min((cut.itemWh[i] ?? 0) * (counts[i] ?? 0), target);
     for (const g of groups)

@@ -77,4 +77,19 @@ describe('a stopped search', () => {
     expect(clockMs).toBeLessThanOrEqual(budgetMs + budgetMs / 4 + 1_000);
     expect(unboundedCalls).toBeGreaterThan(calls + 5);
   });
+
+  it('stops when the model search outgrows its memory limit and still answers with a judged feasible kit', () => {
+    let stopped = 0;
+    for (let seed = 1; seed <= 20; seed++) {
+      const world = smallSyntheticWorld(71_000 + seed);
+      const problem = syntheticProblem(world);
+      const judge = syntheticJudge(world);
+      const answer = optimiseKit(problem, judge, { masterOpenLimit: 1, tieBreakByMargin: false });
+      if (answer.status !== 'best-so-far') continue;
+      stopped++;
+      expect(answer.notes.join(' ')).toContain('too large');
+      expect(judge(new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))).feasible).toBe(true);
+    }
+    expect(stopped).toBeGreaterThan(5);
+  });
 });

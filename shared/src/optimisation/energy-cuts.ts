@@ -235,6 +235,21 @@ export function evaluateDailyModel(
   return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
 }
 
+/**
+ * The items the daily forward pass reads, by index: stores, panels, and the items of a panel group's alternatives
+ * (what switches a group on). Two kits alike in these get the same answer from `evaluateDailyModel`.
+ * @example dailyModelItems(pre).includes(bankIndex) // true
+ */
+export function dailyModelItems(pre: PresolvedProblem): number[] {
+  return pre.items.flatMap((it, i) =>
+    it.store ||
+    it.panel ||
+    pre.groups.some((g) => g.requiresAnyOf.some((alt) => alt.anyOf.includes(i) || alt.items.some(([j]) => j === i)))
+      ? [i]
+      : [],
+  );
+}
+
 function argMin(values: readonly number[]): number {
   let best = 0;
   for (let i = 1; i < values.length; i++) if ((values[i] ?? Infinity) < (values[best] ?? Infinity)) best = i;

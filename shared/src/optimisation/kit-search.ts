@@ -7,8 +7,9 @@ import {
   type KitCut,
   type ModelScale,
 } from './daily-model.js';
-import { clearlyBroken, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
+import { clearlyBroken, dailyModelItems, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { kitViewCuts, kitViewsShort } from './kit-views.js';
+import { adaptiveBatches, oneAtATime, tryInBatches } from './batch-trials.js';
 import { solveWithJsLp } from './js-lp-backend.js';
 import { kitKey, kitMassG, kitNoLarger } from './kit.js';
 import type { LinearSolution, LinearSolver } from './linear-model.js';
@@ -24,9 +25,6 @@ import type { JudgeVerdict, KitCounts, KitJudge, OptimisationProblem, OptimiseOp
 export const defaultMaxRounds = 2_000;
 /** Kits of equal grams the tie-break looks at beyond the first (each a master solve and a judge call). */
 export const tieBreakCandidates = 3;
-/** Items in the judge's first lifting batch, and the most in one (see `lift`; tuned on the bench lockers). */
-const firstLiftBatch = 4;
-const largestLiftBatch = 64;
 /** The reason a master solve gives when the branch and bound ran out of its time (no MILP is tried then). */
 const outOfTime = 'master out of time';
 /** The reason when the master's search tree outgrows `maxOpenNodes` (the search stops; its best kit is shaved). */
@@ -174,17 +172,8 @@ export function createKitSearch(
     return true;
   };
 
-  /** Items the daily forward pass reads: stores, panels, and the items of a panel group's alternatives. */
-  const dailyRole = new Set<ActiveItem>(
-    presolved.items.filter(
-      (it, i) =>
-        it.store !== undefined ||
-        it.panel !== undefined ||
-        presolved.groups.some((g) =>
-          g.requiresAnyOf.some((alt) => alt.anyOf.includes(i) || alt.items.some(([j]) => j === i)),
-        ),
-    ),
-  );
+  /** Items the daily forward pass reads (the others cannot change its answer). */
+  const dailyRole = new Set(dailyModelItems(presolved));
 
   // Lighter items first: the model escapes a cut by adding the cheapest unit it can, so those are absorbed first.
   const liftOrder = [...presolved.items].sort(
@@ -196,17 +185,15 @@ export function createKitSearch(
    * the kit rejected. Every kit no larger than the grown kit is rejected too (the judge is monotone), so its cut removes
    * a whole down-set at once instead of one kit plus every kit with a useless extra (a controller with no 12 V panel, a
    * lead no path uses).
-   * - With the daily model's checks (`how: 'each'`, cheap) every item is tried, one at a time: a maximal kit.
+   * - With cheap checks (`how: 'each'`) every item is tried, one at a time: a maximal kit. With the daily model's own
+   *   check (`how: 'daily'`) the items it never reads go in unchecked first.
    * - With the judge (`how: 'batches'`, a simulation each) only items that are not stores or panels are tried: a kit the
    *   judge has just rejected is most often only just short, so one more bank or panel nearly always makes it keep up
    *   — a simulation each for no growth — while leads, converters and controllers mostly change nothing. Those are
-   *   tried in batches that grow while the kit absorbs them and shrink when it does not (a batch it cannot absorb is
-   *   halved), so the spares cost a few simulations in all. On the 50-item bench locker this took the judge's calls
-   *   from 935 to 80 for 7 more rounds.
+   *   tried in adaptive batches (`tryInBatches`), so the spares cost a few simulations in all. On the 50-item bench
+   *   locker this took the judge's calls from 935 to 80 for 7 more rounds.
    * Source: lifting no-good cuts to maximal infeasible sets is the "combinatorial Benders" idea (G. Codato and
-   * M. Fischetti, Combinatorial Benders' cuts for mixed-integer linear programming, Operations Research 54(4), 2006);
-   * testing items in halving batches is adaptive group testing (D.-Z. Du and F. K. Hwang, Combinatorial Group Testing
-   * and Its Applications, 2nd ed., World Scientific 2000, ch. 2).
+   * M. Fischetti, Combinatorial Benders' cuts for mixed-integer linear programming, Operations Research 54(4), 2006).
    */
   const lift = (
     counts: KitCounts,
@@ -218,46 +205,39 @@ export function createKitSearch(
     const owned = (it: ActiveItem): number => it.candidate.ownedCount;
     // The daily forward pass reads only stores, panels and what switches a panel group on: the rest go in unchecked.
     if (how === 'daily')
-      for (const it of presolved.items) if (!dailyRole.has(it)) grown.set(it.candidate.itemId, owned(it));
-    /** Raises every item of a batch to its count owned in one trial; false when the kit did not absorb it whole. */
-    const absorb = (batch: readonly ActiveItem[]): boolean => {
-      if (batch.length === 0 || now() >= deadlineMs) return true;
-      const trial = new Map(grown);
-      for (const it of batch) trial.set(it.candidate.itemId, owned(it));
-      if (rejects(trial)) {
-        for (const it of batch) grown.set(it.candidate.itemId, owned(it));
-        return true;
-      }
-      if (batch.length === 1) {
-        // Fewer units of the one item.
-        const it = batch[0] as ActiveItem;
-        const id = it.candidate.itemId;
-        for (let k = owned(it) - 1; k > (grown.get(id) ?? 0); k--) {
-          const fewer = new Map(grown);
-          fewer.set(id, k);
-          if (rejects(fewer)) {
-            grown.set(id, k);
-            break;
-          }
-        }
-        return false;
-      }
-      // An item that could not be raised now never can later (the kit only grows): the halves are tried in turn.
-      const half = batch.length >> 1;
-      absorb(batch.slice(0, half));
-      absorb(batch.slice(half));
-      return false;
-    };
+      presolved.items.forEach((it, i) => {
+        if (!dailyRole.has(i)) grown.set(it.candidate.itemId, owned(it));
+      });
     const open = liftOrder.filter(
       (it) => (grown.get(it.candidate.itemId) ?? 0) < owned(it) && (how !== 'batches' || (!it.store && !it.panel)),
     );
-    let size = how === 'batches' ? firstLiftBatch : 1;
-    for (let i = 0; i < open.length && now() < deadlineMs;) {
-      const batch = open.slice(i, i + size);
-      i += batch.length;
-      const whole = absorb(batch);
-      if (how === 'batches') size = whole ? Math.min(largestLiftBatch, size * 2) : Math.max(1, size >> 1);
-    }
+    tryInBatches(
+      open,
+      {
+        // Every item of the batch at its count owned; kept when the kit is still rejected.
+        whole: (batch) => {
+          const trial = new Map(grown);
+          for (const it of batch) trial.set(it.candidate.itemId, owned(it));
+          if (!rejects(trial)) return false;
+          for (const it of batch) grown.set(it.candidate.itemId, owned(it));
+          return true;
+        },
+        // Fewer units of the one item (an item that could not be raised now never can later: the kit only grows).
+        part: (it) => {
+          const id = it.candidate.itemId;
+          for (let k = owned(it) - 1; k > (grown.get(id) ?? 0); k--) {
+            const fewer = new Map(grown);
+            fewer.set(id, k);
+            if (rejects(fewer)) {
+              grown.set(id, k);
+              break;
+            }
+          }
+        },
+        stop: () => now() >= deadlineMs,
+      },
+      how === 'batches' ? adaptiveBatches : oneAtATime,
+    );
     return grown;
   };
 
@@ -468,17 +448,10 @@ export function createKitSearch(
       const massG = kitMassG(counts, problem.candidates);
       const proven = first.proven;
       if (proven) lowerBoundG = massG;
-      // A kit no larger than one already rejected is cut off by the model; meeting one means the solver erred.
-      if (rejected.some((r) => kitNoLarger(counts, r)))
+      // A kit no larger than one already rejected (or known rejected: those are cuts from the start) is cut off by the
+      // model; meeting one means the solver erred.
+      if (rejected.some((r) => kitNoLarger(counts, r)) || knownRejectedHolding(counts))
         return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
-      const known = knownRejectedHolding(counts);
-      if (known) {
-        // Grown further under this judge: it may reject more than the one that found the kit.
-        const grown = lift(known, deadlineMs);
-        rejected.push(grown);
-        cutDownSet(grown);
-        continue;
-      }
       if (dailyRejects(counts)) continue;
       const verdict = judge(counts);
       if (!verdict.feasible) {

@@ -1,5 +1,5 @@
 import { deriveDayBounds } from './day-bounds.js';
-import { evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
+import { dailyModelItems, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { alternativePresent, type ActiveItem, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
 import type { KitCounts } from './types.js';
 
@@ -70,12 +70,12 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
   const pooledKey: string[] = [];
   const pooledBlockers = new Set<number>();
   const views: KitView[] = [];
-  for (const need of needs) {
+  for (const [d, need] of needs.entries()) {
     const held = need.alternatives.filter((a) => alternativePresent(a, counts));
     if (held.length === 0) continue;
     const eKit = Math.max(...held.map((a) => a.efficiency ?? 1));
     const eBest = Math.max(...need.alternatives.map((a) => a.efficiency ?? 1));
-    pooledKey.push(`${needs.indexOf(need)}:${eKit}`);
+    pooledKey.push(`${d}:${eKit}`);
     const better = need.alternatives.filter((a) => !held.includes(a) && (a.efficiency ?? 1) > eKit);
     const effBlockers = better.flatMap(blockerOf);
     if (eKit < eBest) {
@@ -102,7 +102,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     views.push({
       pre: restricted(pre, reached, demandWh),
       blockers: [...blockers].sort((x, y) => x - y),
-      key: `device ${needs.indexOf(need)} at ${eKit} from ${[...reached].sort((x, y) => x - y).join(',')}`,
+      key: `device ${d} at ${eKit} from ${[...reached].sort((x, y) => x - y).join(',')}`,
     });
   }
   if (extraDemand.some((row) => row.some((wh) => wh > 0))) {
@@ -190,7 +190,7 @@ export function kitViewsShort(pre: PresolvedProblem, kit: KitCounts): boolean {
   if (views.length === 0) return false;
   let cache = shortCache.get(pre);
   if (!cache) {
-    cache = { roles: energyRoleItems(pre), answers: new Map() };
+    cache = { roles: dailyModelItems(pre), answers: new Map() };
     shortCache.set(pre, cache);
   }
   // Lifting tries kits that differ in a lead or a converter: their views' answers are read, not worked out again.
@@ -217,14 +217,3 @@ export function kitViewsShort(pre: PresolvedProblem, kit: KitCounts): boolean {
 const maxCachedAnswers = 50_000;
 
 const shortCache = new WeakMap<PresolvedProblem, { roles: number[]; answers: Map<string, boolean> }>();
-
-/** The items a view's daily model reads (stores, panels, and the items that switch a panel group on), by index. */
-function energyRoleItems(pre: PresolvedProblem): number[] {
-  return pre.items.flatMap((it, i) =>
-    it.store ||
-    it.panel ||
-    pre.groups.some((g) => g.requiresAnyOf.some((alt) => alt.anyOf.includes(i) || alt.items.some(([j]) => j === i)))
-      ? [i]
-      : [],
-  );
-}

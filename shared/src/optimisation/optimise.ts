@@ -1,3 +1,4 @@
+import { adaptiveBatches, tryInBatches } from './batch-trials.js';
 import { dailyBalance } from './daily-balance.js';
 import { kitLines, kitMassG } from './kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
@@ -35,15 +36,10 @@ function wholeLocker(problem: OptimisationProblem): Map<string, number> {
 }
 
 /**
- * From a feasible kit, removes units one at a time, heaviest first, while the judge still accepts the kit: a quick
- * feasible kit when the search stops early. At most one judge call per unit.
- */
-/**
- * Shaves a feasible kit down: items heaviest first are taken out in batches that grow while the kit stays feasible
- * and halve when it does not (a single item then loses what units it can), so a locker of spares sheds most of them in
- * a few simulations. The kit returned was judged feasible and keeps no item the judge would let go whole.
- * Source: adaptive group testing (D.-Z. Du and F. K. Hwang, Combinatorial Group Testing and Its Applications, 2nd ed.,
- * World Scientific 2000, ch. 2), here on "can these items go".
+ * Shaves a feasible kit down: items heaviest first are taken out in adaptive batches (`tryInBatches`), a single item
+ * that cannot go whole losing what units it can, so a locker of spares sheds most of them in a few simulations. The
+ * kit returned was judged feasible and keeps no item the judge would let go whole. Past `deadlineMs` it stops where it
+ * is.
  */
 function greedyShave(
   search: KitSearch,
@@ -72,27 +68,18 @@ function greedyShave(
     verdict = v;
     return true;
   };
-  /** Takes a batch out whole, or halves it; false when it did not go whole. Past its time the shave stops. */
-  const shed = (batch: readonly KitCandidate[]): boolean => {
-    if (batch.length === 0 || search.now() >= deadlineMs) return true;
-    if (tryKit(without(batch))) return true;
-    if (batch.length === 1) {
-      const c = batch[0] as KitCandidate;
-      for (let k = 1; k < (counts.get(c.itemId) ?? 0) && search.now() < deadlineMs; k++)
-        if (tryKit(without(batch, k))) break;
-      return false;
-    }
-    const half = batch.length >> 1;
-    shed(batch.slice(0, half));
-    shed(batch.slice(half));
-    return false;
-  };
-  let size = 4;
-  for (let i = 0; i < order.length && search.now() < deadlineMs;) {
-    const batch = order.slice(i, i + size);
-    i += batch.length;
-    size = shed(batch) ? Math.min(64, size * 2) : Math.max(1, size >> 1);
-  }
+  const outOfTime = (): boolean => search.now() >= deadlineMs;
+  tryInBatches(
+    order,
+    {
+      whole: (batch) => tryKit(without(batch)),
+      part: (c) => {
+        for (let k = 1; k < (counts.get(c.itemId) ?? 0) && !outOfTime(); k++) if (tryKit(without([c], k))) break;
+      },
+      stop: outOfTime,
+    },
+    adaptiveBatches,
+  );
   return { counts, verdict };
 }
 

@@ -58,6 +58,27 @@ export function dayBoundsOf(pre: PresolvedProblem): (s: number, t: number) => Da
 const boundsCache = new WeakMap<readonly ActiveItem[], (s: number, t: number) => DayBounds>();
 
 /**
+ * How a view's bounds follow from its base's (`deriveDayBounds`): every vector but the acceptance one is the base's
+ * times `ratioScale` item by item, the acceptance vector the base's times `keptScale`. A check that needs only the
+ * bounds' values for one kit reads the base's vectors with these factors folded into the counts, building none.
+ */
+export interface ViewScales {
+  base: (s: number, t: number) => DayBounds;
+  ratioScale: Float64Array;
+  keptScale: Float64Array;
+}
+
+const viewScales = new WeakMap<readonly ActiveItem[], ViewScales>();
+
+/**
+ * The scales of a view registered by `deriveDayBounds`, if `pre` is one.
+ * @example viewScalesOf(view)?.ratioScale.length // view.items.length
+ */
+export function viewScalesOf(pre: PresolvedProblem): ViewScales | undefined {
+  return viewScales.get(pre.items);
+}
+
+/**
  * Registers the bounds of a view of `base` (same steps; some panels and stores left out, a lower best charge
  * efficiency — see `kit-views.ts`) as the base's bounds with the items left out set to 0 and the rest scaled by the
  * ratio of best charge efficiencies (every panel and step vector is η* × Wh; the acceptance vector carries each
@@ -70,6 +91,11 @@ export function deriveDayBounds(view: PresolvedProblem, base: PresolvedProblem):
   const baseBounds = dayBoundsOf(base);
   const ratio = base.bestChargeEfficiency > 0 ? view.bestChargeEfficiency / base.bestChargeEfficiency : 0;
   const kept = view.items.map((it) => it.panel !== undefined || it.store !== undefined);
+  viewScales.set(view.items, {
+    base: baseBounds,
+    ratioScale: Float64Array.from(kept, (k) => (k ? ratio : 0)),
+    keptScale: Float64Array.from(kept, (k) => (k ? 1 : 0)),
+  });
   const scaled = (v: BoundVector, factor: number): BoundVector => v.map((x, i) => (kept[i] ? x * factor : 0));
   const memo = new Map<number, DayBounds>();
   const dayCount = base.problem.coefficients.dayCount;

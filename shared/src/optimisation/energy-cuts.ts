@@ -1,4 +1,4 @@
-import { dayBoundsOf, dot, type BoundVector } from './day-bounds.js';
+import { dayBoundsOf, dot, viewScalesOf, type BoundVector } from './day-bounds.js';
 import { groupBigM } from './daily-model.js';
 import { alternativePresent, type ActiveGroup, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts } from './types.js';
@@ -78,7 +78,11 @@ function plus(base: CumulativeBound, item: BoundVector | null, groups?: Float64A
 export function evaluateDailyModel(
   pre: PresolvedProblem,
   kit: KitCounts,
-  options: { withCuts?: boolean } = {},
+  options: {
+    withCuts?: boolean;
+    /** A view's checks read its own derived bound vectors, as the cut pass does (tests compare the two). */
+    derivedBounds?: boolean;
+  } = {},
 ): DailyEvaluation {
   const c = pre.problem.coefficients;
   const itemCount = pre.items.length;
@@ -92,6 +96,22 @@ export function evaluateDailyModel(
     for (let k = 0; k < packed.length; k++) sum += (v[packed[k] as number] as number) * (packedCounts[k] as number);
     return sum;
   };
+  // A view's checks read its base's bounds with the view's factors in the counts (no vector built); only the pass that
+  // builds a cut needs the view's own vectors.
+  const scales = options.derivedBounds ? undefined : viewScalesOf(pre);
+  const ratioCounts = scales
+    ? Float64Array.from(packed, (i, k) => (packedCounts[k] ?? 0) * (scales.ratioScale[i] ?? 0))
+    : packedCounts;
+  const keptCounts = scales
+    ? Float64Array.from(packed, (i, k) => (packedCounts[k] ?? 0) * (scales.keptScale[i] ?? 0))
+    : packedCounts;
+  // A view keeps all of a group's panels or none (`restricted` in kit-views.ts).
+  const groupKept = scales && pre.groups.map((g) => g.panelIndices.some((p) => (scales.ratioScale[p] ?? 0) > 0));
+  const scaledValue = (v: BoundVector, factors: Float64Array): number => {
+    let sum = 0;
+    for (let k = 0; k < packed.length; k++) sum += (v[packed[k] as number] as number) * (factors[k] as number);
+    return sum;
+  };
   const groupOn = pre.groups.map(
     (g) => !g.hasRequirement || g.requiresAnyOf.some((alt) => alternativePresent(alt, counts)),
   );
@@ -102,6 +122,7 @@ export function evaluateDailyModel(
   const spareCapacityWh = value(capacity);
   const timing = c.timing ?? 'overlapping';
   const boundsOf = dayBoundsOf(pre);
+  const checkBoundsOf = scales ? scales.base : boundsOf;
   const shortfalls: EnergyShortfall[] = [];
   const cuts: EnergyCut[] = [];
   let worstMarginWh = Infinity;
@@ -120,30 +141,32 @@ export function evaluateDailyModel(
       const previousRoomWh = cumRoomWh;
       cumDemandWh += demand[t] ?? 0;
       cumRoomWh += room[t] ?? 0;
-      const b = boundsOf(s, t);
+      const b = track ? boundsOf(s, t) : checkBoundsOf(s, t);
       let anyColumn = false;
       let harvestWh = 0;
       for (let gi = 0; gi < groupCount; gi++) {
         const g = pre.groups[gi] as ActiveGroup;
         const v = b.groupHarvest[gi];
         if (!v || (g.hasRequirement && g.requiresAnyOf.length === 0)) continue;
+        // A view's group whose panels it leaves out has no column there (its derived vector is null).
+        if (!track && groupKept && !groupKept[gi]) continue;
         anyColumn = true;
-        if (groupOn[gi]) harvestWh += value(v);
+        if (groupOn[gi]) harvestWh += track ? value(v) : scaledValue(v, ratioCounts);
       }
       if (anyColumn && !track) {
         // The same smallest bound as below without naming it: the search checks many kits and needs no cut from them.
         let bestWh = harvestWh;
-        const acceptWh = value(b.accept);
+        const acceptWh = scaledValue(b.accept, keptCounts);
         if (acceptWh < bestWh) bestWh = acceptWh;
         for (const v of b.steps) {
-          const wh = value(v);
+          const wh = scaledValue(v, ratioCounts);
           if (wh < bestWh) bestWh = wh;
         }
         if (b.split) {
           let lateWh = Infinity;
-          for (const v of b.split.late) lateWh = Math.min(lateWh, value(v));
+          for (const v of b.split.late) lateWh = Math.min(lateWh, scaledValue(v, ratioCounts));
           let earlyWh = b.split.early.length > 0 ? Infinity : 0;
-          for (const v of b.split.early) earlyWh = Math.min(earlyWh, value(v));
+          for (const v of b.split.early) earlyWh = Math.min(earlyWh, scaledValue(v, ratioCounts));
           const splitWh = Math.min(earlyWh, previousRoomWh - cumWh) + lateWh;
           if (splitWh < bestWh) bestWh = splitWh;
         }

@@ -88,6 +88,12 @@ export interface MasterSearch {
    * them): the open nodes of earlier calls are reused, each re-bounded under the new cuts when it comes up.
    */
   next(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
+  /**
+   * The same solve on a copy of the open nodes, leaving the kept tree as it was: for passing cuts ("not exactly", a gram
+   * cap) that later solves must not inherit. The rows must be the kept tree's (a tie-break among kits of equal grams
+   * starts from where the search stands instead of from the root).
+   */
+  peek(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
 }
 
 /**
@@ -169,175 +175,182 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     return born;
   };
 
-  return {
-    next(instance, limits = {}) {
-      let nodes = 0;
-      if (pre.missingNeeds.length > 0) return { status: 'infeasible', nodes };
-      // Counts are kept in bytes (a locker holds at most 20 of an item).
-      if (owned.some((k) => k > 255)) return { status: 'gave-up', nodes };
-      if (instance.energyCuts.some((cut) => [...cut.itemWh, ...cut.groupWh].some((w) => w < 0)))
-        return { status: 'gave-up', nodes };
-      const nodeLimit = limits.nodeLimit ?? defaultMasterNodeLimit;
-      const now = limits.now ?? (() => 0);
-      const deadlineMs = limits.deadlineMs ?? Infinity;
-      const capG = instance.maxMassG !== undefined ? instance.maxMassG + 0.5 : Infinity;
-      const rows: BornRow[] = [
-        ...pathRows,
-        ...instance.energyCuts.map((cut) => rowOf(cut, () => energyRow(cut, pre, massG))),
-        ...instance.cuts.flatMap((cut) =>
-          cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned))] : [],
-        ),
-      ].sort((a, b) => a.birth - b.birth);
-      const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
-      const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
-      const supersets = instance.cuts
-        .filter((cut) => cut.kind === 'no-superset-of')
-        .flatMap((cut) => {
-          const present = [...cut.counts].filter(([, k]) => k > 0);
-          const indexed = present.map(([id, k]) => [pre.itemIndexById.get(id), k] as const);
-          // A kit holding an item the model cannot pack can never be exceeded: nothing to exclude.
-          if (indexed.some(([i, k]) => i === undefined || k > (owned[i] ?? 0))) return [];
-          return [indexed as (readonly [number, number])[]];
-        });
+  /** One solve over `open` (the kept heap, or a copy whose nodes are copied before they change). */
+  const solve = (instance: MasterCuts, limits: MasterLimits, open: NodeHeap, copyNodes: boolean): MasterAnswer => {
+    let nodes = 0;
+    if (pre.missingNeeds.length > 0) return { status: 'infeasible', nodes };
+    // Counts are kept in bytes (a locker holds at most 20 of an item).
+    if (owned.some((k) => k > 255)) return { status: 'gave-up', nodes };
+    if (instance.energyCuts.some((cut) => [...cut.itemWh, ...cut.groupWh].some((w) => w < 0)))
+      return { status: 'gave-up', nodes };
+    const nodeLimit = limits.nodeLimit ?? defaultMasterNodeLimit;
+    const now = limits.now ?? (() => 0);
+    const deadlineMs = limits.deadlineMs ?? Infinity;
+    const capG = instance.maxMassG !== undefined ? instance.maxMassG + 0.5 : Infinity;
+    const rows: BornRow[] = [
+      ...pathRows,
+      ...instance.energyCuts.map((cut) => rowOf(cut, () => energyRow(cut, pre, massG))),
+      ...instance.cuts.flatMap((cut) =>
+        cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned))] : [],
+      ),
+    ].sort((a, b) => a.birth - b.birth);
+    const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
+    const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
+    const supersets = instance.cuts
+      .filter((cut) => cut.kind === 'no-superset-of')
+      .flatMap((cut) => {
+        const present = [...cut.counts].filter(([, k]) => k > 0);
+        const indexed = present.map(([id, k]) => [pre.itemIndexById.get(id), k] as const);
+        // A kit holding an item the model cannot pack can never be exceeded: nothing to exclude.
+        if (indexed.some(([i, k]) => i === undefined || k > (owned[i] ?? 0))) return [];
+        return [indexed as (readonly [number, number])[]];
+      });
 
-      /**
-       * Checks a node against the rows born since it was last checked. False when it holds no kit that meets them;
-       * otherwise its bound and broken row are brought up to date.
-       */
-      const check = (node: OpenNode): boolean => {
-        const { lb, ub } = node;
-        if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
-        let needG = -1;
-        let broken: CoverRow | null = null;
-        for (let r = rows.length - 1; r >= 0; r--) {
-          const born = rows[r] as BornRow;
-          if (born.birth <= node.seen) break;
-          const g = born.row.need(lb, ub);
-          if (g < 0) continue;
-          if (g === Infinity) return false;
-          if (g > needG) {
-            needG = g;
-            broken = born.row;
-          }
+    /**
+     * Checks a node against the rows born since it was last checked. False when it holds no kit that meets them;
+     * otherwise its bound and broken row are brought up to date.
+     */
+    const check = (node: OpenNode): boolean => {
+      const { lb, ub } = node;
+      if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
+      let needG = -1;
+      let broken: CoverRow | null = null;
+      for (let r = rows.length - 1; r >= 0; r--) {
+        const born = rows[r] as BornRow;
+        if (born.birth <= node.seen) break;
+        const g = born.row.need(lb, ub);
+        if (g < 0) continue;
+        if (g === Infinity) return false;
+        if (g > needG) {
+          needG = g;
+          broken = born.row;
         }
-        node.seen = newest;
-        if (broken) {
-          node.boundG = Math.max(node.boundG, node.floorG + needG);
-          node.broken ??= broken;
-        }
-        return true;
-      };
+      }
+      node.seen = newest;
+      if (broken) {
+        node.boundG = Math.max(node.boundG, node.floorG + needG);
+        node.broken ??= broken;
+      }
+      return true;
+    };
 
-      /**
-       * Opens the children of a node: one per way to meet the row it breaks when every way raises a single item (see
-       * the module comment); otherwise two, on the item most of the ways raise — packed to that count, or kept below it
-       * (ways that raise several items would overlap, and a path row may have hundreds).
-       */
-      const split = (node: OpenNode, ways: readonly Raise[]): void => {
-        const { lb } = node;
-        const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
-        const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
-        const siblingsUb = Uint8Array.from(node.ub);
-        const seen = new Set<string>();
-        for (const raise of raises) {
-          const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
-          if (raise.length === 0 || seen.has(key)) continue;
-          seen.add(key);
-          const childLb = Uint8Array.from(lb);
-          const childUb = Uint8Array.from(siblingsUb);
-          let possible = true;
-          for (const [i, k] of raise) {
-            if ((childUb[i] ?? 0) < k) possible = false;
-            if ((childLb[i] ?? 0) < k) childLb[i] = k;
-          }
-          if (possible && propagate(childLb, childUb)) {
-            const floorG = gramsOf(childLb);
-            heap.push({
-              lb: childLb,
-              ub: childUb,
-              floorG,
-              boundG: Math.max(node.boundG, floorG),
-              seen: -1,
-              broken: null,
-              units: packedUnits(childLb),
-            });
-          }
-          // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
-          if (raise.length === 1) {
-            const [i, k] = raise[0] as readonly [number, number];
-            siblingsUb[i] = Math.min(siblingsUb[i] ?? 0, k - 1);
-          }
+    /**
+     * Opens the children of a node: one per way to meet the row it breaks when every way raises a single item (see
+     * the module comment); otherwise two, on the item most of the ways raise — packed to that count, or kept below it
+     * (ways that raise several items would overlap, and a path row may have hundreds).
+     */
+    const split = (node: OpenNode, ways: readonly Raise[]): void => {
+      const { lb } = node;
+      const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
+      const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
+      const siblingsUb = Uint8Array.from(node.ub);
+      const seen = new Set<string>();
+      for (const raise of raises) {
+        const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
+        if (raise.length === 0 || seen.has(key)) continue;
+        seen.add(key);
+        const childLb = Uint8Array.from(lb);
+        const childUb = Uint8Array.from(siblingsUb);
+        let possible = true;
+        for (const [i, k] of raise) {
+          if ((childUb[i] ?? 0) < k) possible = false;
+          if ((childLb[i] ?? 0) < k) childLb[i] = k;
         }
-        if (raises !== unmet) {
-          // The other half of the two-way split: the item kept below the count (the row is checked again there).
-          const childLb = Uint8Array.from(lb);
-          if (propagate(childLb, siblingsUb))
-            heap.push({
-              lb: childLb,
-              ub: siblingsUb,
-              floorG: node.floorG,
-              boundG: node.boundG,
-              seen: -1,
-              broken: null,
-              units: node.units,
-            });
-        }
-      };
-
-      if (!started) {
-        started = true;
-        const lb = new Uint8Array(n);
-        const ub = Uint8Array.from(owned);
-        if (propagate(lb, ub))
-          heap.push({
-            lb,
-            ub,
-            floorG: gramsOf(lb),
-            boundG: gramsOf(lb),
+        if (possible && propagate(childLb, childUb)) {
+          const floorG = gramsOf(childLb);
+          open.push({
+            lb: childLb,
+            ub: childUb,
+            floorG,
+            boundG: Math.max(node.boundG, floorG),
             seen: -1,
             broken: null,
-            units: packedUnits(lb),
+            units: packedUnits(childLb),
+          });
+        }
+        // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
+        if (raise.length === 1) {
+          const [i, k] = raise[0] as readonly [number, number];
+          siblingsUb[i] = Math.min(siblingsUb[i] ?? 0, k - 1);
+        }
+      }
+      if (raises !== unmet) {
+        // The other half of the two-way split: the item kept below the count (the row is checked again there).
+        const childLb = Uint8Array.from(lb);
+        if (propagate(childLb, siblingsUb))
+          open.push({
+            lb: childLb,
+            ub: siblingsUb,
+            floorG: node.floorG,
+            boundG: node.boundG,
+            seen: -1,
+            broken: null,
+            units: node.units,
           });
       }
-      for (;;) {
-        const node = heap.pop();
-        if (!node) return { status: 'infeasible', nodes };
-        if (node.boundG > capG + 1e-9) {
-          // Every open node is above the cap: none is lost, a later solve without the cap may need them.
-          heap.push(node);
-          return { status: 'infeasible', nodes };
-        }
-        nodes++;
-        if (nodes > nodeLimit || ((nodes & 255) === 0 && now() >= deadlineMs)) {
-          heap.push(node);
-          return { status: 'gave-up', nodes };
-        }
-        if (heap.size >= (limits.openLimit ?? maxOpenNodes)) {
-          heap.push(node);
-          return { status: 'too-large', nodes };
-        }
-        const before = node.boundG;
-        if (!check(node)) continue;
-        if (node.boundG > before + 1e-9) {
-          // Re-bounded under newer rows: back in line.
-          heap.push(node);
-          continue;
-        }
-        if (node.broken) {
-          split(node, node.broken.raises(node.lb, node.ub));
-          continue;
-        }
-        const same = exactly.find((k) => k.every((v, i) => v === (node.lb[i] ?? 0)));
-        if (same) {
-          split(
-            node,
-            same.flatMap((v, i) => ((node.ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : [])),
-          );
-          continue;
-        }
-        heap.push(node);
-        return { status: 'optimal', counts: Array.from(node.lb), massG: node.floorG, nodes };
+    };
+
+    for (;;) {
+      const popped = open.pop();
+      if (!popped) return { status: 'infeasible', nodes };
+      // A copy's nodes are shared with the kept heap, where a raised bound in place would break its order.
+      const node = copyNodes ? { ...popped } : popped;
+      if (node.boundG > capG + 1e-9) {
+        // Every open node is above the cap: none is lost, a later solve without the cap may need them.
+        open.push(node);
+        return { status: 'infeasible', nodes };
       }
+      nodes++;
+      if (nodes > nodeLimit || ((nodes & 255) === 0 && now() >= deadlineMs)) {
+        open.push(node);
+        return { status: 'gave-up', nodes };
+      }
+      if (open.size >= (limits.openLimit ?? maxOpenNodes)) {
+        open.push(node);
+        return { status: 'too-large', nodes };
+      }
+      const before = node.boundG;
+      if (!check(node)) continue;
+      if (node.boundG > before + 1e-9) {
+        // Re-bounded under newer rows: back in line.
+        open.push(node);
+        continue;
+      }
+      if (node.broken) {
+        split(node, node.broken.raises(node.lb, node.ub));
+        continue;
+      }
+      const same = exactly.find((k) => k.every((v, i) => v === (node.lb[i] ?? 0)));
+      if (same) {
+        split(
+          node,
+          same.flatMap((v, i) => ((node.ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : [])),
+        );
+        continue;
+      }
+      open.push(node);
+      return { status: 'optimal', counts: Array.from(node.lb), massG: node.floorG, nodes };
+    }
+  };
+
+  /** The root node (every count between 0 and the count owned), once. */
+  const start = (): void => {
+    if (started) return;
+    started = true;
+    const lb = new Uint8Array(n);
+    const ub = Uint8Array.from(owned);
+    if (propagate(lb, ub))
+      heap.push({ lb, ub, floorG: gramsOf(lb), boundG: gramsOf(lb), seen: -1, broken: null, units: packedUnits(lb) });
+  };
+
+  return {
+    next(instance, limits = {}) {
+      start();
+      return solve(instance, limits, heap, false);
+    },
+    peek(instance, limits = {}) {
+      start();
+      return solve(instance, limits, heap.copy(), true);
     },
   };
 }
@@ -352,7 +365,13 @@ export function solveMasterByBranching(instance: MasterInstance, limits: MasterL
 
 /** A binary min-heap of open nodes by bound; among equal bounds the node with more packed first (nearer a leaf). */
 class NodeHeap {
-  private readonly items: OpenNode[] = [];
+  private items: OpenNode[] = [];
+  /** A heap over the same nodes (its own order from here on). */
+  copy(): NodeHeap {
+    const other = new NodeHeap();
+    other.items = this.items.slice();
+    return other;
+  }
   get size(): number {
     return this.items.length;
   }

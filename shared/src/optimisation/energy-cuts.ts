@@ -82,6 +82,11 @@ export function evaluateDailyModel(
     withCuts?: boolean;
     /** A view's checks read its own derived bound vectors, as the cut pass does (tests compare the two). */
     derivedBounds?: boolean;
+    /**
+     * Only whether the kit runs short: the pass stops at the first short sky (the one found short last time first) and
+     * reports that one; `worstMarginWh` then covers only the skies run. Implies `withCuts: false`.
+     */
+    anyShortfall?: boolean;
   } = {},
 ): DailyEvaluation {
   const c = pre.problem.coefficients;
@@ -246,6 +251,14 @@ export function evaluateDailyModel(
     return plus(base, items, groups);
   };
 
+  if (options.anyShortfall) {
+    const skyCount = c.skyIds.length;
+    const first = lastShortSky.get(c.skyIds) ?? 0;
+    for (let j = 0; j < skyCount && shortfalls.length === 0; j++) runSky((first + j) % skyCount, false);
+    const short = shortfalls[0];
+    if (short) lastShortSky.set(c.skyIds, c.skyIds.indexOf(short.skyId));
+    return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
+  }
   for (let s = 0; s < c.skyIds.length; s++) {
     runSky(s, false);
   }
@@ -257,6 +270,13 @@ export function evaluateDailyModel(
   }
   return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
 }
+
+/**
+ * The sky a quick check last found short, per list of skies (a problem's views share it; a search's kits run short
+ * alike, most often in one sky): the next quick check starts there. Only the order of the skies changes, never the
+ * answer.
+ */
+const lastShortSky = new WeakMap<object, number>();
 
 /**
  * The items the daily forward pass reads, by index: stores, panels, and the items of a panel group's alternatives

@@ -318,7 +318,7 @@ export function createKitSearch(
     const grown = lift(
       counts,
       Infinity,
-      (trial) => evaluateDailyModel(presolved, trial, { withCuts: false }).shortfalls.length > 0,
+      (trial) => evaluateDailyModel(presolved, trial, { anyShortfall: true }).shortfalls.length > 0,
       'daily',
     );
     addEnergyCuts(evaluateDailyModel(presolved, grown).cuts);

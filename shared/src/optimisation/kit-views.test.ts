@@ -11,7 +11,7 @@ import { kitViews } from './kit-views.js';
 import { presolve } from './presolve.js';
 import { seededRandom } from './synthetic-problem.js';
 
-describe('the quick check of a kit view', () => {
+describe('the quick checks of the daily model and of a kit view', () => {
   it('matches the pass over the view’s own derived bounds on 40 real trips', () => {
     let views = 0;
     let short = 0;
@@ -25,10 +25,17 @@ describe('the quick check of a kit view', () => {
         const kit = new Map(
           pre.items.map((it) => [it.candidate.itemId, Math.floor(random() * (it.candidate.ownedCount + 1))]),
         );
+        expect(evaluateDailyModel(pre, kit, { anyShortfall: true }).shortfalls.length > 0).toBe(
+          evaluateDailyModel(pre, kit).shortfalls.length > 0,
+        );
         for (const view of kitViews(pre, kit)) {
           const quick = evaluateDailyModel(view.pre, kit, { withCuts: false });
           const full = evaluateDailyModel(view.pre, kit, { withCuts: false, derivedBounds: true });
           views++;
+          // The yes-or-no check, which stops at the first short sky, says the same.
+          expect(evaluateDailyModel(view.pre, kit, { anyShortfall: true }).shortfalls.length > 0).toBe(
+            full.shortfalls.length > 0,
+          );
           // The cut pass reads the derived vectors: it finds a cut in every sky the quick check finds short.
           const cutSkies = evaluateDailyModel(view.pre, kit).cuts.map((cut) => cut.skyIndex);
           expect(new Set(cutSkies).size).toBe(new Set(quick.shortfalls.map((f) => f.skyId)).size);

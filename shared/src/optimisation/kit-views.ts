@@ -205,7 +205,7 @@ export function kitViewsShort(pre: PresolvedProblem, kit: KitCounts): boolean {
     const key = `${view.key} | ${held}`;
     let short = answers.get(key);
     if (short === undefined) {
-      short = evaluateDailyModel(view.pre, kit, { withCuts: false }).shortfalls.length > 0;
+      short = evaluateDailyModel(view.pre, kit, { anyShortfall: true }).shortfalls.length > 0;
       if (answers.size >= maxCachedAnswers) answers.clear();
       answers.set(key, short);
     }

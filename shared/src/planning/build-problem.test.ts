@@ -5,6 +5,8 @@ import { tripSolarInputSchema } from '../schemas/trip-solar.js';
 import { testBank, testLead, testPhone, testUsbPanel } from '../testing/fixtures.js';
 import { planningContext } from './build-problem.js';
 import { planTrip } from './plan-trip.js';
+import { seededRandom } from '../optimisation/synthetic-problem.js';
+import { randomPlanningInput } from '../testing/random-planning.js';
 import type { PlanningInput } from './planning-input.js';
 
 /**
@@ -80,5 +82,37 @@ describe('planningContext', () => {
         [['lead-c-micro'], ['bank-c']],
       ],
     ]);
+  });
+});
+
+describe('the judge', () => {
+  it('answers as the full simulation, margin included, whatever sky it runs first (30 real trips, 25 kits each)', () => {
+    let rejected = 0;
+    let accepted = 0;
+    const skiesRunDry = new Set<number>();
+    for (let seed = 1; seed <= 30; seed++) {
+      const random = seededRandom(seed);
+      const context = planningContext(randomPlanningInput(random, { itemTypes: 7 }));
+      for (let k = 0; k < 25; k++) {
+        const counts = new Map(
+          context.problem.candidates.map((c) => [c.itemId, Math.floor(random() * (c.ownedCount + 1))]),
+        );
+        const verdict = context.simulate(counts).verdict;
+        // The judge keeps the sky the last rejected kit ran dry in, so these kits start in varied skies.
+        const judged = context.judge(counts);
+        expect(judged.feasible).toBe(verdict.status !== 'runs-dry');
+        if (verdict.status === 'runs-dry') {
+          rejected++;
+          skiesRunDry.add(context.solar.skies.findIndex((s) => s.id === verdict.skyId));
+        } else {
+          accepted++;
+          expect(judged.margin).toBeCloseTo(verdict.worstMarginShare, 12);
+        }
+      }
+    }
+    expect(rejected).toBeGreaterThan(50);
+    expect(accepted).toBeGreaterThan(50);
+    // Kits run dry in more than one sky, so the order of the skies is exercised.
+    expect(skiesRunDry.size).toBeGreaterThan(1);
   });
 });

@@ -26,7 +26,7 @@ import {
   type KitController,
   type PackPath,
 } from '../simulation/station-path.js';
-import { isKitFeasible, simulateKit } from '../simulation/simulate-kit.js';
+import { kitFeasibility, simulateKit } from '../simulation/simulate-kit.js';
 import type { KitSimulation } from '../simulation/types.js';
 import { bankUsableWh } from '../storage/bank.js';
 import { packVolts } from '../station/pack-volts.js';
@@ -480,10 +480,15 @@ export function planningContext(
     options: { panelSeriesCache },
   });
   const simulate = (counts: KitCounts): KitSimulation => simulateKit(simulationInput(counts));
+  /** The sky the last rejected kit ran dry in: the next kit is run there first (the search's kits fail alike). */
+  let lastDrySkyIndex = 0;
   const judge: KitJudge = (counts) => {
-    if (!isKitFeasible(simulationInput(counts))) return { feasible: false };
-    const verdict = simulate(counts).verdict;
-    return { feasible: true, margin: verdict.status === 'runs-dry' ? 0 : verdict.worstMarginShare };
+    const answer = kitFeasibility(simulationInput(counts), lastDrySkyIndex);
+    if (!answer.feasible) {
+      lastDrySkyIndex = answer.drySkyIndex ?? 0;
+      return { feasible: false };
+    }
+    return { feasible: true, margin: answer.worstMarginShare };
   };
   return { input, solarOptions, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
 }

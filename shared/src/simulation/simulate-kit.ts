@@ -70,12 +70,37 @@ export function simulateKit(input: KitSimulationInput): KitSimulation {
  * @example isKitFeasible(input) // true
  */
 export function isKitFeasible(input: KitSimulationInput): boolean {
+  return kitFeasibility(input).feasible;
+}
+
+/** The fast path's answer: feasible or not, the worst-day margin of a feasible kit, the sky a rejected kit ran dry in. */
+export interface KitFeasibility {
+  feasible: boolean;
+  /** As `simulateKit`'s verdict (the least over the skies, at most 1); 0 for a kit that runs dry. */
+  worstMarginShare: number;
+  /** The design sky (index) a rejected kit ran dry in. */
+  drySkyIndex?: number;
+}
+
+/**
+ * The fast path with what the solver needs beyond yes or no: a feasible kit's worst-day margin (the same as
+ * `simulateKit`'s verdict, so an accepted kit needs no second run) and the sky a rejected kit ran dry in. The skies
+ * are run from `firstSkyIndex` on, wrapping round: a search whose kits run dry in one sky (a cloudy start) tries that
+ * sky first and rejects most kits in a few days of one sky instead of after a whole sunny one.
+ * @example kitFeasibility(input, 1).drySkyIndex // 1 when the kit runs dry in a cloudy start
+ */
+export function kitFeasibility(input: KitSimulationInput, firstSkyIndex = 0): KitFeasibility {
   const k = compileKit(input);
   const scratch = skyScratch(k);
-  for (let skyIndex = 0; skyIndex < input.solar.skies.length; skyIndex++) {
-    if (runSky(k, skyIndex, scratch, null, true).dry) return false;
+  const skyCount = input.solar.skies.length;
+  let worstMarginShare = 1;
+  for (let j = 0; j < skyCount; j++) {
+    const skyIndex = (firstSkyIndex + j) % skyCount;
+    const run = runSky(k, skyIndex, scratch, null, true);
+    if (run.dry) return { feasible: false, worstMarginShare: 0, drySkyIndex: skyIndex };
+    worstMarginShare = Math.min(worstMarginShare, run.worstMarginShare);
   }
-  return true;
+  return { feasible: true, worstMarginShare };
 }
 
 function ledgerDays(k: CompiledKit, record: SkyRecord): LedgerDay[] {

@@ -107,6 +107,14 @@ interface OpenNode {
   floorG: number;
   boundG: number;
   seen: number;
+  /**
+   * Rows born up to `seen` that the floor kit may still break (the rest it meets): a child's floor holds its parent's,
+   * and every row is met by a larger kit if by a smaller (upward closed), so a child checks only the rows its parent
+   * broke and those born since. Null: none.
+   */
+  pending: readonly BornRow[] | null;
+  /** Whether the node itself was checked (a child starts with its parent's `seen` and `pending`, its floor unchecked). */
+  checked: boolean;
   broken: CoverRow | null;
   /** Units packed at the floor (the heap's tie-break: nearer a leaf first). */
   units: number;
@@ -181,8 +189,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     if (pre.missingNeeds.length > 0) return { status: 'infeasible', nodes };
     // Counts are kept in bytes (a locker holds at most 20 of an item).
     if (owned.some((k) => k > 255)) return { status: 'gave-up', nodes };
-    if (instance.energyCuts.some((cut) => [...cut.itemWh, ...cut.groupWh].some((w) => w < 0)))
-      return { status: 'gave-up', nodes };
+    if (instance.energyCuts.some((cut) => !nonNegativeCut(cut))) return { status: 'gave-up', nodes };
     const nodeLimit = limits.nodeLimit ?? defaultMasterNodeLimit;
     const now = limits.now ?? (() => 0);
     const deadlineMs = limits.deadlineMs ?? Infinity;
@@ -213,20 +220,31 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     const check = (node: OpenNode): boolean => {
       const { lb, ub } = node;
       if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
+      // Checked itself against every row already: its bound and broken row are up to date.
+      if (node.checked && node.seen === newest) return true;
       let needG = -1;
       let broken: CoverRow | null = null;
-      for (let r = rows.length - 1; r >= 0; r--) {
-        const born = rows[r] as BornRow;
-        if (born.birth <= node.seen) break;
+      const stillBroken: BornRow[] = [];
+      const look = (born: BornRow): boolean => {
         const g = born.row.need(lb, ub);
-        if (g < 0) continue;
+        if (g < 0) return true;
         if (g === Infinity) return false;
+        stillBroken.push(born);
         if (g > needG) {
           needG = g;
           broken = born.row;
         }
+        return true;
+      };
+      for (let r = rows.length - 1; r >= 0; r--) {
+        const born = rows[r] as BornRow;
+        if (born.birth <= node.seen) break;
+        if (!look(born)) return false;
       }
+      if (node.pending) for (const born of node.pending) if (!look(born)) return false;
       node.seen = newest;
+      node.checked = true;
+      node.pending = stillBroken.length > 0 ? stillBroken : null;
       if (broken) {
         node.boundG = Math.max(node.boundG, node.floorG + needG);
         node.broken ??= broken;
@@ -244,10 +262,13 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
       const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
       const siblingsUb = Uint8Array.from(node.ub);
-      const seen = new Set<string>();
+      // Every way left raises a single item (see above): one child per item and count.
+      const seen = new Set<number>();
       for (const raise of raises) {
-        const key = raise.map(([i, k]) => `${i}:${k}`).join(',');
-        if (raise.length === 0 || seen.has(key)) continue;
+        const first = raise[0];
+        if (!first) continue;
+        const key = first[0] * 256 + first[1];
+        if (seen.has(key)) continue;
         seen.add(key);
         const childLb = Uint8Array.from(lb);
         const childUb = Uint8Array.from(siblingsUb);
@@ -263,7 +284,9 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
             ub: childUb,
             floorG,
             boundG: Math.max(node.boundG, floorG),
-            seen: -1,
+            seen: node.seen,
+            pending: node.pending,
+            checked: false,
             broken: null,
             units: packedUnits(childLb),
           });
@@ -283,7 +306,9 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
             ub: siblingsUb,
             floorG: node.floorG,
             boundG: node.boundG,
-            seen: -1,
+            seen: node.seen,
+            pending: node.pending,
+            checked: false,
             broken: null,
             units: node.units,
           });
@@ -340,7 +365,17 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     const lb = new Uint8Array(n);
     const ub = Uint8Array.from(owned);
     if (propagate(lb, ub))
-      heap.push({ lb, ub, floorG: gramsOf(lb), boundG: gramsOf(lb), seen: -1, broken: null, units: packedUnits(lb) });
+      heap.push({
+        lb,
+        ub,
+        floorG: gramsOf(lb),
+        boundG: gramsOf(lb),
+        seen: -1,
+        pending: null,
+        checked: false,
+        broken: null,
+        units: packedUnits(lb),
+      });
   };
 
   return {
@@ -363,58 +398,85 @@ export function solveMasterByBranching(instance: MasterInstance, limits: MasterL
   return createMasterSearch(instance.pre).next(instance, limits);
 }
 
+/** Energy cuts found to have no negative coefficient (the bound needs none; checked once per cut). */
+const nonNegativeCuts = new WeakSet<EnergyCut>();
+
+function nonNegativeCut(cut: EnergyCut): boolean {
+  if (nonNegativeCuts.has(cut)) return true;
+  if (cut.itemWh.some((w) => w < 0) || cut.groupWh.some((w) => w < 0)) return false;
+  nonNegativeCuts.add(cut);
+  return true;
+}
+
 /** A binary min-heap of open nodes by bound; among equal bounds the node with more packed first (nearer a leaf). */
 class NodeHeap {
-  private items: OpenNode[] = [];
+  private nodes: OpenNode[] = [];
+  /** Each node's bound and units beside it: comparisons read these packed numbers, not the nodes. */
+  private bounds: number[] = [];
+  private units: number[] = [];
   /** A heap over the same nodes (its own order from here on). */
   copy(): NodeHeap {
     const other = new NodeHeap();
-    other.items = this.items.slice();
+    other.nodes = this.nodes.slice();
+    other.bounds = this.bounds.slice();
+    other.units = this.units.slice();
     return other;
   }
   get size(): number {
-    return this.items.length;
+    return this.nodes.length;
   }
-  private static before(a: OpenNode, b: OpenNode): boolean {
-    if (a.boundG !== b.boundG) return a.boundG < b.boundG;
-    return a.units > b.units;
+  private place(k: number, node: OpenNode, boundG: number, units: number): void {
+    this.nodes[k] = node;
+    this.bounds[k] = boundG;
+    this.units[k] = units;
   }
   push(node: OpenNode): void {
-    const items = this.items;
-    items.push(node);
-    let k = items.length - 1;
+    const { boundG, units } = node;
+    // Sift the hole up, moving parents down, and place the node once.
+    let k = this.nodes.length;
     while (k > 0) {
       const parent = (k - 1) >> 1;
-      if (!NodeHeap.before(items[k] as OpenNode, items[parent] as OpenNode)) break;
-      [items[k], items[parent]] = [items[parent] as OpenNode, items[k] as OpenNode];
+      if (!before(boundG, units, this.bounds[parent] as number, this.units[parent] as number)) break;
+      this.place(k, this.nodes[parent] as OpenNode, this.bounds[parent] as number, this.units[parent] as number);
       k = parent;
     }
+    this.place(k, node, boundG, units);
   }
   pop(): OpenNode | undefined {
-    const items = this.items;
-    const top = items[0];
-    const last = items.pop();
-    if (items.length > 0 && last) {
-      items[0] = last;
+    const { nodes, bounds, units } = this;
+    const top = nodes[0];
+    const last = nodes.pop();
+    const lastBound = bounds.pop() as number;
+    const lastUnits = units.pop() as number;
+    const size = nodes.length;
+    if (size > 0 && last) {
+      // Sift the hole down from the root, moving the better child up, and place the last node once.
       let k = 0;
       for (;;) {
         const l = 2 * k + 1;
+        if (l >= size) break;
         const r = l + 1;
-        let m = k;
-        if (l < items.length && NodeHeap.before(items[l] as OpenNode, items[m] as OpenNode)) m = l;
-        if (r < items.length && NodeHeap.before(items[r] as OpenNode, items[m] as OpenNode)) m = r;
-        if (m === k) break;
-        [items[k], items[m]] = [items[m] as OpenNode, items[k] as OpenNode];
+        const m =
+          r < size && before(bounds[r] as number, units[r] as number, bounds[l] as number, units[l] as number) ? r : l;
+        if (!before(bounds[m] as number, units[m] as number, lastBound, lastUnits)) break;
+        this.place(k, nodes[m] as OpenNode, bounds[m] as number, units[m] as number);
         k = m;
       }
+      this.place(k, last, lastBound, lastUnits);
     }
     return top;
   }
 }
 
+/** The heap's order: the lesser bound first; among equal bounds the node with more packed (nearer a leaf). */
+function before(boundA: number, unitsA: number, boundB: number, unitsB: number): boolean {
+  if (boundA !== boundB) return boundA < boundB;
+  return unitsA > unitsB;
+}
+
 function packedUnits(lb: Uint8Array): number {
   let units = 0;
-  for (const v of lb) units += v;
+  for (let i = 0; i < lb.length; i++) units += lb[i] as number;
   return units;
 }
 

@@ -10,7 +10,8 @@ import type { KitCounts } from './types.js';
  * kit that holds no blocker, so a cut found in it holds for those kits and, lifted by the blockers, for all.
  */
 export interface KitView {
-  pre: PresolvedProblem;
+  /** The view's problem (built on first read). */
+  readonly pre: PresolvedProblem;
   blockers: readonly number[];
   /**
    * What the view's model depends on besides the kit's stores and panels: which view (pooled, or one device's) and the
@@ -98,31 +99,53 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
       if (a.anyOf.length === 0 || a.anyOf.some((b) => !reached.has(b))) for (const b of blockerOf(a)) blockers.add(b);
     }
     if (storeIndices.every((i) => reached.has(i))) continue;
-    const demandWh = need.gainWh.map((row) => row.map((wh) => wh / eKit));
-    views.push({
-      pre: restricted(pre, reached, demandWh),
-      blockers: [...blockers].sort((x, y) => x - y),
-      key: `device ${d} at ${eKit} from ${[...reached].sort((x, y) => x - y).join(',')}`,
-    });
+    const gainWh = need.gainWh;
+    views.push(
+      lazyView(
+        () =>
+          restricted(
+            pre,
+            reached,
+            gainWh.map((row) => row.map((wh) => wh / eKit)),
+          ),
+        [...blockers].sort((x, y) => x - y),
+        `device ${d} at ${eKit} from ${[...reached].sort((x, y) => x - y).join(',')}`,
+      ),
+    );
   }
   if (extraDemand.some((row) => row.some((wh) => wh > 0))) {
-    views.unshift({
-      pre: {
-        ...pre,
-        problem: {
-          ...pre.problem,
-          coefficients: {
-            ...c,
-            demandWh: c.demandWh.map((row, s) => row.map((wh, t) => wh + (extraDemand[s]?.[t] ?? 0))),
-            roomDemandWh: c.roomDemandWh ?? c.demandWh,
+    views.unshift(
+      lazyView(
+        () => ({
+          ...pre,
+          problem: {
+            ...pre.problem,
+            coefficients: {
+              ...c,
+              demandWh: c.demandWh.map((row, s) => row.map((wh, t) => wh + (extraDemand[s]?.[t] ?? 0))),
+              roomDemandWh: c.roomDemandWh ?? c.demandWh,
+            },
           },
-        },
-      },
-      blockers: [...pooledBlockers].sort((x, y) => x - y),
-      key: `pooled ${pooledKey.join(' ')}`,
-    });
+        }),
+        [...pooledBlockers].sort((x, y) => x - y),
+        `pooled ${pooledKey.join(' ')}`,
+      ),
+    );
   }
   return views;
+}
+
+/** A view whose problem is built when first read (a check answered from the cache by its key never builds it). */
+function lazyView(build: () => PresolvedProblem, blockers: readonly number[], key: string): KitView {
+  let built: PresolvedProblem | undefined;
+  return {
+    get pre() {
+      built ??= build();
+      return built;
+    },
+    blockers,
+    key,
+  };
 }
 
 /** The problem with only `stores` as stores, only the panels that can reach one of them, and `demandWh`. */

@@ -261,7 +261,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       const { lb } = node;
       const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
       const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
-      const siblingsUb = Uint8Array.from(node.ub);
+      const siblingsUb = node.ub.slice();
       // Every way left raises a single item (see above): one child per item and count.
       const seen = new Set<number>();
       for (const raise of raises) {
@@ -270,8 +270,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         const key = first[0] * 256 + first[1];
         if (seen.has(key)) continue;
         seen.add(key);
-        const childLb = Uint8Array.from(lb);
-        const childUb = Uint8Array.from(siblingsUb);
+        const childLb = lb.slice();
+        const childUb = siblingsUb.slice();
         let possible = true;
         for (const [i, k] of raise) {
           if ((childUb[i] ?? 0) < k) possible = false;
@@ -299,7 +299,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       }
       if (raises !== unmet) {
         // The other half of the two-way split: the item kept below the count (the row is checked again there).
-        const childLb = Uint8Array.from(lb);
+        const childLb = lb.slice();
         if (propagate(childLb, siblingsUb))
           open.push({
             lb: childLb,
@@ -598,9 +598,17 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
   cut.groupWh.forEach((w, g) => {
     if (w > 0) groups.push(g);
   });
-  const heldWh = (counts: Uint8Array): number => {
+  const itemIndices = Int32Array.from(items);
+  const itemWh = Float64Array.from(items, (i) => cut.itemWh[i] ?? 0);
+  /** The Wh a kit holds towards the cut, or any value ≥ `enoughWh` once it holds that much (every term is ≥ 0). */
+  const heldWh = (counts: Uint8Array, enoughWh: number): number => {
     let wh = 0;
-    for (const i of items) wh += Math.min((cut.itemWh[i] ?? 0) * (counts[i] ?? 0), target);
+    for (let k = 0; k < itemIndices.length; k++) {
+      const units = counts[itemIndices[k] as number] as number;
+      if (units === 0) continue;
+      wh += Math.min((itemWh[k] as number) * units, target);
+      if (wh >= enoughWh) return wh;
+    }
     for (const g of groups)
       for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
         if (alternativePresent(alt, counts)) wh += cut.groupWh[g] ?? 0;
@@ -608,7 +616,7 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
   };
   return {
     need(lb, ub) {
-      let shortWh = target - slack - heldWh(lb);
+      let shortWh = target - slack - heldWh(lb, target - slack);
       if (shortWh <= 0) return -1;
       // Groups are counted at no cost wherever their alternative could still be present (an optimistic bound).
       for (const g of groups)

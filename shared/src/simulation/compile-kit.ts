@@ -130,10 +130,25 @@ type StoreEntry = {
   inputMaxW: number;
 } & ({ kind: 'bank'; spec: BankSpec } | { kind: 'battery'; spec: BatterySpec; volts: number });
 
-/** Compiles a simulation input into typed arrays. */
-export function compileKit(input: KitSimulationInput): CompiledKit {
-  const { solar, kit, devices, reserveShare } = input;
-  const options = input.options ?? {};
+/** What a compiled kit takes from the trip's steps alone (the same for every kit of a trip). */
+interface TripSteps {
+  dayCount: number;
+  stepDurationH: Float64Array;
+  stepDay: Int32Array;
+  stepCamp: Uint8Array;
+  stepFrozen: Uint8Array;
+  stepCampLeftH: Float64Array;
+  stepHoursAfter: Float64Array;
+  coldestAirC: number;
+  tripDays: number;
+}
+
+/** Per trip sun: the solver compiles thousands of kits of one trip, and the arrays are only read. */
+const tripStepsCache = new WeakMap<KitSimulationInput['solar'], TripSteps>();
+
+function tripStepsOf(solar: KitSimulationInput['solar']): TripSteps {
+  const hit = tripStepsCache.get(solar);
+  if (hit) return hit;
   const stepCount = solar.steps.length;
   const dayCount = solar.days.length || (stepCount ? (solar.steps[stepCount - 1]?.dayIndex ?? 0) + 1 : 0);
   const stepDurationH = new Float64Array(stepCount);
@@ -154,6 +169,37 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const stepHoursAfter = new Float64Array(stepCount);
   for (let i = stepCount - 2; i >= 0; i--)
     stepHoursAfter[i] = (stepHoursAfter[i + 1] ?? 0) + (stepDurationH[i + 1] ?? 0);
+  const steps: TripSteps = {
+    dayCount,
+    stepDurationH,
+    stepDay,
+    stepCamp,
+    stepFrozen,
+    stepCampLeftH,
+    stepHoursAfter,
+    coldestAirC: solar.steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity),
+    tripDays: solar.steps.reduce((h, s) => h + s.durationH, 0) / 24,
+  };
+  tripStepsCache.set(solar, steps);
+  return steps;
+}
+
+/** Compiles a simulation input into typed arrays. */
+export function compileKit(input: KitSimulationInput): CompiledKit {
+  const { solar, kit, devices, reserveShare } = input;
+  const options = input.options ?? {};
+  const stepCount = solar.steps.length;
+  const {
+    dayCount,
+    stepDurationH,
+    stepDay,
+    stepCamp,
+    stepFrozen,
+    stepCampLeftH,
+    stepHoursAfter,
+    coldestAirC,
+    tripDays,
+  } = tripStepsOf(solar);
 
   const leads: KitLead[] = [];
   const converters: KitConverter[] = [];
@@ -182,7 +228,6 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   panels.sort(byId);
   stationPanels.sort(byId);
   const usedItemIds = new Set<string>();
-  const coldestAirC = solar.steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity);
   // Which controllers join each 12 V panel to each pack line (the cold open-circuit check included).
   const packReach = new Map<string, StationReach[]>();
   for (const p of stationPanels)
@@ -276,6 +321,11 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const pushSeries = (perSky: readonly Float64Array[], count: number) => {
     for (let k = 0; k < skyCount; k++) {
       const one = perSky[k] ?? new Float64Array(stepCount);
+      // Series are only read: a single panel's is shared, not copied.
+      if (count === 1 && one.length === stepCount) {
+        panelSeries[k]?.push(one);
+        continue;
+      }
       const scaled = new Float64Array(stepCount);
       for (let i = 0; i < stepCount; i++) scaled[i] = (one[i] ?? 0) * count;
       panelSeries[k]?.push(scaled);
@@ -338,7 +388,6 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const hullGain: number[] = [];
   const hullDraw: number[] = [];
   const hullEff: number[] = [];
-  const tripDays = solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
   const deviceUnits: DeviceUnit[] = devices.map((d, di) => {
     const paths: (ChargePath | null)[] = [];
     const missing = new Map<string, MissingLink>();

@@ -63,13 +63,22 @@ const energySlack = 1e-9;
 /** A way to meet a row: raise these items to at least these counts. */
 type Raise = readonly (readonly [item: number, count: number])[];
 
+/**
+ * The items a node's floor packs (count > 0), listed once per check: a kit holds a few of a locker's items, so a row
+ * that only asks whether the floor meets it looks at these instead of all of its own items.
+ */
+interface Packed {
+  items: Int32Array;
+  length: number;
+}
+
 /** A row in the branching form. */
 interface CoverRow {
   /**
    * −1 when lb meets the row; otherwise at least the grams the lightest kit within [lb, ub] that meets it adds to lb's
    * (0 is possible: a broken row whose bound is optimistic), Infinity when no kit there meets it.
    */
-  need(lb: Uint8Array, ub: Uint8Array): number;
+  need(lb: Uint8Array, ub: Uint8Array, packed: Packed): number;
   /** The ways to meet the row from lb (only called when lb breaks it). Single-item ways are kept apart by `apart`. */
   raises(lb: Uint8Array, ub: Uint8Array): Raise[];
 }
@@ -147,6 +156,9 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   const cutRows = new WeakMap<object, BornRow>();
   let started = false;
 
+  /** The packed items of the node being checked (one buffer for the search). */
+  const packed: Packed = { items: new Int32Array(n), length: 0 };
+
   const gramsOf = (lb: Uint8Array): number => {
     let g = 0;
     for (let i = 0; i < n; i++) g += (lb[i] ?? 0) * (massG[i] ?? 0);
@@ -222,11 +234,13 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
       // Checked itself against every row already: its bound and broken row are up to date.
       if (node.checked && node.seen === newest) return true;
+      packed.length = 0;
+      for (let i = 0; i < n; i++) if ((lb[i] as number) > 0) packed.items[packed.length++] = i;
       let needG = -1;
       let broken: CoverRow | null = null;
       const stillBroken: BornRow[] = [];
       const look = (born: BornRow): boolean => {
-        const g = born.row.need(lb, ub);
+        const g = born.row.need(lb, ub, packed);
         if (g < 0) return true;
         if (g === Infinity) return false;
         stillBroken.push(born);
@@ -560,8 +574,17 @@ function noLargerRow(limit: readonly number[], massG: readonly number[], owned: 
   // Only items below their count owned can go above the limit (a lifted kit holds most spares at their full count).
   const open = Int32Array.from(limit.flatMap((k, i) => (k < (owned[i] ?? 0) ? [i] : [])));
   const above = Int32Array.from(open, (i) => (limit[i] ?? 0) + 1);
+  /** By item: the count above the limit, 0 for an item that cannot go above it. */
+  const aboveOf = new Uint8Array(limit.length);
+  open.forEach((i, j) => (aboveOf[i] = above[j] as number));
   return {
-    need(lb, ub) {
+    need(lb, ub, packed) {
+      // Met when a packed item is above the limit (most rows a node meets are met this way, in a few steps).
+      for (let j = 0; j < packed.length; j++) {
+        const i = packed.items[j] as number;
+        const k = aboveOf[i] as number;
+        if (k !== 0 && (lb[i] as number) >= k) return -1;
+      }
       let least = Infinity;
       for (let j = 0; j < open.length; j++) {
         const i = open[j] as number;
@@ -598,15 +621,18 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
   cut.groupWh.forEach((w, g) => {
     if (w > 0) groups.push(g);
   });
-  const itemIndices = Int32Array.from(items);
-  const itemWh = Float64Array.from(items, (i) => cut.itemWh[i] ?? 0);
-  /** The Wh a kit holds towards the cut, or any value ≥ `enoughWh` once it holds that much (every term is ≥ 0). */
-  const heldWh = (counts: Uint8Array, enoughWh: number): number => {
+  const allWh = cut.itemWh;
+  /**
+   * The Wh a floor holds towards the cut (its packed items), or any value ≥ `enoughWh` once it holds that much (every
+   * term is ≥ 0).
+   */
+  const heldWh = (counts: Uint8Array, packed: Packed, enoughWh: number): number => {
     let wh = 0;
-    for (let k = 0; k < itemIndices.length; k++) {
-      const units = counts[itemIndices[k] as number] as number;
-      if (units === 0) continue;
-      wh += Math.min((itemWh[k] as number) * units, target);
+    for (let j = 0; j < packed.length; j++) {
+      const i = packed.items[j] as number;
+      const w = allWh[i] as number;
+      if (!(w > 0)) continue;
+      wh += Math.min(w * (counts[i] as number), target);
       if (wh >= enoughWh) return wh;
     }
     for (const g of groups)
@@ -615,8 +641,8 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
     return wh;
   };
   return {
-    need(lb, ub) {
-      let shortWh = target - slack - heldWh(lb, target - slack);
+    need(lb, ub, packed) {
+      let shortWh = target - slack - heldWh(lb, packed, target - slack);
       if (shortWh <= 0) return -1;
       // Groups are counted at no cost wherever their alternative could still be present (an optimistic bound).
       for (const g of groups)

@@ -11,7 +11,7 @@ import { clearlyBroken, dailyModelItems, evaluateDailyModel, type EnergyCut } fr
 import { kitViewCuts, kitViewsShort } from './kit-views.js';
 import { adaptiveBatches, oneAtATime, tryInBatches } from './batch-trials.js';
 import { solveWithJsLp } from './js-lp-backend.js';
-import { kitKey, kitMassG, kitNoLarger } from './kit.js';
+import { kitKey, kitMassG, kitVector, vectorNoLarger, type KitVector } from './kit.js';
 import type { LinearSolution, LinearSolver } from './linear-model.js';
 import { createMasterSearch } from './master-branching.js';
 import { presolve, type ActiveItem, type PresolvedProblem } from './presolve.js';
@@ -119,6 +119,20 @@ export function createKitSearch(
   const cuts: KitCut[] = [];
   const cache = new Map<string, JudgeVerdict>();
   const rejected: KitCounts[] = [];
+  /** Every candidate's position in a kit vector (rejected, known and accepted kits are compared as vectors). */
+  const vectorIndex = new Map(problem.candidates.map((c, i) => [c.itemId, i]));
+  const vectorOf = (counts: KitCounts): KitVector => kitVector(counts, vectorIndex);
+  /** `rejected` as vectors, in the same order. */
+  const rejectedVectors: KitVector[] = [];
+  const addRejected = (kit: KitCounts): void => {
+    rejected.push(kit);
+    rejectedVectors.push(vectorOf(kit));
+  };
+  /** Whether a kit is no larger than one already rejected (then the model should have cut it off). */
+  const insideRejected = (counts: KitCounts): boolean => {
+    const v = vectorOf(counts);
+    return rejectedVectors.some((r) => vectorNoLarger(v, r)) || knownVectors.some((known) => vectorNoLarger(v, known));
+  };
   /** Maximal kits their own views reject (so the judge does too), cut off by their view cuts. */
   const viewRejected: KitCounts[] = [];
   const stats: KitSearch['stats'] = { rounds: 0, judgedKits: 0, dailyRejected: 0, masterNodes: 0, masterFallbacks: 0 };
@@ -144,29 +158,28 @@ export function createKitSearch(
 
   const knownRejected = options.knownRejected ?? [];
   /** The minimal kits the judge accepted while lifting. */
-  const acceptedKits: KitCounts[] = [];
-  /** A known rejected kit that holds at least `counts` (then the judge rejects `counts` too), if any. */
-  const knownRejectedHolding = (counts: KitCounts): KitCounts | undefined =>
-    knownRejected.find((known) => kitNoLarger(counts, known));
+  const acceptedKits: KitVector[] = [];
+  const knownVectors = knownRejected.map(vectorOf);
 
   // The master's branch and bound checks a node against a row only when it comes up, so the known rejected kits join
   // it at once as cuts (a proposed kit inside one would only be cut off then): the 50-item bench trip's full plan took
   // 10 s before, 7 s after.
-  for (const known of knownRejected) cuts.push({ kind: 'no-larger-than', counts: new Map(known) });
+  knownRejected.forEach((known, k) => cuts.push(downSetCut(new Map(known), knownVectors[k] as KitVector)));
 
   /**
    * The judge rejects a kit (for lifting); a known rejected kit holding it, or an accepted kit it holds, answer first.
    */
   const judgeRejects = (trial: KitCounts): boolean => {
-    if (knownRejectedHolding(trial) !== undefined) return true;
+    const v = vectorOf(trial);
+    if (knownVectors.some((known) => vectorNoLarger(v, known))) return true;
     // The judge is monotone: a kit holding one it accepted is accepted too (no simulation needed).
-    if (acceptedKits.some((kit) => kitNoLarger(kit, trial))) return false;
+    if (acceptedKits.some((kit) => vectorNoLarger(kit, v))) return false;
     // No daily-model check first: the judge lifts only kits the daily model passed, and it passes every larger one.
     if (judge(trial).feasible) {
       // Kept minimal: a kit holding another already listed adds nothing, and one it holds leaves.
       for (let k = acceptedKits.length - 1; k >= 0; k--)
-        if (kitNoLarger(trial, acceptedKits[k] as KitCounts)) acceptedKits.splice(k, 1);
-      acceptedKits.push(new Map(trial));
+        if (vectorNoLarger(v, acceptedKits[k] as KitVector)) acceptedKits.splice(k, 1);
+      acceptedKits.push(v);
       return false;
     }
     return true;
@@ -243,7 +256,7 @@ export function createKitSearch(
 
   const reject = (counts: KitCounts, verdict: JudgeVerdict, deadlineMs: number): void => {
     const grown = lift(counts, deadlineMs);
-    rejected.push(grown);
+    addRejected(grown);
     cutDownSet(grown);
     if (verdict.runsDry && (!lastRunsDry || verdict.runsDry.dayIndex < lastRunsDry.dayIndex))
       lastRunsDry = verdict.runsDry;
@@ -254,13 +267,13 @@ export function createKitSearch(
    * kit no larger than one already cut off adds nothing): fewer rows in every later master solve.
    */
   const cutDownSet = (grown: KitCounts): void => {
-    const downSets = cuts.filter((c) => c.kind === 'no-larger-than');
-    if (downSets.some((c) => kitNoLarger(grown, c.counts))) return;
-    for (let k = cuts.length - 1; k >= 0; k--) {
-      const c = cuts[k] as KitCut;
-      if (c.kind === 'no-larger-than' && kitNoLarger(c.counts, grown)) cuts.splice(k, 1);
-    }
-    cuts.push({ kind: 'no-larger-than', counts: grown });
+    const v = vectorOf(grown);
+    if (cuts.some((c) => isDownSet(c) && vectorNoLarger(v, c.vector))) return;
+    // One pass keeping the cuts `grown` does not imply (a splice each would move the list hundreds of times).
+    let kept = 0;
+    for (const c of cuts) if (!(isDownSet(c) && vectorNoLarger(c.vector, v))) cuts[kept++] = c;
+    cuts.length = kept;
+    cuts.push(downSetCut(grown, v));
   };
 
   /**
@@ -307,7 +320,7 @@ export function createKitSearch(
       // by float noise only, its down-set is cut off outright.
       if (grownCuts.some((cut) => clearlyBroken(presolved, cut, counts))) viewRejected.push(grown);
       else {
-        rejected.push(grown);
+        addRejected(grown);
         cutDownSet(grown);
       }
       return true;
@@ -324,7 +337,7 @@ export function createKitSearch(
     addEnergyCuts(evaluateDailyModel(presolved, grown).cuts);
     // A cut the kit breaks only by float noise could let the master propose it again: exclude its down-set as well.
     if (!evaluation.cuts.some((cut) => clearlyBroken(presolved, cut, counts))) {
-      rejected.push(grown);
+      addRejected(grown);
       cutDownSet(grown);
     }
     return true;
@@ -434,7 +447,7 @@ export function createKitSearch(
         // A point that breaks the model proves nothing about grams, but a kit in it that the judge rejects may still be
         // cut off (the cut holds whatever found the kit); a kit it would accept cannot be trusted as the lightest.
         const broken = first.brokenValues ? kitFromValues(presolved, first.brokenValues) : undefined;
-        if (broken && !rejected.some((r) => kitNoLarger(broken, r)) && !knownRejectedHolding(broken)) {
+        if (broken && !insideRejected(broken)) {
           if (dailyRejects(broken)) continue;
           const brokenVerdict = judge(broken);
           if (!brokenVerdict.feasible) {
@@ -450,7 +463,7 @@ export function createKitSearch(
       if (proven) lowerBoundG = massG;
       // A kit no larger than one already rejected (or known rejected: those are cuts from the start) is cut off by the
       // model; meeting one means the solver erred.
-      if (rejected.some((r) => kitNoLarger(counts, r)) || knownRejectedHolding(counts))
+      if (insideRejected(counts))
         return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
       if (dailyRejects(counts)) continue;
       const verdict = judge(counts);
@@ -486,6 +499,21 @@ export function createKitSearch(
       return lightestAccepted?.counts;
     },
   };
+}
+
+/** A "no larger than" cut with its kit's vector (a search tests each new rejected kit against all of them). */
+interface DownSetCut {
+  kind: 'no-larger-than';
+  counts: KitCounts;
+  vector: KitVector;
+}
+
+function downSetCut(counts: KitCounts, vector: KitVector): DownSetCut {
+  return { kind: 'no-larger-than', counts, vector };
+}
+
+function isDownSet(cut: KitCut): cut is DownSetCut {
+  return cut.kind === 'no-larger-than' && 'vector' in cut;
 }
 
 /** A cut with every coefficient at most its right-hand side (see `addEnergyCuts`). */

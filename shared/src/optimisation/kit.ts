@@ -49,3 +49,42 @@ export function kitNoLarger(a: KitCounts, b: KitCounts): boolean {
   for (const [itemId, count] of a) if (count > (b.get(itemId) ?? 0)) return false;
   return true;
 }
+
+/**
+ * A kit as counts by candidate index (bytes, at most 255) with the indices it packs: a search compares each kit it meets
+ * with hundreds of rejected kits, and `vectorNoLarger` looks only at the few items the smaller kit packs.
+ */
+export interface KitVector {
+  counts: Uint8Array;
+  packed: Int32Array;
+}
+
+/**
+ * The kit's vector over `index` (candidate id → position; ids not in it are left out, so index every candidate).
+ * @example kitVector(new Map([['a', 2]]), new Map([['a', 0]])).packed // Int32Array [0]
+ */
+export function kitVector(counts: KitCounts, index: ReadonlyMap<string, number>): KitVector {
+  const vector = new Uint8Array(index.size);
+  const packed: number[] = [];
+  for (const [itemId, count] of counts) {
+    const i = index.get(itemId);
+    if (i === undefined || !(count > 0)) continue;
+    vector[i] = Math.min(255, count);
+    packed.push(i);
+  }
+  return { counts: vector, packed: Int32Array.from(packed) };
+}
+
+/**
+ * `kitNoLarger` on vectors: whether `a` holds no more of any item than `b`.
+ * @example vectorNoLarger(kitVector(small, index), kitVector(big, index)) // true
+ */
+export function vectorNoLarger(a: KitVector, b: KitVector): boolean {
+  const { counts, packed } = a;
+  const other = b.counts;
+  for (let j = 0; j < packed.length; j++) {
+    const i = packed[j] as number;
+    if ((counts[i] as number) > (other[i] as number)) return false;
+  }
+  return true;
+}

@@ -153,7 +153,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   let births = 0;
   const pathRows: BornRow[] = pre.needs.map((need) => ({ row: pathRow(need.alternatives, massG), birth: births++ }));
   /** Rows of cuts seen so far, by cut object: a cut passed again keeps its row and birth. */
-  const cutRows = new WeakMap<object, BornRow>();
+  const cutRows = new WeakSet<object>();
   let started = false;
 
   /** The packed items of the node being checked (one buffer for the search). */
@@ -186,13 +186,13 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     return true;
   };
 
-  const rowOf = (cut: object, make: () => CoverRow): BornRow => {
-    let born = cutRows.get(cut);
-    if (!born) {
-      born = { row: make(), birth: births++ };
-      cutRows.set(cut, born);
-    }
-    return born;
+  /** Every row so far, in birth order: the path rows, then each cut's as it first comes. */
+  const allRows: BornRow[] = [...pathRows];
+  const rowOf = (cut: object, make: () => CoverRow): void => {
+    if (cutRows.has(cut)) return;
+    const born = { row: make(), birth: births++ };
+    cutRows.add(cut);
+    allRows.push(born);
   };
 
   /** One solve over `open` (the kept heap, or a copy whose nodes are copied before they change). */
@@ -206,13 +206,12 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     const now = limits.now ?? (() => 0);
     const deadlineMs = limits.deadlineMs ?? Infinity;
     const capG = instance.maxMassG !== undefined ? instance.maxMassG + 0.5 : Infinity;
-    const rows: BornRow[] = [
-      ...pathRows,
-      ...instance.energyCuts.map((cut) => rowOf(cut, () => energyRow(cut, pre, massG))),
-      ...instance.cuts.flatMap((cut) =>
-        cut.kind === 'no-larger-than' ? [rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned))] : [],
-      ),
-    ].sort((a, b) => a.birth - b.birth);
+    // Rows are kept in birth order, the new cuts' appended; a row whose cut has since left the search (implied by a
+    // larger one) stays: it still holds, and a kit search's cut list is hundreds long after a few hundred rounds.
+    for (const cut of instance.energyCuts) rowOf(cut, () => energyRow(cut, pre, massG));
+    for (const cut of instance.cuts)
+      if (cut.kind === 'no-larger-than') rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned));
+    const rows = allRows;
     const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
     const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
     const supersets = instance.cuts

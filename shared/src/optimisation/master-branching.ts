@@ -99,8 +99,8 @@ export interface MasterSearch {
   next(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
   /**
    * The same solve on a copy of the open nodes, leaving the kept tree as it was: for passing cuts ("not exactly", a gram
-   * cap) that later solves must not inherit. The rows must be the kept tree's (a tie-break among kits of equal grams
-   * starts from where the search stands instead of from the root).
+   * cap) that later solves must not inherit (a tie-break among kits of equal grams starts from where the search stands
+   * instead of from the root). Its other cuts' rows are kept like `next`'s: pass only cuts every later solve holds.
    */
   peek(cuts: MasterCuts, limits?: MasterLimits): MasterAnswer;
 }
@@ -133,6 +133,22 @@ interface OpenNode {
 interface BornRow {
   row: CoverRow;
   birth: number;
+  /** A "no larger than" row: whether a floor meets it is read from `metBits` (see `createMasterSearch`). */
+  byBits?: boolean;
+}
+
+/** A bit per row birth, growing as rows are born. */
+class BirthBits {
+  words = new Uint32Array(4);
+  set(birth: number): void {
+    const w = birth >>> 5;
+    if (w >= this.words.length) {
+      const grown = new Uint32Array(Math.max(w + 1, 2 * this.words.length));
+      grown.set(this.words);
+      this.words = grown;
+    }
+    this.words[w] = (this.words[w] as number) | (1 << (birth & 31));
+  }
 }
 
 /**
@@ -188,11 +204,31 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
 
   /** Every row so far, in birth order: the path rows, then each cut's as it first comes. */
   const allRows: BornRow[] = [...pathRows];
-  const rowOf = (cut: object, make: () => CoverRow): void => {
-    if (cutRows.has(cut)) return;
-    const born = { row: make(), birth: births++ };
+  const rowOf = (cut: object, make: () => CoverRow): BornRow | undefined => {
+    if (cutRows.has(cut)) return undefined;
+    const born: BornRow = { row: make(), birth: births++ };
     cutRows.add(cut);
     allRows.push(born);
+    return born;
+  };
+  /**
+   * `metBits[i][c]`: the "no larger than" rows a floor meets by holding at least c of item i, by birth (the row of a
+   * kit K is met by c units of i when c > K's count of i). A node catching up on hundreds of such rows ORs the bits of
+   * its few packed items instead of asking each row: on a locker that needs hundreds of rounds, most rows a node
+   * catches up on it meets.
+   */
+  const metBits = owned.map((k) => Array.from({ length: k + 1 }, () => new BirthBits()));
+  /** The OR of the packed items' bits over the words of the births being checked (one buffer for the search). */
+  let metMask = new Uint32Array(4);
+  const noLargerRowOf = (cut: KitCut): void => {
+    if (cutRows.has(cut)) return;
+    const limit = countsOf(pre, cut);
+    const born = rowOf(cut, () => noLargerRow(limit, massG, owned));
+    if (!born) return;
+    born.byBits = true;
+    limit.forEach((k, i) => {
+      for (let c = k + 1; c <= (owned[i] ?? 0); c++) metBits[i]?.[c]?.set(born.birth);
+    });
   };
 
   /** One solve over `open` (the kept heap, or a copy whose nodes are copied before they change). */
@@ -209,8 +245,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     // Rows are kept in birth order, the new cuts' appended; a row whose cut has since left the search (implied by a
     // larger one) stays: it still holds, and a kit search's cut list is hundreds long after a few hundred rounds.
     for (const cut of instance.energyCuts) rowOf(cut, () => energyRow(cut, pre, massG));
-    for (const cut of instance.cuts)
-      if (cut.kind === 'no-larger-than') rowOf(cut, () => noLargerRow(countsOf(pre, cut), massG, owned));
+    for (const cut of instance.cuts) if (cut.kind === 'no-larger-than') noLargerRowOf(cut);
     const rows = allRows;
     const newest = rows.length > 0 ? (rows[rows.length - 1] as BornRow).birth : -1;
     const exactly = instance.cuts.filter((cut) => cut.kind === 'not-exactly').map((cut) => countsOf(pre, cut));
@@ -249,9 +284,24 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         }
         return true;
       };
+      // The "no larger than" rows born since the node's last check that its floor meets, as bits from word `w0`.
+      const w0 = (node.seen + 1) >>> 5;
+      const words = newest > node.seen ? (newest >>> 5) - w0 + 1 : 0;
+      if (words > 0) {
+        if (metMask.length < words) metMask = new Uint32Array(2 * words);
+        metMask.fill(0, 0, words);
+        for (let j = 0; j < packed.length; j++) {
+          const i = packed.items[j] as number;
+          const bits = (metBits[i]?.[lb[i] as number] as BirthBits).words;
+          const end = Math.min(words, bits.length - w0);
+          for (let w = 0; w < end; w++) metMask[w] = (metMask[w] as number) | (bits[w0 + w] as number);
+        }
+      }
       for (let r = rows.length - 1; r >= 0; r--) {
         const born = rows[r] as BornRow;
-        if (born.birth <= node.seen) break;
+        const birth = born.birth;
+        if (birth <= node.seen) break;
+        if (born.byBits && ((metMask[(birth >>> 5) - w0] as number) & (1 << (birth & 31))) !== 0) continue;
         if (!look(born)) return false;
       }
       if (node.pending) for (const born of node.pending) if (!look(born)) return false;

@@ -132,13 +132,10 @@ type StoreEntry = {
 
 /** What a compiled kit takes from the trip's steps alone (the same for every kit of a trip). */
 interface TripSteps {
-  dayCount: number;
-  stepDurationH: Float64Array;
-  stepDay: Int32Array;
-  stepCamp: Uint8Array;
-  stepFrozen: Uint8Array;
-  stepCampLeftH: Float64Array;
-  stepHoursAfter: Float64Array;
+  fields: Pick<
+    CompiledKit,
+    'dayCount' | 'stepDurationH' | 'stepDay' | 'stepCamp' | 'stepFrozen' | 'stepCampLeftH' | 'stepHoursAfter'
+  >;
   coldestAirC: number;
   tripDays: number;
 }
@@ -170,13 +167,7 @@ function tripStepsOf(solar: KitSimulationInput['solar']): TripSteps {
   for (let i = stepCount - 2; i >= 0; i--)
     stepHoursAfter[i] = (stepHoursAfter[i + 1] ?? 0) + (stepDurationH[i + 1] ?? 0);
   const steps: TripSteps = {
-    dayCount,
-    stepDurationH,
-    stepDay,
-    stepCamp,
-    stepFrozen,
-    stepCampLeftH,
-    stepHoursAfter,
+    fields: { dayCount, stepDurationH, stepDay, stepCamp, stepFrozen, stepCampLeftH, stepHoursAfter },
     coldestAirC: solar.steps.reduce((m, s) => Math.min(m, s.airTempC), Infinity),
     tripDays: solar.steps.reduce((h, s) => h + s.durationH, 0) / 24,
   };
@@ -189,17 +180,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const { solar, kit, devices, reserveShare } = input;
   const options = input.options ?? {};
   const stepCount = solar.steps.length;
-  const {
-    dayCount,
-    stepDurationH,
-    stepDay,
-    stepCamp,
-    stepFrozen,
-    stepCampLeftH,
-    stepHoursAfter,
-    coldestAirC,
-    tripDays,
-  } = tripStepsOf(solar);
+  const { fields: stepFields, coldestAirC, tripDays } = tripStepsOf(solar);
 
   const leads: KitLead[] = [];
   const converters: KitConverter[] = [];
@@ -465,13 +446,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
 
   return {
     stepCount,
-    dayCount,
-    stepDurationH,
-    stepDay,
-    stepCamp,
-    stepCampLeftH,
-    stepFrozen,
-    stepHoursAfter,
+    ...stepFields,
     panelCount,
     panelItemIds: [...panels, ...stationPanels].map((p) => p.itemId),
     panelSeries,

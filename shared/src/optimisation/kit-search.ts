@@ -124,10 +124,6 @@ export function createKitSearch(
   const vectorOf = (counts: KitCounts): KitVector => kitVector(counts, vectorIndex);
   /** `rejected` as vectors, in the same order. */
   const rejectedVectors: KitVector[] = [];
-  const addRejected = (kit: KitCounts): void => {
-    rejected.push(kit);
-    rejectedVectors.push(vectorOf(kit));
-  };
   /** Whether a kit is no larger than one already rejected (then the model should have cut it off). */
   const insideRejected = (counts: KitCounts): boolean => {
     const v = vectorOf(counts);
@@ -256,18 +252,19 @@ export function createKitSearch(
 
   const reject = (counts: KitCounts, verdict: JudgeVerdict, deadlineMs: number): void => {
     const grown = lift(counts, deadlineMs);
-    addRejected(grown);
     cutDownSet(grown);
     if (verdict.runsDry && (!lastRunsDry || verdict.runsDry.dayIndex < lastRunsDry.dayIndex))
       lastRunsDry = verdict.runsDry;
   };
 
   /**
-   * Cuts off `grown` and every kit no larger. Cuts it implies are left in: the master keeps every row it has made
+   * Records `grown` as rejected and cuts it off with every kit no larger. Cuts it implies are left in: the master keeps every row it has made
    * anyway (a row stays valid), and on a locker that needs hundreds of rounds, testing each new kit against every cut
    * to drop the implied ones cost more than the rows they would have saved.
    */
   const cutDownSet = (grown: KitCounts): void => {
+    rejected.push(grown);
+    rejectedVectors.push(vectorOf(grown));
     cuts.push({ kind: 'no-larger-than', counts: grown });
   };
 
@@ -315,7 +312,6 @@ export function createKitSearch(
       // by float noise only, its down-set is cut off outright.
       if (grownCuts.some((cut) => clearlyBroken(presolved, cut, counts))) viewRejected.push(grown);
       else {
-        addRejected(grown);
         cutDownSet(grown);
       }
       return true;
@@ -332,7 +328,6 @@ export function createKitSearch(
     addEnergyCuts(evaluateDailyModel(presolved, grown).cuts);
     // A cut the kit breaks only by float noise could let the master propose it again: exclude its down-set as well.
     if (!evaluation.cuts.some((cut) => clearlyBroken(presolved, cut, counts))) {
-      addRejected(grown);
       cutDownSet(grown);
     }
     return true;

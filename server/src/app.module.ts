@@ -41,6 +41,8 @@ export interface AppModuleOptions {
   clock?: Clock;
   /** Serve the built client (default true). */
   serveClient?: boolean;
+  /** The plan solver's worker script (default the real one; tests pass one that holds its thread). */
+  planWorkerFile?: string;
 }
 
 /**
@@ -96,7 +98,7 @@ export class AppModule {
         InvitesModule,
         PoolModule,
         ShareModule,
-        PlansModule,
+        PlansModule.forRoot({ workerFile: options.planWorkerFile }),
         ...(options.serveClient === false ? [] : [ClientStaticModule]),
       ],
       providers: [

@@ -303,23 +303,36 @@ describe('plans', () => {
   });
 
   it('refuses a solve with 503 and Retry-After when every thread and queue place is taken, and serves other requests meanwhile', async () => {
-    // This app has one thread and one queue place: two whole plans fill them for a few seconds.
-    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
-    const solver = t.app.get(PlanSolver);
-    let solved = 0;
-    const running = [solver.plan(input), solver.plan(input)].map((run) => run.then(() => (solved += 1)));
-    const busy = await t.http().post(`/api/trips/${route.trip.id}/plans`).set(leader.auth).send({}).expect(503);
-    expect(busy.headers['retry-after']).toBe('7');
-    expect(busy.body).toMatchObject({ statusCode: 503, errors: [] });
-    expect(busy.body.message).toContain('busy');
-    await t.http().post(`/api/trips/${route.trip.id}/check`).set(leader.auth).send({ kit: [] }).expect(503);
-    // Health and reads answer while both solves are still running.
-    const health = await t.http().get('/api/health').expect(200);
-    expect(health.body.status).toBe('ok');
-    await t.http().get(`/api/trips/${route.trip.id}/plans`).set(leader.auth).expect(200);
-    expect(solved).toBe(0);
-    await Promise.all(running);
-    expect(solver.load).toBe(0);
+    // An app of its own with one thread and one queue place, whose worker holds each task 2 s before solving: two
+    // whole plans fill them however fast the engine is (the real worker now solves this trip in well under a second).
+    const busyApp = await startTestApp({
+      env: { PLAN_WORKER_THREADS: '1', PLAN_QUEUE_MAX: '1', PLAN_RETRY_AFTER_S: '7' },
+      planWorkerFile: heldPlanWorkerFile,
+    });
+    try {
+      const hiker = await signedInHiker(busyApp);
+      const busyRoute = await highRoute(busyApp, hiker);
+      const { input } = await busyApp.app.get(PlanningInputBuilder).forTrip(busyRoute.trip.id);
+      const solver = busyApp.app.get(PlanSolver);
+      let solved = 0;
+      const running = [solver.plan(input), solver.plan(input)].map((run) => run.then(() => (solved += 1)));
+      const plansUrl = `/api/trips/${busyRoute.trip.id}/plans`;
+      const busy = await busyApp.http().post(plansUrl).set(hiker.auth).send({}).expect(503);
+      expect(busy.headers['retry-after']).toBe('7');
+      expect(busy.body).toMatchObject({ statusCode: 503, errors: [] });
+      expect(busy.body.message).toContain('busy');
+      await busyApp.http().post(`/api/trips/${busyRoute.trip.id}/check`).set(hiker.auth).send({ kit: [] }).expect(503);
+      // Health and reads answer while both solves are still running.
+      const health = await busyApp.http().get('/api/health').expect(200);
+      expect(health.body.status).toBe('ok');
+      await busyApp.http().get(plansUrl).set(hiker.auth).expect(200);
+      expect(solved).toBe(0);
+      await Promise.all(running);
+      expect(solved).toBe(2);
+      expect(solver.load).toBe(0);
+    } finally {
+      await busyApp.close();
+    }
   });
 
   it('solves in a worker thread, not on the server’s event loop', async () => {

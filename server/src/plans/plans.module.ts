@@ -1,4 +1,4 @@
-import { Module } from '@nestjs/common';
+import { type DynamicModule, Module } from '@nestjs/common';
 import { TRIP_PLAN_SUMMARY } from '../share/trip-plan-summary';
 import { TripsModule } from '../trips/trips.module';
 import { ChosenKitService } from './chosen-kit.service';
@@ -17,7 +17,6 @@ import { TripPlanSummaryFromChosenKit } from './trip-plan-summary.source';
   imports: [TripsModule],
   controllers: [PlansController],
   providers: [
-    { provide: PLAN_WORKER_FILE, useValue: defaultPlanWorkerFile },
     PlanSolver,
     PlanningInputBuilder,
     PlansService,
@@ -26,4 +25,15 @@ import { TripPlanSummaryFromChosenKit } from './trip-plan-summary.source';
   ],
   exports: [PlanningInputBuilder, PlanSolver, ChosenKitService, TRIP_PLAN_SUMMARY],
 })
-export class PlansModule {}
+export class PlansModule {
+  /**
+   * The module with the solver's worker script: the real one by default; tests pass one that holds its thread, so
+   * that filling every thread and queue place does not depend on how fast the engine solves.
+   */
+  static forRoot(options: { workerFile?: string } = {}): DynamicModule {
+    return {
+      module: PlansModule,
+      providers: [{ provide: PLAN_WORKER_FILE, useValue: options.workerFile ?? defaultPlanWorkerFile }],
+    };
+  }
+}

@@ -33,6 +33,8 @@ export interface TestApp {
 export interface StartTestAppOptions {
   env?: Env;
   serveClient?: boolean;
+  /** The plan solver's worker script (see `AppModuleOptions.planWorkerFile`). */
+  planWorkerFile?: string;
 }
 
 /** The real app (same setup as main.ts) over a fresh migrated in-memory PGlite and a hand-moved clock. */
@@ -44,6 +46,7 @@ export async function startTestApp(options: StartTestAppOptions = {}): Promise<T
     clock,
     env: { ...testEnv, ...options.env },
     serveClient: options.serveClient ?? false,
+    ...(options.planWorkerFile ? { planWorkerFile: options.planWorkerFile } : {}),
     logger: false,
   });
   return {
@@ -103,7 +106,10 @@ export interface ParsedCookie {
 }
 
 /** Finds the session cookie in a Set-Cookie header and splits out its attributes (lower-case names). */
-export function sessionCookie(setCookie: string | string[] | undefined, name = 'gramwatt_session'): ParsedCookie | undefined {
+export function sessionCookie(
+  setCookie: string | string[] | undefined,
+  name = 'gramwatt_session',
+): ParsedCookie | undefined {
   const headers = setCookie === undefined ? [] : Array.isArray(setCookie) ? setCookie : [setCookie];
   for (const header of headers) {
     const [pair = '', ...rest] = header.split(';').map((part) => part.trim());

@@ -96,11 +96,6 @@ export function evaluateDailyModel(
   // Kits hold few of the locker's items: dot products run over the packed ones only.
   const packed = Int32Array.from(counts.flatMap((n, i) => (n > 0 ? [i] : [])));
   const packedCounts = Float64Array.from(packed, (i) => counts[i] ?? 0);
-  const value = (v: BoundVector): number => {
-    let sum = 0;
-    for (let k = 0; k < packed.length; k++) sum += (v[packed[k] as number] as number) * (packedCounts[k] as number);
-    return sum;
-  };
   // A view's checks read its base's bounds with the view's factors in the counts (no vector built); only the pass that
   // builds a cut needs the view's own vectors.
   const scales = options.derivedBounds ? undefined : viewScalesOf(pre);
@@ -112,11 +107,13 @@ export function evaluateDailyModel(
     : packedCounts;
   // A view keeps all of a group's panels or none (`restricted` in kit-views.ts).
   const groupKept = scales && pre.groups.map((g) => g.panelIndices.some((p) => (scales.ratioScale[p] ?? 0) > 0));
+  /** Σ over the packed items of v[i] × factors[k] (the counts, or the counts with a view's factors). */
   const scaledValue = (v: BoundVector, factors: Float64Array): number => {
     let sum = 0;
     for (let k = 0; k < packed.length; k++) sum += (v[packed[k] as number] as number) * (factors[k] as number);
     return sum;
   };
+  const value = (v: BoundVector): number => scaledValue(v, packedCounts);
   const groupOn = pre.groups.map(
     (g) => !g.hasRequirement || g.requiresAnyOf.some((alt) => alternativePresent(alt, counts)),
   );
@@ -257,12 +254,10 @@ export function evaluateDailyModel(
     for (let j = 0; j < skyCount && shortfalls.length === 0; j++) runSky((first + j) % skyCount, false);
     const short = shortfalls[0];
     if (short) lastShortSky.set(c.skyIds, c.skyIds.indexOf(short.skyId));
-    return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
+  } else {
+    for (let s = 0; s < c.skyIds.length; s++) runSky(s, false);
   }
-  for (let s = 0; s < c.skyIds.length; s++) {
-    runSky(s, false);
-  }
-  if (options.withCuts !== false) {
+  if (!options.anyShortfall && options.withCuts !== false) {
     for (const short of shortfalls) {
       const cut = runSky(c.skyIds.indexOf(short.skyId), true);
       if (cut) cuts.push(cut);

@@ -118,7 +118,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     );
   }
   // The pooled model stores harvest at the locker's best charge efficiency; a kit holding no store that charges better
-  // than its own best stores at most that (every stores' blocker: a store that charges better).
+  // than its own best stores at most that, so every store that charges better is a blocker of the pooled view.
   const storeEff = (i: number): number => pre.items[i]?.store?.chargeEfficiency ?? 0;
   const kitStoreEff = Math.max(0, ...storeIndices.filter(inKit).map(storeEff));
   if (kitStoreEff < pre.bestChargeEfficiency)

@@ -154,11 +154,11 @@ class BirthBits {
 /**
  * Creates a master search over a presolved problem: best-first branch and bound whose open nodes carry over from one
  * solve to the next (cuts only remove kits, so every open node is still a valid part of what is left, and its bound
- * only rises). A solve pops the node of least bound and checks it against the rows born since it was last checked and
- * the rows its parent broke (see `OpenNode.pending`): a higher bound puts it back in line; a floor kit that meets every row (and no "not exactly" cut) is the answer — every
- * other open node's bound is at least its grams — and the node stays open, for the next solve's cuts to split.
- * Children are opened with their parent's bound (or their floor's grams, if higher) and checked only when they come up:
- * most never do.
+ * only rises). A solve pops the node of least bound and checks it against the rows born since it was last checked
+ * and the rows its parent broke (see `OpenNode.pending`): a higher bound puts it back in line; a floor kit that
+ * meets every row (and no "not exactly" cut) is the answer — every other open node's bound is at least its grams —
+ * and the node stays open, for the next solve's cuts to split. Children are opened with their parent's bound (or
+ * their floor's grams, if higher) and checked only when they come up: most never do.
  * @example createMasterSearch(pre).next({ cuts: [], energyCuts: [] }).status // 'optimal'
  */
 export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
@@ -221,9 +221,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   /** The OR of the packed items' bits over the words of the births being checked (one buffer for the search). */
   let metMask = new Uint32Array(4);
   const noLargerRowOf = (cut: KitCut): void => {
-    if (cutRows.has(cut)) return;
-    const limit = countsOf(pre, cut);
-    const born = rowOf(cut, () => noLargerRow(limit, massG, owned));
+    let limit: number[] = [];
+    const born = rowOf(cut, () => noLargerRow((limit = countsOf(pre, cut)), massG, owned));
     if (!born) return;
     born.byBits = true;
     limit.forEach((k, i) => {
@@ -622,13 +621,12 @@ function pathRow(alternatives: readonly IndexedAlternative[], massG: readonly nu
 function noLargerRow(limit: readonly number[], massG: readonly number[], owned: readonly number[]): CoverRow {
   // Only items below their count owned can go above the limit (a lifted kit holds most spares at their full count).
   const open = Int32Array.from(limit.flatMap((k, i) => (k < (owned[i] ?? 0) ? [i] : [])));
-  const above = Int32Array.from(open, (i) => (limit[i] ?? 0) + 1);
   /** By item: the count above the limit, 0 for an item that cannot go above it. */
   const aboveOf = new Uint8Array(limit.length);
-  open.forEach((i, j) => (aboveOf[i] = above[j] as number));
+  for (const i of open) aboveOf[i] = (limit[i] ?? 0) + 1;
   return {
     need(lb, ub, packed) {
-      // Met when a packed item is above the limit (most rows a node meets are met this way, in a few steps).
+      // Met when an item is above the limit; such an item holds a unit, so it is among the packed ones.
       for (let j = 0; j < packed.length; j++) {
         const i = packed.items[j] as number;
         const k = aboveOf[i] as number;
@@ -637,17 +635,17 @@ function noLargerRow(limit: readonly number[], massG: readonly number[], owned: 
       let least = Infinity;
       for (let j = 0; j < open.length; j++) {
         const i = open[j] as number;
-        const k = above[j] as number;
-        if ((lb[i] as number) >= k) return -1;
+        const k = aboveOf[i] as number;
         if ((ub[i] as number) >= k) least = Math.min(least, (k - (lb[i] as number)) * (massG[i] ?? 0));
       }
       return least;
     },
     raises(_lb, ub) {
       const ways: Raise[] = [];
-      open.forEach((i, j) => {
-        if ((ub[i] ?? 0) >= (above[j] as number)) ways.push([[i, above[j] as number]]);
-      });
+      for (const i of open) {
+        const k = aboveOf[i] as number;
+        if ((ub[i] ?? 0) >= k) ways.push([[i, k]]);
+      }
       return ways;
     },
   };

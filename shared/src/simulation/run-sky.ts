@@ -74,11 +74,33 @@ export interface SkyScratch {
   harvestTierCount: number;
   /** Per store: 1 when the current panel water-fills it in the current tier. */
   harvestFillSet: Uint8Array;
-  /** Per store: the charge rate (W of battery gain) it gives the device being topped up in this step. */
+  /** Per store: the charge rate (W of battery gain) it gives the device being topped up, in this round of the step. */
   topUpRateW: Float64Array;
+  /** Per store × device: the rate (W of battery gain) already given in this step's earlier rounds. */
+  topUpGivenW: Float64Array;
+  /** Per device: its charge power left in this step, as battery gain (Wh). */
+  topUpPowerLeftWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
 }
+
+/**
+ * The rounds of a camp step's top-ups, as hours of its use a device's battery holds: each round tops every device (in
+ * the trip's order) up to that many hours, the last to its full target. The device that holds the fewest hours is
+ * filled first, so when the stores run short the devices share what is left and every battery serves as a buffer,
+ * instead of the first devices staying full while a later one — often the radio — runs dry (common practice: charge
+ * whatever is lowest first). Hours of the device's mean hourly use (its day's use / 24). The rounds step by about a
+ * third up to three days of use: finer rounds share a short camp more evenly, each costs a pass over the devices.
+ */
+const topUpLevelsH = [2, 4, 6, 8, 12, 16, 24, 36, 48, 72, Infinity];
+
+interface HullFlows {
+  drawW: number;
+  converterLossW: number;
+  deviceLossW: number;
+}
+const flowsFrom: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
+const flowsTo: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
 
 /** Allocates scratch buffers for a compiled kit. */
 export function skyScratch(k: CompiledKit): SkyScratch {
@@ -93,6 +115,8 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     ...harvestTiers(k),
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
+    topUpGivenW: new Float64Array(k.storeCount * k.deviceCount),
+    topUpPowerLeftWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
   };
 }
@@ -177,10 +201,11 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 /**
  * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
  * none below 0 °C; tier by tier, a store only after the stores that outrank it), then each device uses its
- * demand for the step from its own battery, then — in the camp window — the devices that need charging are topped up:
- * from the stores only they reach first, then from shared stores; to full, or — for a device that reaches a shared
- * store — from every store only as far as it will still use (merit order, down to each store's reserve, over the paths'
- * hull, within the device's charge power).
+ * demand for the step from its own battery, then — in the camp window — the devices that need charging are topped up,
+ * in rounds by the hours of use their batteries hold (the device holding fewest first): from the stores only they reach
+ * first, then from shared stores; to full, or — for a device that reaches a shared store — from every store only as far
+ * as it will still use (merit order, down to each store's reserve, over the paths' hull, within the device's charge
+ * power).
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(
@@ -362,45 +387,62 @@ export function runSky(
     //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
     //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
     //    step (not always in later steps: see the README's known gap (3)).
+    //    All of it in rounds (`topUpLevelsH`): each round raises every device, in the trip's order, only up to that many
+    //    hours of its use, within its target, so the device holding the fewest hours is filled first. A later round
+    //    goes on from the rates earlier rounds gave (each store's draw costed from there on the hull) and the charge
+    //    power they left.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
-      for (let d = 0; d < D; d++) {
-        if (k.deviceTopsUp[d] !== 1) continue;
-        const cap = k.deviceCapWh[d] ?? 0;
-        const heldWh = devE[d] ?? 0;
-        if (cap - heldWh <= tiny) continue;
-        // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
-        // rest of the trip; any other device to full.
-        const targetWh =
-          k.deviceSharesStores[d] === 1
-            ? Math.min(cap, (k.deviceDemandWhPerH[d] ?? 0) * (k.stepHoursAfter[i] ?? 0))
-            : cap;
-        let wantWh = targetWh - heldWh;
-        if (wantWh <= tiny) continue;
-        // The device's charge power in this step, as battery gain (Wh).
-        let powerLeftWh = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
-        rateW.fill(0);
-        for (let group = 0; group < 2; group++) {
-          for (let s = 0; s < S && wantWh > tiny && powerLeftWh > tiny; s++) {
-            if ((k.storeShared[s] ?? 0) !== group) continue;
-            const x = efficientRateW(d, s, wantWh, powerLeftWh);
-            rateW[s] = x;
-            wantWh -= x * dt;
-            powerLeftWh -= x * dt;
+      const givenW = scratch.topUpGivenW;
+      const powerLeftWh = scratch.topUpPowerLeftWh;
+      givenW.fill(0);
+      for (let d = 0; d < D; d++) powerLeftWh[d] = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
+      for (const levelH of topUpLevelsH) {
+        for (let d = 0; d < D; d++) {
+          if (k.deviceTopsUp[d] !== 1) continue;
+          const cap = k.deviceCapWh[d] ?? 0;
+          const heldWh = devE[d] ?? 0;
+          if (cap - heldWh <= tiny) continue;
+          // A device that reaches a shared store is filled, from every store, only up to what it will still use for
+          // the rest of the trip; any other device to full.
+          const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+          const fullWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
+          const targetWh = levelH === Infinity ? fullWh : Math.min(fullWh, levelH * demandWhPerH);
+          let wantWh = targetWh - heldWh;
+          if (wantWh <= tiny) continue;
+          let powerWh = powerLeftWh[d] ?? 0;
+          if (powerWh <= tiny) continue;
+          rateW.fill(0);
+          for (let group = 0; group < 2; group++) {
+            for (let s = 0; s < S && wantWh > tiny && powerWh > tiny; s++) {
+              if ((k.storeShared[s] ?? 0) !== group) continue;
+              const x = efficientRateW(d, s, givenW[s * D + d] ?? 0, wantWh, powerWh);
+              rateW[s] = x;
+              wantWh -= x * dt;
+              powerWh -= x * dt;
+            }
+          }
+          let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
+          for (let group = 0; group < 2; group++) {
+            for (let s = 0; s < S && shortWh > tiny && powerWh > tiny; s++) {
+              if ((k.storeShared[s] ?? 0) !== group) continue;
+              const fromW = (givenW[s * D + d] ?? 0) + (rateW[s] ?? 0);
+              const extraW = fasterRateW(d, s, givenW[s * D + d] ?? 0, fromW, Math.min(shortWh, powerWh)) - fromW;
+              if (!(extraW > 0)) continue;
+              rateW[s] = (rateW[s] ?? 0) + extraW;
+              shortWh -= extraW * dt;
+              powerWh -= extraW * dt;
+            }
+          }
+          powerLeftWh[d] = powerWh;
+          for (let s = 0; s < S; s++) {
+            const x = rateW[s] ?? 0;
+            if (!(x > 0)) continue;
+            const from = givenW[s * D + d] ?? 0;
+            topUp(d, s, from, from + x);
+            givenW[s * D + d] = from + x;
           }
         }
-        let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
-        for (let group = 0; group < 2; group++) {
-          for (let s = 0; s < S && shortWh > tiny && powerLeftWh > tiny; s++) {
-            if ((k.storeShared[s] ?? 0) !== group) continue;
-            const extraW = fasterRateW(d, s, rateW[s] ?? 0, Math.min(shortWh, powerLeftWh)) - (rateW[s] ?? 0);
-            if (!(extraW > 0)) continue;
-            rateW[s] = (rateW[s] ?? 0) + extraW;
-            shortWh -= extraW * dt;
-            powerLeftWh -= extraW * dt;
-          }
-        }
-        for (let s = 0; s < S; s++) if ((rateW[s] ?? 0) > 0) topUp(d, s, rateW[s] ?? 0);
       }
     }
 
@@ -426,7 +468,7 @@ export function runSky(
    * First pass of a top-up: the rate (W of battery gain) store s gives device d in this step along its most efficient
    * path (the hull's first point), within `wantWh` and `powerLeftWh` (battery gain) and what it holds above its reserve.
    */
-  function efficientRateW(d: number, s: number, wantWh: number, powerLeftWh: number): number {
+  function efficientRateW(d: number, s: number, fromW: number, wantWh: number, powerLeftWh: number): number {
     const idx = s * D + d;
     if ((k.hullCount[idx] ?? 0) === 0) return 0;
     const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -434,7 +476,7 @@ export function runSky(
     const off = k.hullOffset[idx] ?? 0;
     const g0 = k.hullGainW[off] ?? 0;
     const c0 = k.hullDrawW[off] ?? 0;
-    const x = Math.min(g0, wantWh / dt, powerLeftWh / dt, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
+    const x = Math.min(g0 - fromW, wantWh / dt, powerLeftWh / dt, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
     return x > 0 ? x : 0;
   }
 
@@ -442,7 +484,7 @@ export function runSky(
    * Second pass: the rate store s gives device d once sped up from `fromW` by at most `extraWh` of battery gain in this
    * step, along its hull and within what it holds above its reserve (the whole step's draw at the new rate, never more).
    */
-  function fasterRateW(d: number, s: number, fromW: number, extraWh: number): number {
+  function fasterRateW(d: number, s: number, givenW: number, fromW: number, extraWh: number): number {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
     if (n < 2) return fromW;
@@ -450,7 +492,9 @@ export function runSky(
     if (avail <= tiny) return fromW;
     const off = k.hullOffset[idx] ?? 0;
     let x = Math.min(k.hullGainW[off + n - 1] ?? 0, fromW + extraWh / dt);
-    if (hullDrawAt(k, off, n, x) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt);
+    // What the rate already given in this step drew is gone from the store: the step's draw above it must fit.
+    const drawnW = hullDrawAt(k, off, n, givenW);
+    if ((hullDrawAt(k, off, n, x) - drawnW) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt + drawnW);
     return Math.max(fromW, x);
   }
 
@@ -458,13 +502,39 @@ export function runSky(
    * Tops device d up from store s in step i at rate x (W at the battery, on the hull, already within the store's
    * energy above its reserve and the device's charge power); returns the Wh it gained.
    */
-  function topUp(d: number, s: number, x: number): number {
+  function topUp(d: number, s: number, fromW: number, toW: number): number {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
-    if (n === 0 || !(x > 0)) return 0;
+    if (n === 0 || !(toW > fromW)) return 0;
     const off = k.hullOffset[idx] ?? 0;
     const etaDev = k.deviceChargeEff[d] ?? 1;
-    // Split the rate between the two hull points around x, each with its own efficiencies.
+    hullFlowsAt(off, n, etaDev, fromW, flowsFrom);
+    hullFlowsAt(off, n, etaDev, toW, flowsTo);
+    const gain = (toW - fromW) * dt;
+    const draw = (flowsTo.drawW - flowsFrom.drawW) * dt;
+    E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
+    devE[d] = (devE[d] ?? 0) + gain;
+    if (ledger) {
+      const row = dayIndexNow * columnCount;
+      ledger[row + C.converterLossWh] =
+        (ledger[row + C.converterLossWh] ?? 0) + (flowsTo.converterLossW - flowsFrom.converterLossW) * dt;
+      ledger[row + C.deviceChargeLossWh] =
+        (ledger[row + C.deviceChargeLossWh] ?? 0) + (flowsTo.deviceLossW - flowsFrom.deviceLossW) * dt;
+      ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
+    }
+    if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);
+    return gain;
+  }
+
+  /**
+   * The flows of a store–device hull at gain rate x (W at the battery): the rate split between the two hull points
+   * around x, each with its own efficiencies — the draw, the converter's loss and the device's charging loss (W).
+   */
+  function hullFlowsAt(off: number, n: number, etaDev: number, x: number, out: HullFlows): void {
+    out.drawW = 0;
+    out.converterLossW = 0;
+    out.deviceLossW = 0;
+    if (!(x > 0)) return;
     let seg = 0;
     while (seg < n - 1 && (k.hullGainW[off + seg] ?? 0) < x) seg++;
     const g1 = k.hullGainW[off + seg] ?? 0;
@@ -472,23 +542,13 @@ export function runSky(
     const g0 = seg > 0 ? (k.hullGainW[off + seg - 1] ?? 0) : 0;
     const e0 = seg > 0 ? (k.hullPathEff[off + seg - 1] ?? 1) : 1;
     const f1 = seg > 0 ? (x - g0) / (g1 - g0) : x / g1;
-    const gain1Wh = f1 * g1 * dt;
-    const gain0Wh = seg > 0 ? (1 - f1) * g0 * dt : 0;
-    const gain = gain0Wh + gain1Wh;
-    const draw0 = gain0Wh / (e0 * etaDev);
-    const draw1 = gain1Wh / (e1 * etaDev);
-    const draw = draw0 + draw1;
-    E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
-    devE[d] = (devE[d] ?? 0) + gain;
-    if (ledger) {
-      const row = dayIndexNow * columnCount;
-      ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw0 * (1 - e0) + draw1 * (1 - e1);
-      ledger[row + C.deviceChargeLossWh] =
-        (ledger[row + C.deviceChargeLossWh] ?? 0) + draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
-      ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
-    }
-    if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);
-    return gain;
+    const gain1W = f1 * g1;
+    const gain0W = seg > 0 ? (1 - f1) * g0 : 0;
+    const draw0 = gain0W / (e0 * etaDev);
+    const draw1 = gain1W / (e1 * etaDev);
+    out.drawW = draw0 + draw1;
+    out.converterLossW = draw0 * (1 - e0) + draw1 * (1 - e1);
+    out.deviceLossW = draw0 * e0 * (1 - etaDev) + draw1 * e1 * (1 - etaDev);
   }
 
   /** Device d runs live from its packs for `lackWh` of use in step i; returns the Wh delivered. */

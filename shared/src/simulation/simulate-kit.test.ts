@@ -271,3 +271,57 @@ describe('two devices sharing a bank (hand calculation)', () => {
     expect(result.verdict.status).toBe('keeps-up');
   });
 });
+
+describe('top-ups go to the device holding the fewest hours of its use first', () => {
+  // Synthetic trip, 3 nights, no sun: walk 08–16, camp 16–08. One small bank both phones reach through one lead:
+  // 1,000 mAh × 3.7 V × 0.85 = 3.145 Wh usable, no reserve. "Light" (first in the trip's order): 15 Wh, uses 7.5 Wh a
+  // day (0.3125 Wh/h); "hungry" (second): 15 Wh, 13.5 Wh a day (0.5625 Wh/h). At the first camp step (16:00), after
+  // 8 h of walking and that hour's use: light holds 15 − 9 × 0.3125 = 12.19 Wh (39 h of its use), hungry 15 − 9 ×
+  // 0.5625 = 9.94 Wh (17.7 h). Both want more (each will use more than 15 Wh before the trip ends), but the bank
+  // cannot give both: the hungry phone, holding fewer hours, is topped up first and takes the whole bank (3.145 ×
+  // 0.85 = 2.67 Wh into its battery, within its 10 W charge power in the first hour); the light one gets nothing.
+  // Filled in the trip's order instead, the light phone would have taken 2.8 Wh of it first.
+  const solar = syntheticTripSolar({ nights: 3, peakWm2: 0 });
+  const devices: TripDevice[] = [
+    { deviceId: 'light', spec: testPhone(0.5) },
+    { deviceId: 'hungry', spec: testPhone(0.9) },
+  ];
+  const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah: 1000 }) }, phoneLead];
+  const result = simulateKit({ solar, kit, devices, reserveShare: 0 });
+  const toppedUpWh = (deviceId: string): number =>
+    result.schedule
+      .filter((s) => s.kind === 'top-up' && s.toId === deviceId && s.dayIndex === 0)
+      .reduce((sum, s) => sum + s.energyWh, 0);
+
+  it('the hungry phone, second in the order, takes the bank; the light one nothing', () => {
+    expect(toppedUpWh('hungry')).toBeCloseTo(3.145 * 0.85, 6);
+    expect(toppedUpWh('light')).toBe(0);
+  });
+});
+
+describe('the charging schedule', () => {
+  it('lists one session per store, device and run of camp hours, however many top-up rounds a step takes', () => {
+    // Two phones on one bank: their top-ups go in rounds by hours held, often several in one step.
+    const solar = syntheticTripSolar({ nights: 3, peakWm2: 0 });
+    const devices: TripDevice[] = [
+      { deviceId: 'light', spec: testPhone(0.5) },
+      { deviceId: 'hungry', spec: testPhone(0.9) },
+    ];
+    const result = simulateKit({ solar, kit: [bankLine(), phoneLead], devices, reserveShare: 0 });
+    const sessions = result.schedule.filter((s) => s.kind === 'top-up');
+    expect(sessions.length).toBeGreaterThan(0);
+    const keys = sessions.map((s) => `${s.fromId}|${s.toId}|${s.startUtcMs}`);
+    expect(new Set(keys).size).toBe(keys.length);
+    for (const s of sessions) {
+      const overlapping = sessions.filter(
+        (o) =>
+          o !== s &&
+          o.fromId === s.fromId &&
+          o.toId === s.toId &&
+          o.startUtcMs < s.endUtcMs &&
+          s.startUtcMs < o.endUtcMs,
+      );
+      expect(overlapping).toEqual([]);
+    }
+  });
+});

@@ -81,6 +81,14 @@ interface CoverRow {
   need(lb: Uint8Array, ub: Uint8Array, packed: Packed): number;
   /** The ways to meet the row from lb (only called when lb breaks it). Single-item ways are kept apart by `apart`. */
   raises(lb: Uint8Array, ub: Uint8Array): Raise[];
+  /** An energy cut's row: its terms, and the Wh its last `need` found short (after the groups, counted optimistically). */
+  energy?: EnergyTerms;
+}
+
+interface EnergyTerms {
+  itemWh: Float64Array;
+  targetWh: number;
+  shortWh: number;
 }
 
 /** The cuts of one master solve (the search's cuts only grow between solves of one `MasterSearch`). */
@@ -304,6 +312,9 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         if (!look(born)) return false;
       }
       if (node.pending) for (const born of node.pending) if (!look(born)) return false;
+      const surrogateG = surrogateNeedG(stillBroken, lb, ub, massG);
+      if (surrogateG === Infinity) return false;
+      if (surrogateG > needG && broken) needG = surrogateG;
       node.seen = newest;
       node.checked = true;
       node.pending = stillBroken.length > 0 ? stillBroken : null;
@@ -687,7 +698,10 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
         if (alternativePresent(alt, counts)) wh += cut.groupWh[g] ?? 0;
     return wh;
   };
+  const terms: EnergyTerms = { itemWh: cut.itemWh, targetWh: target, shortWh: 0 };
+  let table: Float64Array | undefined;
   return {
+    energy: terms,
     need(lb, ub, packed) {
       let shortWh = target - slack - heldWh(lb, packed, target - slack);
       if (shortWh <= 0) return -1;
@@ -696,6 +710,7 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
         for (const alt of pre.groups[g]?.requiresAnyOf ?? [])
           if (!alternativePresent(alt, lb) && alternativeGrams(alt, lb, ub, massG) < Infinity)
             shortWh -= cut.groupWh[g] ?? 0;
+      terms.shortWh = shortWh;
       if (shortWh <= 0) return 0;
       let grams = 0;
       for (const i of items) {
@@ -705,7 +720,10 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
         const usedWh = Math.min(moreWh, shortWh);
         grams += (usedWh * (massG[i] ?? 0)) / w;
         shortWh -= usedWh;
-        if (shortWh <= 0) return grams;
+        if (shortWh <= 0) {
+          table ??= wholeUnitTable(cut, pre, massG);
+          return Math.max(grams, leastGramsFor(table, terms.shortWh));
+        }
       }
       return Infinity;
     },
@@ -720,4 +738,127 @@ function energyRow(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number
       return ways;
     },
   };
+}
+
+/**
+ * The most Wh towards an energy cut that whole units of its items give for each weight in grams, from an empty kit, up
+ * to the grams that meet the cut whole (a bounded knapsack by dynamic programming). A node's floor adds at most that
+ * much for the same grams — each item's term min(w·n, L) gains less from a count already packed than from none — so the
+ * least grams whose Wh reach what the floor is short bound what any kit in the node adds. Unlike the fractional bound
+ * it knows items come whole.
+ * Source: the bounded knapsack recursion (S. Martello and P. Toth, Knapsack Problems, Wiley 1990, ch. 3).
+ */
+function wholeUnitTable(cut: EnergyCut, pre: PresolvedProblem, massG: readonly number[]): Float64Array {
+  const target = cut.lowerWh;
+  const terms: { w: number; g: number; owned: number }[] = [];
+  let freeWh = 0;
+  cut.itemWh.forEach((w, i) => {
+    if (!(w > 0)) return;
+    const owned = pre.items[i]?.candidate.ownedCount ?? 0;
+    const g = massG[i] ?? 0;
+    if (g === 0) freeWh += Math.min(w * owned, target);
+    else if (owned > 0) terms.push({ w, g, owned });
+  });
+  // Enough grams to meet the cut whole: units taken best Wh per gram first until they do.
+  terms.sort((a, b) => a.g / Math.min(a.w, target) - b.g / Math.min(b.w, target));
+  let spanG = 0;
+  let wh = freeWh;
+  for (const t of terms)
+    for (let k = 1; k <= t.owned && wh < target; k++) {
+      wh += Math.min(t.w * k, target) - Math.min(t.w * (k - 1), target);
+      spanG += t.g;
+    }
+  const most = new Float64Array(spanG + 1).fill(freeWh);
+  for (const t of terms)
+    for (let g = spanG; g >= t.g; g--) {
+      let best = most[g] as number;
+      for (let k = 1; k <= t.owned && k * t.g <= g; k++) {
+        const v = (most[g - k * t.g] as number) + Math.min(t.w * k, target);
+        if (v > best) best = v;
+      }
+      most[g] = best;
+    }
+  return most;
+}
+
+/** The least grams whose Wh in `table` reach `shortWh` (the table's span when none does: it meets the whole cut). */
+function leastGramsFor(table: Float64Array, shortWh: number): number {
+  const needWh = shortWh * (1 - 1e-9);
+  let lo = 0;
+  let hi = table.length - 1;
+  if ((table[hi] as number) < needWh) return hi;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if ((table[mid] as number) >= needWh) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
+}
+
+/** A copy of `a` twice as long. */
+function grow(a: Float64Array): Float64Array {
+  const b = new Float64Array(2 * a.length);
+  b.set(a);
+  return b;
+}
+
+/** Scratch buffers for `surrogateNeedG`. */
+let unitRatio: Float64Array = new Float64Array(256);
+let unitWh: Float64Array = new Float64Array(256);
+let unitG: Float64Array = new Float64Array(256);
+const unitOrder: number[] = [];
+
+/**
+ * A lower bound on the grams a node's floor must add to meet all its broken energy rows at once: the rows summed with
+ * each divided by what it is short (a surrogate row; each item's part in a row capped at that shortfall, which keeps the
+ * row as it was), then a fractional knapsack over the items' further units (each unit's part falls with the count, so
+ * taking units by Wh per gram is the relaxation's optimum). −1 with fewer than two such rows.
+ * Source: surrogate constraints (F. Glover, Surrogate constraints, Operations Research 16(4), 1968).
+ */
+function surrogateNeedG(broken: readonly BornRow[], lb: Uint8Array, ub: Uint8Array, massG: readonly number[]): number {
+  const rows: EnergyTerms[] = [];
+  for (const born of broken) if (born.row.energy && born.row.energy.shortWh > 0) rows.push(born.row.energy);
+  if (rows.length < 2) return -1;
+  const n = lb.length;
+  let units = 0;
+  for (let i = 0; i < n; i++) {
+    const from = lb[i] as number;
+    const to = ub[i] as number;
+    if (to <= from) continue;
+    const g = massG[i] as number;
+    let before = 0;
+    for (let c = from + 1; c <= to; c++) {
+      let part = 0;
+      for (const row of rows) {
+        const w = row.itemWh[i] as number;
+        if (!(w > 0)) continue;
+        const gain = Math.min(w * c, row.targetWh) - Math.min(w * from, row.targetWh);
+        part += Math.min(gain, row.shortWh) / row.shortWh;
+      }
+      const wh = part - before;
+      before = part;
+      if (!(wh > 0)) break;
+      if (units === unitWh.length) {
+        unitWh = grow(unitWh);
+        unitG = grow(unitG);
+        unitRatio = grow(unitRatio);
+      }
+      unitWh[units] = wh;
+      unitG[units] = g;
+      unitRatio[units] = g / wh;
+      units++;
+    }
+  }
+  unitOrder.length = units;
+  for (let u = 0; u < units; u++) unitOrder[u] = u;
+  unitOrder.sort((a, b) => (unitRatio[a] as number) - (unitRatio[b] as number));
+  let short = rows.length * (1 - 1e-9);
+  let grams = 0;
+  for (const u of unitOrder) {
+    const wh = unitWh[u] as number;
+    if (wh >= short) return grams + (short * (unitG[u] as number)) / wh;
+    grams += unitG[u] as number;
+    short -= wh;
+  }
+  return Infinity;
 }

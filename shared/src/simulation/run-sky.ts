@@ -78,6 +78,8 @@ export interface SkyScratch {
   topUpRateW: Float64Array;
   /** Per store × device: the rate (W of battery gain) already given in this step's earlier rounds. */
   topUpGivenW: Float64Array;
+  /** Per device: its target in this step (full, or its use left; 0 for a device that is not topped up), Wh. */
+  topUpFullWh: Float64Array;
   /** Per device: its charge power left in this step, as battery gain (Wh). */
   topUpPowerLeftWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
@@ -89,8 +91,9 @@ export interface SkyScratch {
  * the trip's order) up to that many hours, the last to its full target. The device that holds the fewest hours is
  * filled first, so when the stores run short the devices share what is left and every battery serves as a buffer,
  * instead of the first devices staying full while a later one — often the radio — runs dry (common practice: charge
- * whatever is lowest first). Hours of the device's mean hourly use (its day's use / 24). The rounds step by about a
- * third up to three days of use: finer rounds share a short camp more evenly, each costs a pass over the devices.
+ * whatever is lowest first). Hours of the device's mean hourly use (its day's use / 24), stepping by about a third up
+ * to three days of use. Coarser rounds are cheaper (4, 8, 16, 24, 48 h: the simulation about 1.4× faster) but share a
+ * camp less evenly, and the soak found a store higher with more demand on a kit that lasts (README, Dispatch).
  */
 const topUpLevelsH = [2, 4, 6, 8, 12, 16, 24, 36, 48, 72, Infinity];
 
@@ -116,6 +119,7 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
     topUpGivenW: new Float64Array(k.storeCount * k.deviceCount),
+    topUpFullWh: new Float64Array(k.deviceCount),
     topUpPowerLeftWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
   };
@@ -395,19 +399,38 @@ export function runSky(
       const rateW = scratch.topUpRateW;
       const givenW = scratch.topUpGivenW;
       const powerLeftWh = scratch.topUpPowerLeftWh;
+      const fullWh = scratch.topUpFullWh;
       givenW.fill(0);
-      for (let d = 0; d < D; d++) powerLeftWh[d] = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
+      // Each device's target for the step (full, or its use left), and the fewest hours held among the devices below
+      // theirs: rounds at or below those hours give nobody anything.
+      let fewestH = Infinity;
+      let anyWants = false;
+      for (let d = 0; d < D; d++) {
+        powerLeftWh[d] = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
+        fullWh[d] = 0;
+        if (k.deviceTopsUp[d] !== 1) continue;
+        const cap = k.deviceCapWh[d] ?? 0;
+        const heldWh = devE[d] ?? 0;
+        if (cap - heldWh <= tiny) continue;
+        // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
+        // rest of the trip; any other device to full.
+        const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+        const targetWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
+        fullWh[d] = targetWh;
+        if (targetWh - heldWh <= tiny) continue;
+        anyWants = true;
+        if (demandWhPerH > 0) fewestH = Math.min(fewestH, heldWh / demandWhPerH);
+      }
       for (const levelH of topUpLevelsH) {
+        if (!anyWants) break;
+        if (levelH !== Infinity && levelH <= fewestH) continue;
+        let storesWh = 0;
+        for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
+        if (storesWh <= tiny) break;
         for (let d = 0; d < D; d++) {
-          if (k.deviceTopsUp[d] !== 1) continue;
-          const cap = k.deviceCapWh[d] ?? 0;
           const heldWh = devE[d] ?? 0;
-          if (cap - heldWh <= tiny) continue;
-          // A device that reaches a shared store is filled, from every store, only up to what it will still use for
-          // the rest of the trip; any other device to full.
           const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-          const fullWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
-          const targetWh = levelH === Infinity ? fullWh : Math.min(fullWh, levelH * demandWhPerH);
+          const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
           let wantWh = targetWh - heldWh;
           if (wantWh <= tiny) continue;
           let powerWh = powerLeftWh[d] ?? 0;

@@ -802,9 +802,9 @@ function grow(a: Float64Array): Float64Array {
   return b;
 }
 
-/** Scratch buffers for `surrogateNeedG`. */
-let unitRatio: Float64Array = new Float64Array(256);
-let unitWh: Float64Array = new Float64Array(256);
+/** Scratch buffers for `surrogateNeedG`: per further unit, its share of the surrogate row, grams, grams per share. */
+let unitGPerShare: Float64Array = new Float64Array(256);
+let unitShare: Float64Array = new Float64Array(256);
 let unitG: Float64Array = new Float64Array(256);
 const unitOrder: number[] = [];
 
@@ -835,30 +835,31 @@ function surrogateNeedG(broken: readonly BornRow[], lb: Uint8Array, ub: Uint8Arr
         const gain = Math.min(w * c, row.targetWh) - Math.min(w * from, row.targetWh);
         part += Math.min(gain, row.shortWh) / row.shortWh;
       }
-      const wh = part - before;
+      const share = part - before;
       before = part;
-      if (!(wh > 0)) break;
-      if (units === unitWh.length) {
-        unitWh = grow(unitWh);
+      if (!(share > 0)) break;
+      if (units === unitShare.length) {
+        unitShare = grow(unitShare);
         unitG = grow(unitG);
-        unitRatio = grow(unitRatio);
+        unitGPerShare = grow(unitGPerShare);
       }
-      unitWh[units] = wh;
+      unitShare[units] = share;
       unitG[units] = g;
-      unitRatio[units] = g / wh;
+      unitGPerShare[units] = g / share;
       units++;
     }
   }
   unitOrder.length = units;
   for (let u = 0; u < units; u++) unitOrder[u] = u;
-  unitOrder.sort((a, b) => (unitRatio[a] as number) - (unitRatio[b] as number));
-  let short = rows.length * (1 - 1e-9);
+  unitOrder.sort((a, b) => (unitGPerShare[a] as number) - (unitGPerShare[b] as number));
+  // Each row, divided by what it is short, asks for a share of 1.
+  let shortShare = rows.length * (1 - 1e-9);
   let grams = 0;
   for (const u of unitOrder) {
-    const wh = unitWh[u] as number;
-    if (wh >= short) return grams + (short * (unitG[u] as number)) / wh;
+    const share = unitShare[u] as number;
+    if (share >= shortShare) return grams + (shortShare * (unitG[u] as number)) / share;
     grams += unitG[u] as number;
-    short -= wh;
+    shortShare -= share;
   }
   return Infinity;
 }

@@ -421,52 +421,52 @@ export function runSky(
         anyWants = true;
         if (demandWhPerH > 0) fewestH = Math.min(fewestH, heldWh / demandWhPerH);
       }
-      for (const levelH of topUpLevelsH) {
-        if (!anyWants) break;
-        if (levelH !== Infinity && levelH <= fewestH) continue;
-        let storesWh = 0;
-        for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
-        if (storesWh <= tiny) break;
-        for (let d = 0; d < D; d++) {
-          const heldWh = devE[d] ?? 0;
-          const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-          const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
-          let wantWh = targetWh - heldWh;
-          if (wantWh <= tiny) continue;
-          let powerWh = powerLeftWh[d] ?? 0;
-          if (powerWh <= tiny) continue;
-          rateW.fill(0);
-          for (let group = 0; group < 2; group++) {
-            for (let s = 0; s < S && wantWh > tiny && powerWh > tiny; s++) {
-              if ((k.storeShared[s] ?? 0) !== group) continue;
-              const x = efficientRateW(d, s, givenW[s * D + d] ?? 0, wantWh, powerWh);
-              rateW[s] = x;
-              wantWh -= x * dt;
-              powerWh -= x * dt;
+      if (anyWants)
+        for (const levelH of topUpLevelsH) {
+          if (levelH !== Infinity && levelH <= fewestH) continue;
+          let storesWh = 0;
+          for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
+          if (storesWh <= tiny) break;
+          for (let d = 0; d < D; d++) {
+            const heldWh = devE[d] ?? 0;
+            const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+            const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
+            let wantWh = targetWh - heldWh;
+            if (wantWh <= tiny) continue;
+            let powerWh = powerLeftWh[d] ?? 0;
+            if (powerWh <= tiny) continue;
+            rateW.fill(0);
+            for (let group = 0; group < 2; group++) {
+              for (let s = 0; s < S && wantWh > tiny && powerWh > tiny; s++) {
+                if ((k.storeShared[s] ?? 0) !== group) continue;
+                const x = efficientRateW(d, s, givenW[s * D + d] ?? 0, wantWh, powerWh);
+                rateW[s] = x;
+                wantWh -= x * dt;
+                powerWh -= x * dt;
+              }
             }
-          }
-          let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
-          for (let group = 0; group < 2; group++) {
-            for (let s = 0; s < S && shortWh > tiny && powerWh > tiny; s++) {
-              if ((k.storeShared[s] ?? 0) !== group) continue;
-              const fromW = (givenW[s * D + d] ?? 0) + (rateW[s] ?? 0);
-              const extraW = fasterRateW(d, s, givenW[s * D + d] ?? 0, fromW, Math.min(shortWh, powerWh)) - fromW;
-              if (!(extraW > 0)) continue;
-              rateW[s] = (rateW[s] ?? 0) + extraW;
-              shortWh -= extraW * dt;
-              powerWh -= extraW * dt;
+            let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
+            for (let group = 0; group < 2; group++) {
+              for (let s = 0; s < S && shortWh > tiny && powerWh > tiny; s++) {
+                if ((k.storeShared[s] ?? 0) !== group) continue;
+                const fromW = (givenW[s * D + d] ?? 0) + (rateW[s] ?? 0);
+                const extraW = fasterRateW(d, s, givenW[s * D + d] ?? 0, fromW, Math.min(shortWh, powerWh)) - fromW;
+                if (!(extraW > 0)) continue;
+                rateW[s] = (rateW[s] ?? 0) + extraW;
+                shortWh -= extraW * dt;
+                powerWh -= extraW * dt;
+              }
             }
-          }
-          powerLeftWh[d] = powerWh;
-          for (let s = 0; s < S; s++) {
-            const x = rateW[s] ?? 0;
-            if (!(x > 0)) continue;
-            const from = givenW[s * D + d] ?? 0;
-            topUp(d, s, from, from + x);
-            givenW[s * D + d] = from + x;
+            powerLeftWh[d] = powerWh;
+            for (let s = 0; s < S; s++) {
+              const x = rateW[s] ?? 0;
+              if (!(x > 0)) continue;
+              const from = givenW[s * D + d] ?? 0;
+              topUp(d, s, from, from + x);
+              givenW[s * D + d] = from + x;
+            }
           }
         }
-      }
     }
 
     const t = totals();
@@ -488,8 +488,9 @@ export function runSky(
   return finish();
 
   /**
-   * First pass of a top-up: the rate (W of battery gain) store s gives device d in this step along its most efficient
-   * path (the hull's first point), within `wantWh` and `powerLeftWh` (battery gain) and what it holds above its reserve.
+   * First pass of a top-up: the further rate (W of battery gain) store s gives device d in this round along its most
+   * efficient path (the hull's first point, of which earlier rounds gave `fromW`), within `wantWh` and `powerLeftWh`
+   * (battery gain) and what it holds above its reserve.
    */
   function efficientRateW(d: number, s: number, fromW: number, wantWh: number, powerLeftWh: number): number {
     const idx = s * D + d;
@@ -505,7 +506,8 @@ export function runSky(
 
   /**
    * Second pass: the rate store s gives device d once sped up from `fromW` by at most `extraWh` of battery gain in this
-   * step, along its hull and within what it holds above its reserve (the whole step's draw at the new rate, never more).
+   * step, along its hull and within what it holds above its reserve (the step's draw at the new rate above what the
+   * rate `givenW` of earlier rounds already drew, never more).
    */
   function fasterRateW(d: number, s: number, givenW: number, fromW: number, extraWh: number): number {
     const idx = s * D + d;

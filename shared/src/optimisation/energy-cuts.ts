@@ -1,6 +1,6 @@
 import { dayBoundsOf, dot, viewScalesOf, type BoundVector } from './day-bounds.js';
 import { groupBigM } from './daily-model.js';
-import { alternativePresent, type ActiveGroup, type PresolvedProblem } from './presolve.js';
+import { alternativePresent, type ActiveGroup, type ActiveItem, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts } from './types.js';
 
 /** Wh a reserve row may miss by and still count as met (float noise of the forward pass). */
@@ -93,8 +93,13 @@ export function evaluateDailyModel(
   const itemCount = pre.items.length;
   const groupCount = pre.groups.length;
   const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
-  // Kits hold few of the locker's items: dot products run over the packed ones only.
-  const packed = Int32Array.from(counts.flatMap((n, i) => (n > 0 ? [i] : [])));
+  // Every bound vector is zero but at stores and panels, and a kit holds few of them: dot products run over the packed
+  // stores and panels only. A kit grown by lifting holds every lead and converter the locker has: on the 50-item bench
+  // locker (seed 50) this, with the roles read once per items array, took the daily checks from 46 to 19 ms a plan.
+  const { bounded, capacity } = itemRoles(pre);
+  const packedList: number[] = [];
+  for (let i = 0; i < itemCount; i++) if ((counts[i] as number) > 0 && bounded[i]) packedList.push(i);
+  const packed = Int32Array.from(packedList);
   const packedCounts = Float64Array.from(packed, (i) => counts[i] ?? 0);
   // A view's checks read its base's bounds with the view's factors in the counts (no vector built); only the pass that
   // builds a cut needs the view's own vectors.
@@ -117,10 +122,6 @@ export function evaluateDailyModel(
   const groupOn = pre.groups.map(
     (g) => !g.hasRequirement || g.requiresAnyOf.some((alt) => alternativePresent(alt, counts)),
   );
-  const capacity = new Float64Array(itemCount);
-  pre.items.forEach((it, i) => {
-    if (it.store) capacity[i] = (1 - c.reserveShare) * it.store.usableWh;
-  });
   const spareCapacityWh = value(capacity);
   const timing = c.timing ?? 'overlapping';
   const boundsOf = dayBoundsOf(pre);
@@ -264,6 +265,32 @@ export function evaluateDailyModel(
     }
   }
   return { shortfalls, cuts, worstMarginWh: worstMarginWh === Infinity ? spareCapacityWh : worstMarginWh };
+}
+
+/** What the forward pass reads of an items array: which items a bound vector can weigh, and each store's spare Wh. */
+interface ItemRoles {
+  /** Stores and panels: every bound vector of `dayBoundsOf` is zero elsewhere. */
+  bounded: boolean[];
+  /** (1 − reserve) × usable Wh per store, 0 elsewhere. */
+  capacity: Float64Array;
+  reserveShare: number;
+}
+
+/** Per items array (a problem's views share their base's or one per store set, see `kit-views.ts`). */
+const rolesCache = new WeakMap<readonly ActiveItem[], ItemRoles>();
+
+function itemRoles(pre: PresolvedProblem): ItemRoles {
+  const reserveShare = pre.problem.coefficients.reserveShare;
+  let hit = rolesCache.get(pre.items);
+  if (!hit || hit.reserveShare !== reserveShare) {
+    hit = {
+      bounded: pre.items.map((it) => it.store !== undefined || it.panel !== undefined),
+      capacity: Float64Array.from(pre.items, (it) => (it.store ? (1 - reserveShare) * it.store.usableWh : 0)),
+      reserveShare,
+    };
+    rolesCache.set(pre.items, hit);
+  }
+  return hit;
 }
 
 /**

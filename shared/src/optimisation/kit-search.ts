@@ -29,6 +29,8 @@ export const tieBreakCandidates = 3;
 const outOfTime = 'master out of time';
 /** The reason when the master's search tree outgrows `maxOpenNodes` (the search stops; its best kit is shaved). */
 const masterTooLarge = 'the model search grew too large for memory';
+/** Rejected proposals a search keeps for the repair after a stop (each repair costs about twenty simulations). */
+export const keptProposals = 6;
 /** Default timeout of one MILP solve, ms. */
 export const defaultSolverTimeoutMs = 10_000;
 
@@ -71,6 +73,12 @@ export interface KitSearch {
   readonly rejectedKits: readonly KitCounts[];
   /** The lightest kit the judge has accepted so far, in any call (a stopped search shaves it, not the whole locker). */
   readonly lightestAccepted: KitCounts | undefined;
+  /**
+   * The last kits the master proposed and the daily model, a view or the judge then rejected, oldest first (at most
+   * `keptProposals`): the lightest kits still in the running when a search stops, so a kit repaired from one of them
+   * is near the model's lower bound (`optimise.ts`).
+   */
+  readonly lastProposals: readonly KitCounts[];
 }
 
 /** Options of a search, beyond `OptimiseOptions`. */
@@ -137,6 +145,7 @@ export function createKitSearch(
   let lastRunsDry: RunsDry | undefined;
   let lightestAccepted: { counts: KitCounts; massG: number } | undefined;
   let roundsThisSearch = 0;
+  const lastProposals: KitCounts[] = [];
 
   const judge = (counts: KitCounts): JudgeVerdict => {
     const key = kitKey(counts);
@@ -411,6 +420,11 @@ export function createKitSearch(
     return best;
   };
 
+  const keepProposal = (counts: KitCounts): void => {
+    lastProposals.push(counts);
+    if (lastProposals.length > keptProposals) lastProposals.shift();
+  };
+
   /**
    * The decomposed search: the master (counts, paths, cuts, no energy rows) proposes the lightest kit; the daily
    * model's forward pass checks it and, when it runs short, adds its Benders cuts; a kit that passes goes to the judge,
@@ -455,10 +469,14 @@ export function createKitSearch(
       // model; meeting one means the solver erred.
       if (insideRejected(counts))
         return { kind: 'stopped', reason: 'solver-failed', lowerBoundG, detail: 'model proposed a cut-off kit' };
-      if (dailyRejects(counts)) continue;
+      if (dailyRejects(counts)) {
+        keepProposal(counts);
+        continue;
+      }
       const verdict = judge(counts);
       if (!verdict.feasible) {
         reject(counts, verdict, deadlineMs);
+        keepProposal(counts);
         continue;
       }
       const chosen = tieBreak ? tieBreakAmong(counts, massG, verdict, deadlineMs) : { counts, verdict };
@@ -488,6 +506,7 @@ export function createKitSearch(
     get lightestAccepted() {
       return lightestAccepted?.counts;
     },
+    lastProposals,
   };
 }
 

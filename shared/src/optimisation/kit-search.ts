@@ -47,8 +47,12 @@ export type SearchStep =
 export interface KitSearch {
   readonly problem: OptimisationProblem;
   readonly presolved: PresolvedProblem;
-  /** Next lightest kit the judge accepts and no cut excludes. `deadlineMs` is on the `now` clock. */
-  next(deadlineMs: number): SearchStep;
+  /**
+   * Next lightest kit the judge accepts and no cut excludes. `deadlineMs` is on the `now` clock. With `stuck`, once the
+   * judge has rejected `afterRejections` kits in this call and accepted none in the search, `allDry` is asked once;
+   * true ends the search as `exhausted` (the caller's proof that no kit can be accepted, e.g. the whole locker dry).
+   */
+  next(deadlineMs: number, stuck?: StuckCheck): SearchStep;
   /** Exclude `counts` and every kit that holds at least `counts`. */
   excludeSupersetsOf(counts: KitCounts): void;
   /** Exclude exactly `counts` (a kit rejected for a reason that more gear might mend, e.g. the party's split). */
@@ -79,6 +83,12 @@ export interface KitSearch {
    * is near the model's lower bound (`optimise.ts`).
    */
   readonly lastProposals: readonly KitCounts[];
+}
+
+/** When a search that accepts nothing asks whether any kit can be accepted at all (see `KitSearch.next`). */
+export interface StuckCheck {
+  afterRejections: number;
+  allDry: () => boolean;
 }
 
 /** Options of a search, beyond `OptimiseOptions`. */
@@ -145,6 +155,8 @@ export function createKitSearch(
   let lastRunsDry: RunsDry | undefined;
   let lightestAccepted: { counts: KitCounts; massG: number } | undefined;
   let roundsThisSearch = 0;
+  /** Kits the judge has rejected (simulated, not answered from the cache). */
+  let judgeRejections = 0;
   const lastProposals: KitCounts[] = [];
 
   const judge = (counts: KitCounts): JudgeVerdict => {
@@ -154,6 +166,7 @@ export function createKitSearch(
     const verdict = judgeKit(counts);
     cache.set(key, verdict);
     stats.judgedKits++;
+    if (!verdict.feasible) judgeRejections++;
     if (verdict.feasible) {
       const massG = kitMassG(counts, problem.candidates);
       if (!lightestAccepted || massG < lightestAccepted.massG) lightestAccepted = { counts: new Map(counts), massG };
@@ -431,10 +444,16 @@ export function createKitSearch(
    * whose rejection is cut off with its lifted down-set. The master's optimum is a lower bound on grams, so the first
    * kit the judge accepts is the lightest.
    */
-  const next = (deadlineMs: number): SearchStep => {
+  const next = (deadlineMs: number, stuck?: StuckCheck): SearchStep => {
     let lowerBoundG = 0;
     roundsThisSearch = 0;
+    const rejectionsBefore = judgeRejections;
+    let stuckAsked = false;
     for (;;) {
+      if (stuck && !stuckAsked && !lightestAccepted && judgeRejections - rejectionsBefore >= stuck.afterRejections) {
+        stuckAsked = true;
+        if (stuck.allDry()) return { kind: 'exhausted' };
+      }
       if (roundsThisSearch >= maxRounds) return { kind: 'stopped', reason: 'round-cap', lowerBoundG };
       const remainingMs = deadlineMs - now();
       if (remainingMs <= 0) return { kind: 'stopped', reason: 'time-budget', lowerBoundG };

@@ -1,16 +1,31 @@
 /** Worked cases checkable by hand (invented items; the arithmetic is in each comment). */
 import { describe, expect, it } from 'vitest';
-import { optimiseKit } from './optimise.js';
-import { syntheticJudge, syntheticProblem, type SyntheticWorld } from './synthetic-problem.js';
+import { lockerCheckAfterRejections, optimiseKit } from './optimise.js';
+import {
+  randomSyntheticWorld,
+  seededRandom,
+  syntheticJudge,
+  syntheticProblem,
+  type SyntheticWorld,
+} from './synthetic-problem.js';
+import type { KitCounts, KitJudge } from './types.js';
 
 const noSun = (reserveShare: number, alternatives: string[][]): SyntheticWorld => ({
-  dayCount: 3, skyShare: [[0, 0, 0]], frozenUntilHour: [0, 0, 0], sunScale: 1, demandScale: 1, demandHours: [18, 19],
-  chargeEfficiency: 0.9, reserveShare, panels: [],
+  dayCount: 3,
+  skyShare: [[0, 0, 0]],
+  frozenUntilHour: [0, 0, 0],
+  sunScale: 1,
+  demandScale: 1,
+  demandHours: [18, 19],
+  chargeEfficiency: 0.9,
+  reserveShare,
+  panels: [],
   banks: [
     { itemId: 'bank-20', massG: 150, ownedCount: 2, usableWh: 20, inputW: 10 },
     { itemId: 'bank-12', massG: 100, ownedCount: 3, usableWh: 12, inputW: 10 },
   ],
-  pathItems: [], devices: [{ deviceId: 'phone', demandWh: 10, alternatives }],
+  pathItems: [],
+  devices: [{ deviceId: 'phone', demandWh: 10, alternatives }],
 });
 
 describe('worked cases', () => {
@@ -32,5 +47,39 @@ describe('worked cases', () => {
     const a = optimiseKit(syntheticProblem(w), syntheticJudge(w));
     expect(a.status).toBe('nothing-feasible');
     if (a.status === 'nothing-feasible') expect(a.missingPaths.map((m) => m.needId)).toEqual(['phone']);
+  });
+});
+
+describe('the whole locker is judged only when the search accepts nothing', () => {
+  const isLocker = (kit: KitCounts, w: SyntheticWorld): boolean =>
+    [...w.banks, ...w.panels, ...w.pathItems].every((it) => (kit.get(it.itemId) ?? 0) === it.ownedCount);
+  it('a kit accepted at once: the locker (2 × 20 Wh + 3 × 12 Wh) is never simulated', () => {
+    const w = noSun(0, [[]]);
+    const judged: KitCounts[] = [];
+    const judge: KitJudge = (kit) => {
+      judged.push(new Map(kit));
+      return syntheticJudge(w)(kit);
+    };
+    const a = optimiseKit(syntheticProblem(w), judge);
+    expect(a.status).toBe('optimal');
+    expect(judged.length).toBeGreaterThan(0);
+    expect(judged.some((kit) => isLocker(kit, w))).toBe(false);
+  });
+  it(`a judge that rejects every kit: the locker is judged after ${lockerCheckAfterRejections} rejections and the answer is nothing feasible`, () => {
+    // A larger world, so that the search alone would take many rounds to run out of kits.
+    const w = randomSyntheticWorld(seededRandom(73_001), { itemTypes: 12, maxOwned: 2, dayCount: 4, skyCount: 2 });
+    let calls = 0;
+    let lockerAt = 0;
+    const dry: KitJudge = (kit) => {
+      calls++;
+      if (isLocker(kit, w) && lockerAt === 0) lockerAt = calls;
+      return { feasible: false, runsDry: { dayIndex: 1, deviceId: 'stub' } };
+    };
+    const a = optimiseKit(syntheticProblem(w), dry);
+    expect(a.status).toBe('nothing-feasible');
+    if (a.status === 'nothing-feasible') expect(a.runsDry?.deviceId).toBe('stub');
+    // Every call is a rejection: the locker comes right after the eighth, and the search stops there.
+    expect(lockerAt).toBe(lockerCheckAfterRejections + 1);
+    expect(calls).toBe(lockerAt);
   });
 });

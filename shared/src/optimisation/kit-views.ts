@@ -24,13 +24,35 @@ export interface KitView {
 /** Views sharing a store set share their items array (and so their memoised day bounds, see `dayBoundsOf`). */
 const itemsCache = new WeakMap<PresolvedProblem, Map<string, { items: ActiveItem[]; bestChargeEfficiency: number }>>();
 
+/** A need that carries per-device data, with its best alternative's efficiency. */
+interface DeviceNeed {
+  gainWh: readonly (readonly number[])[];
+  alternatives: readonly IndexedAlternative[];
+  eBest: number;
+}
+
+/** What `kitViews` reads of a problem whatever the kit: its device needs and its stores (once per problem). */
+const viewStatics = new WeakMap<PresolvedProblem, { needs: DeviceNeed[]; storeIndices: number[] }>();
+
 /** The needs that carry per-device data: a gain grid and an efficiency on every usable alternative. */
-function deviceNeeds(pre: PresolvedProblem) {
-  return pre.needs.flatMap((need) =>
-    need.need.gainWh && need.alternatives.length > 0 && need.alternatives.every((a) => a.efficiency !== undefined)
-      ? [{ gainWh: need.need.gainWh, alternatives: need.alternatives }]
-      : [],
-  );
+function staticsOf(pre: PresolvedProblem): { needs: DeviceNeed[]; storeIndices: number[] } {
+  let hit = viewStatics.get(pre);
+  if (!hit) {
+    const needs = pre.needs.flatMap((need) =>
+      need.need.gainWh && need.alternatives.length > 0 && need.alternatives.every((a) => a.efficiency !== undefined)
+        ? [
+            {
+              gainWh: need.need.gainWh,
+              alternatives: need.alternatives,
+              eBest: Math.max(...need.alternatives.map((a) => a.efficiency ?? 1)),
+            },
+          ]
+        : [],
+    );
+    hit = { needs, storeIndices: pre.items.flatMap((it, i) => (it.store ? [i] : [])) };
+    viewStatics.set(pre, hit);
+  }
+  return hit;
 }
 
 /**
@@ -58,12 +80,11 @@ function deviceNeeds(pre: PresolvedProblem) {
  * @example kitViews(pre, kit).length // 0 without per-device data
  */
 export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
-  const needs = deviceNeeds(pre);
+  const { needs, storeIndices } = staticsOf(pre);
   if (needs.length === 0) return [];
   const c = pre.problem.coefficients;
   const counts = pre.items.map((it) => Math.min(kit.get(it.candidate.itemId) ?? 0, it.candidate.ownedCount));
   const inKit = (i: number): boolean => (counts[i] ?? 0) > 0;
-  const storeIndices = pre.items.flatMap((it, i) => (it.store ? [i] : []));
   /** Items that keep an alternative the kit lacks out of a kit: one item it lacks, or all its stores. */
   const blockerOf = (a: IndexedAlternative): number[] => {
     const lacking = a.items.find(([i, n]) => (counts[i] ?? 0) < n);
@@ -71,7 +92,8 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     return a.anyOf.length > 0 ? [...a.anyOf] : [];
   };
 
-  const extraDemand = c.demandWh.map((row) => row.map(() => 0));
+  /** Devices drawing through a worse alternative than the locker's best: their demand is raised in the pooled view. */
+  const raised: { gainWh: readonly (readonly number[])[]; factor: number }[] = [];
   const pooledKey: string[] = [];
   const pooledBlockers = new Set<number>();
   const views: KitView[] = [];
@@ -79,18 +101,13 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     const held = need.alternatives.filter((a) => alternativePresent(a, counts));
     if (held.length === 0) continue;
     const eKit = Math.max(...held.map((a) => a.efficiency ?? 1));
-    const eBest = Math.max(...need.alternatives.map((a) => a.efficiency ?? 1));
+    const eBest = need.eBest;
     pooledKey.push(`${d}:${eKit}`);
     const better = need.alternatives.filter((a) => !held.includes(a) && (a.efficiency ?? 1) > eKit);
     const effBlockers = better.flatMap(blockerOf);
     if (eKit < eBest) {
       for (const b of effBlockers) pooledBlockers.add(b);
-      need.gainWh.forEach((row, s) =>
-        row.forEach((wh, t) => {
-          const out = extraDemand[s] as number[];
-          out[t] = (out[t] ?? 0) + wh * (1 / eKit - 1 / eBest);
-        }),
-      );
+      raised.push({ gainWh: need.gainWh, factor: 1 / eKit - 1 / eBest });
     }
 
     // The stores the kit's alternatives reach (an alternative without a store list reaches every store).
@@ -123,7 +140,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
   const kitStoreEff = Math.max(0, ...storeIndices.filter(inKit).map(storeEff));
   if (kitStoreEff < pre.bestChargeEfficiency)
     for (const i of storeIndices) if (storeEff(i) > kitStoreEff) pooledBlockers.add(i);
-  if (kitStoreEff < pre.bestChargeEfficiency || extraDemand.some((row) => row.some((wh) => wh > 0))) {
+  if (kitStoreEff < pre.bestChargeEfficiency || raised.some((r) => r.gainWh.some((row) => row.some((wh) => wh > 0)))) {
     views.unshift(
       lazyView(
         () => {
@@ -134,7 +151,13 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
               ...pre.problem,
               coefficients: {
                 ...c,
-                demandWh: c.demandWh.map((row, s) => row.map((wh, t) => wh + (extraDemand[s]?.[t] ?? 0))),
+                demandWh: c.demandWh.map((row, s) =>
+                  row.map((wh, t) => {
+                    let extraWh = 0;
+                    for (const r of raised) extraWh += (r.gainWh[s]?.[t] ?? 0) * r.factor;
+                    return wh + extraWh;
+                  }),
+                ),
                 roomDemandWh: c.roomDemandWh ?? c.demandWh,
               },
             },

@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { kitMassG } from './kit.js';
 import { createKitSearch } from './kit-search.js';
-import { greedyShave, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
+import { greedyShave, growToFeasible, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
 import { exhaustiveLightestKit } from './oracle.js';
 import {
   randomSyntheticWorld,
@@ -68,7 +68,8 @@ describe('a stopped search', () => {
       if (search.next(Infinity).kind !== 'stopped') continue;
       stopped++;
       const shaved = greedyShave(search, search.lightestAccepted ?? locker, Infinity);
-      const repaired = repairNearProposals(search, shaved, Infinity);
+      const repaired = repairNearProposals(search, shaved, locker, Infinity);
+      if (!repaired) throw new Error('a repair from a feasible kit always answers');
       const grams = (counts: Map<string, number>): number => kitMassG(counts, problem.candidates);
       expect(judge(repaired.counts).feasible).toBe(true);
       expect(grams(repaired.counts)).toBeLessThanOrEqual(grams(shaved.counts));
@@ -80,6 +81,50 @@ describe('a stopped search', () => {
     expect(stopped).toBeGreaterThan(worlds / 3);
     // 12 of 40 when written; without the repair, none.
     expect(lighter).toBeGreaterThanOrEqual(stopped / 5);
+  });
+
+  it('grows each proposal to a kit the judge accepts when nothing was accepted yet, and repairs from there', () => {
+    let grown = 0;
+    for (let seed = 1; seed <= worlds; seed++) {
+      const world = randomSyntheticWorld(seededRandom(72_000 + seed), {
+        itemTypes: 9,
+        maxOwned: 2,
+        dayCount: 4,
+        skyCount: 2,
+      });
+      const problem = syntheticProblem(world);
+      const judge = syntheticJudge(world);
+      const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
+      if (!judge(locker).feasible) continue;
+      const search = createKitSearch(problem, judge, { maxRounds: 2, tieBreakByMargin: false });
+      if (search.next(Infinity).kind !== 'stopped') continue;
+      for (const proposal of search.lastProposals) {
+        const kit = growToFeasible(search, proposal, locker, Infinity);
+        if (!kit) throw new Error('the whole locker is feasible, so a run is found');
+        grown++;
+        expect(judge(kit).feasible).toBe(true);
+        for (const [id, n] of proposal) expect(kit.get(id) ?? 0).toBeGreaterThanOrEqual(n);
+        for (const [id, n] of kit) expect(n).toBeLessThanOrEqual(locker.get(id) ?? 0);
+      }
+      const repaired = repairNearProposals(search, undefined, locker, Infinity);
+      if (search.lastProposals.length === 0) continue;
+      if (!repaired) throw new Error('a proposal grown to a feasible kit is repaired');
+      expect(judge(repaired.counts).feasible).toBe(true);
+      expect(kitMassG(repaired.counts, problem.candidates)).toBeGreaterThanOrEqual(
+        exhaustiveLightestKit(problem.candidates, judge).best?.massG ?? Infinity,
+      );
+    }
+    expect(grown).toBeGreaterThan(worlds / 3);
+  });
+
+  it('grows no kit past its deadline (the caller then shaves the whole locker)', () => {
+    const world = randomSyntheticWorld(seededRandom(72_005), { itemTypes: 9, maxOwned: 2, dayCount: 4, skyCount: 2 });
+    const problem = syntheticProblem(world);
+    const judge = syntheticJudge(world);
+    const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
+    const search = createKitSearch(problem, judge, { maxRounds: 1, tieBreakByMargin: false });
+    search.next(Infinity);
+    expect(growToFeasible(search, new Map(), locker, -1)).toBeUndefined();
   });
 
   it('stops shaving at its deadline and still answers with a kit the judge accepted', () => {

@@ -19,6 +19,27 @@ import {
 
 const worlds = 60;
 
+/**
+ * Searches stopped after two rounds on worlds of 9 item types whose whole locker keeps up (the searches of the repair
+ * tests).
+ */
+function* stoppedSearches() {
+  for (let seed = 1; seed <= worlds; seed++) {
+    const world = randomSyntheticWorld(seededRandom(72_000 + seed), {
+      itemTypes: 9,
+      maxOwned: 2,
+      dayCount: 4,
+      skyCount: 2,
+    });
+    const problem = syntheticProblem(world);
+    const judge = syntheticJudge(world);
+    const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
+    if (!judge(locker).feasible) continue;
+    const search = createKitSearch(problem, judge, { maxRounds: 2, tieBreakByMargin: false });
+    if (search.next(Infinity).kind === 'stopped') yield { problem, judge, locker, search };
+  }
+}
+
 describe('a stopped search', () => {
   it(`answers with a judged feasible kit that no item can leave whole, on ${worlds} worlds`, () => {
     let stopped = 0;
@@ -53,19 +74,7 @@ describe('a stopped search', () => {
   it(`repairs the model's last proposals into kits no heavier than the shaved kit, lighter on a fifth of them`, () => {
     let lighter = 0;
     let stopped = 0;
-    for (let seed = 1; seed <= worlds; seed++) {
-      const world = randomSyntheticWorld(seededRandom(72_000 + seed), {
-        itemTypes: 9,
-        maxOwned: 2,
-        dayCount: 4,
-        skyCount: 2,
-      });
-      const problem = syntheticProblem(world);
-      const judge = syntheticJudge(world);
-      const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
-      if (!judge(locker).feasible) continue;
-      const search = createKitSearch(problem, judge, { maxRounds: 2, tieBreakByMargin: false });
-      if (search.next(Infinity).kind !== 'stopped') continue;
+    for (const { problem, judge, locker, search } of stoppedSearches()) {
       stopped++;
       const shaved = greedyShave(search, search.lightestAccepted ?? locker, Infinity);
       const repaired = repairNearProposals(search, shaved, locker, Infinity);
@@ -85,19 +94,7 @@ describe('a stopped search', () => {
 
   it('grows each proposal to a kit the judge accepts when nothing was accepted yet, and repairs from there', () => {
     let grown = 0;
-    for (let seed = 1; seed <= worlds; seed++) {
-      const world = randomSyntheticWorld(seededRandom(72_000 + seed), {
-        itemTypes: 9,
-        maxOwned: 2,
-        dayCount: 4,
-        skyCount: 2,
-      });
-      const problem = syntheticProblem(world);
-      const judge = syntheticJudge(world);
-      const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
-      if (!judge(locker).feasible) continue;
-      const search = createKitSearch(problem, judge, { maxRounds: 2, tieBreakByMargin: false });
-      if (search.next(Infinity).kind !== 'stopped') continue;
+    for (const { problem, judge, locker, search } of stoppedSearches()) {
       for (const proposal of search.lastProposals) {
         const kit = growToFeasible(search, proposal, locker, Infinity);
         if (!kit) throw new Error('the whole locker is feasible, so a run is found');

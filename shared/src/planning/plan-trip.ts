@@ -52,7 +52,10 @@ function headline(
     case 'over-limit':
       return `Nothing that works fits under ${gramsText(answer.gramLimitG)}: the lightest kit that does weighs ${gramsText(answer.kit.massG)}, ${gramsText(answer.overLimitG)} over the limit.`;
     case 'best-so-far':
-      return `The search stopped early: this kit works (${gramsText(answer.kit.massG)}), but a lighter one may exist. ${verdictText ?? ''}`.trim();
+      // The model's bound holds for every kit it had not yet cut off (the cut-off ones were rejected): none lighter works.
+      return answer.lowerBoundG > 0 && answer.lowerBoundG < answer.kit.massG
+        ? `The search stopped early: this kit works (${gramsText(answer.kit.massG)}); a lighter one may exist, but none under ${gramsText(answer.lowerBoundG)}. ${verdictText ?? ''}`.trim()
+        : `The search stopped early: this kit works (${gramsText(answer.kit.massG)}), but a lighter one may exist. ${verdictText ?? ''}`.trim();
     case 'nothing-feasible':
       return `No kit from this gear keeps every device charged. ${missingText}`.trim();
   }

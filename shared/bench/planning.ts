@@ -90,6 +90,16 @@ export function benchPlanning(): void {
       runs,
     );
     console.log(`  → ${last}`);
+    // Where the optimum is out of reach in the goal's time, what a plan gets within it (and a little more): the kit the
+    // stopped search repairs, and the model's bound below which no kit works.
+    if (items > 100)
+      for (const capMs of [1_000, 2_000, 5_000]) {
+        const startMs = clock();
+        const plan = planTrip(input, { withExtras: false, now: clock, timeBudgetMs: capMs });
+        console.log(
+          `  with a ${capMs / 1000} s budget: ${(clock() - startMs).toFixed(0)} ms, ${plan.status}, ${plan.kit?.massG ?? '-'} g — ${plan.headline.split('.')[0]}`,
+        );
+      }
     measure(
       `full plan (optimum, 5 swaps, gram prices; cap ${(2 * budgetMs) / 1000} s), ${items} items, ${nights} nights`,
       () => {

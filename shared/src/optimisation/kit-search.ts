@@ -49,8 +49,9 @@ export interface KitSearch {
   readonly presolved: PresolvedProblem;
   /**
    * Next lightest kit the judge accepts and no cut excludes. `deadlineMs` is on the `now` clock. With `stuck`, once the
-   * judge has rejected `afterRejections` kits in this call and accepted none in the search, `allDry` is asked once;
-   * true ends the search as `exhausted` (the caller's proof that no kit can be accepted, e.g. the whole locker dry).
+   * judge has rejected `afterRejections` kits in this call, or the call has run `afterMs`, and the search has accepted
+   * none, `allDry` is asked once; true ends the search as `exhausted` (the caller's proof that no kit can be accepted,
+   * e.g. the whole locker dry).
    */
   next(deadlineMs: number, stuck?: StuckCheck): SearchStep;
   /** Exclude `counts` and every kit that holds at least `counts`. */
@@ -88,6 +89,7 @@ export interface KitSearch {
 /** When a search that accepts nothing asks whether any kit can be accepted at all (see `KitSearch.next`). */
 export interface StuckCheck {
   afterRejections: number;
+  afterMs: number;
   allDry: () => boolean;
 }
 
@@ -451,9 +453,15 @@ export function createKitSearch(
     let lowerBoundG = 0;
     roundsThisSearch = 0;
     const rejectionsBefore = judgeRejections;
+    const startMs = now();
     let stuckAsked = false;
     for (;;) {
-      if (stuck && !stuckAsked && !lightestAccepted && judgeRejections - rejectionsBefore >= stuck.afterRejections) {
+      if (
+        stuck &&
+        !stuckAsked &&
+        !lightestAccepted &&
+        (judgeRejections - rejectionsBefore >= stuck.afterRejections || now() - startMs >= stuck.afterMs)
+      ) {
         stuckAsked = true;
         if (stuck.allDry()) return { kind: 'exhausted' };
       }

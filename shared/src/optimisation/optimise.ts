@@ -111,11 +111,14 @@ export function optimiseKit(
   const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
   const locker = wholeLocker(problem);
   // The judge is monotone: if the whole locker runs dry, every kit does, and a kit accepted proves the locker keeps up.
-  // So the locker, the largest simulation of all, is judged only when the search accepts nothing in its first
-  // `lockerCheckAfterRejections` rejections or ends without a kit (the 50-item bench locker: 8–13 ms of a 100 ms plan).
+  // So the locker, the largest simulation of all, is not judged up front (the 50-item bench locker: 8–13 ms of a 100 ms
+  // plan). When the search accepts nothing in its first `lockerCheckAfterRejections` rejections or
+  // `lockerCheckAfterMs`, its newest proposal is grown to a kit the judge accepts (small kits first, the locker last):
+  // a kit found proves the locker keeps up and is the search's first accepted kit; none, and the locker runs dry.
   const step = search.next(deadlineMs, {
     afterRejections: lockerCheckAfterRejections,
-    allDry: () => !search.judge(locker).feasible,
+    afterMs: lockerCheckAfterMs,
+    allDry: () => !growToFeasible(search, search.lastProposals.at(-1) ?? new Map(), locker, Infinity),
   });
   // The shave after a stopped search gets a quarter of the budget more (at most `shaveGraceMs`).
   const shaveDeadlineMs =
@@ -155,6 +158,13 @@ export function optimiseKit(
  * within 3–10 simulations, or after hundreds of rejections).
  */
 export const lockerCheckAfterRejections = 8;
+
+/**
+ * Search time with nothing accepted after which the newest proposal is grown all the same, ms: on the 200-item bench
+ * locker the search goes many rounds on the daily model and its views alone before the judge sees a kit, so a locker
+ * that runs dry would be found out only when the search stops, and a feasible one would have no kit to fall back on.
+ */
+export const lockerCheckAfterMs = 1_000;
 
 /** The most the shave after a stopped search may run past the time budget, ms (a quarter of the budget below that). */
 export const shaveGraceMs = 5_000;
@@ -245,7 +255,8 @@ export function repairNearProposals(
       joined = new Map(best.counts);
       for (const [id, n] of proposal) if (n > (joined.get(id) ?? 0)) joined.set(id, n);
     } else joined = growToFeasible(search, proposal, locker, deadlineMs);
-    if (!joined) continue;
+    // No growth: out of time, or the whole locker runs dry (then no proposal grows).
+    if (!joined) break;
     const repaired = greedyShave(search, joined, deadlineMs, proposal);
     if (repaired.verdict.feasible && (!best || grams(repaired.counts) < grams(best.counts))) best = repaired;
   }
@@ -263,7 +274,8 @@ export interface JudgedKit {
  * items at their counts owned — leads, converters and controllers first (light, and what paths need), then stores and
  * panels lightest first — found by galloping and bisection on the run's length (all of it gives the whole locker, which
  * the caller has judged feasible; the judge is monotone, so a longer run is never worse). About 2 log₂(run) simulations
- * of kits little larger than the proposal instead of a shave from the whole locker. Undefined past `deadlineMs`.
+ * of kits little larger than the proposal instead of a shave from the whole locker. Undefined past `deadlineMs`, or
+ * when even the whole locker runs dry.
  * @example growToFeasible(search, proposal, locker, Infinity) // holds proposal; the judge accepts it
  */
 export function growToFeasible(
@@ -301,7 +313,9 @@ export function growToFeasible(
     if (search.judge(withRun(mid)).feasible) hi = mid;
     else lo = mid;
   }
-  return withRun(hi);
+  // The whole run is the locker, accepted only if it keeps up (judged once, then read from the judge's cache).
+  const grown = withRun(hi);
+  return hi < rest.length || search.judge(grown).feasible ? grown : undefined;
 }
 
 function buysOf(search: KitSearch, optimum: KitChoice, swap: KitChoice): string[] {

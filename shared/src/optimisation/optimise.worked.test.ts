@@ -1,6 +1,7 @@
 /** Worked cases checkable by hand (invented items; the arithmetic is in each comment). */
 import { describe, expect, it } from 'vitest';
-import { lockerCheckAfterRejections, optimiseKit } from './optimise.js';
+import { createKitSearch } from './kit-search.js';
+import { growToFeasible, lockerCheckAfterRejections, optimiseKit } from './optimise.js';
 import {
   randomSyntheticWorld,
   seededRandom,
@@ -50,7 +51,7 @@ describe('worked cases', () => {
   });
 });
 
-describe('the whole locker is judged only when the search accepts nothing', () => {
+describe('the whole locker is judged only when nothing else is accepted', () => {
   const isLocker = (kit: KitCounts, w: SyntheticWorld): boolean =>
     [...w.banks, ...w.panels, ...w.pathItems].every((it) => (kit.get(it.itemId) ?? 0) === it.ownedCount);
   it('a kit accepted at once: the locker (2 × 20 Wh + 3 × 12 Wh) is never simulated', () => {
@@ -65,7 +66,7 @@ describe('the whole locker is judged only when the search accepts nothing', () =
     expect(judged.length).toBeGreaterThan(0);
     expect(judged.some((kit) => isLocker(kit, w))).toBe(false);
   });
-  it(`a judge that rejects every kit: the locker is judged after ${lockerCheckAfterRejections} rejections and the answer is nothing feasible`, () => {
+  it(`a judge that rejects every kit: after ${lockerCheckAfterRejections} rejections the newest proposal is grown, the whole locker last, and the answer is nothing feasible`, () => {
     // A larger world, so that the search alone would take many rounds to run out of kits.
     const w = randomSyntheticWorld(seededRandom(73_001), { itemTypes: 12, maxOwned: 2, dayCount: 4, skyCount: 2 });
     let calls = 0;
@@ -78,8 +79,31 @@ describe('the whole locker is judged only when the search accepts nothing', () =
     const a = optimiseKit(syntheticProblem(w), dry);
     expect(a.status).toBe('nothing-feasible');
     if (a.status === 'nothing-feasible') expect(a.runsDry?.deviceId).toBe('stub');
-    // Every call is a rejection: the locker comes right after the eighth, and the search stops there.
-    expect(lockerAt).toBe(lockerCheckAfterRejections + 1);
+    // Every call is a rejection: the growth starts at the round after the eighth (a round may add one more, in its
+    // lift), galloping and bisecting over at most 12 items before the locker, and the search stops there.
+    expect(lockerAt).toBeGreaterThan(lockerCheckAfterRejections + 1);
+    expect(lockerAt).toBeLessThanOrEqual(lockerCheckAfterRejections + 2 + 2 * Math.ceil(Math.log2(13)) + 1);
     expect(calls).toBe(lockerAt);
+  });
+  it('a search that runs long with nothing accepted asks once whether the locker runs dry, and a dry locker grows nothing', () => {
+    const w = randomSyntheticWorld(seededRandom(73_001), { itemTypes: 12, maxOwned: 2, dayCount: 4, skyCount: 2 });
+    const problem = syntheticProblem(w);
+    const dry: KitJudge = () => ({ feasible: false });
+    // A clock that moves 1 ms each time it is read; the rejection count never triggers.
+    let clockMs = 0;
+    const search = createKitSearch(problem, dry, { now: () => clockMs++ });
+    let asked = 0;
+    const step = search.next(Infinity, {
+      afterRejections: Infinity,
+      afterMs: 3,
+      allDry: () => {
+        asked++;
+        return true;
+      },
+    });
+    expect(step.kind).toBe('exhausted');
+    expect(asked).toBe(1);
+    const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
+    expect(growToFeasible(search, new Map(), locker, Infinity)).toBeUndefined();
   });
 });

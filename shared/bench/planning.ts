@@ -9,43 +9,14 @@ import { exhaustiveLightestKit } from '../src/optimisation/oracle.js';
 import { optimiseKit } from '../src/optimisation/optimise.js';
 import { seededRandom } from '../src/optimisation/synthetic-problem.js';
 import { planningContext } from '../src/planning/build-problem.js';
-import type { PlanningInput } from '../src/planning/planning-input.js';
 import { planTrip } from '../src/planning/plan-trip.js';
-import { tripSolarInputSchema } from '../src/schemas/trip-solar.js';
-import type { TripDevice } from '../src/schemas/kit.js';
-import { randomHeadlamp, randomLocker, randomPhone, randomRadio, type Random } from '../src/testing/random-planning.js';
+import { summerTripInput } from '../src/testing/random-planning.js';
 import { measure } from './measure.js';
 
 const clock = (): number => performance.now();
 
-/** A summer trip at 46.5° N in the "mixed" sky, with a phone, a headlamp and a 12 V radio, and a locker of `items` types. */
-export function benchPlanningInput(random: Random, items: number, nights: number): PlanningInput {
-  const devices: TripDevice[] = [
-    { deviceId: 'phone', spec: randomPhone(random) },
-    { deviceId: 'headlamp', spec: randomHeadlamp(random) },
-    { deviceId: 'radio', spec: randomRadio(random) },
-  ];
-  return {
-    solarInput: tripSolarInputSchema.parse({
-      latitudeDeg: 46.5,
-      longitudeDeg: 9.8,
-      timeZone: 'Europe/Zurich',
-      startDate: '2027-07-10',
-      nights,
-      temperatures: { lowC: 4, highC: 19 },
-    }),
-    devices,
-    deviceNames: { phone: 'the phone', headlamp: 'the headlamp', radio: 'the radio' },
-    gear: randomLocker(random, {
-      itemTypes: items,
-      maxOwned: 2,
-      firstKinds: ['bank', 'phone-lead', 'converter', 'panel'],
-      mix: { panel: 0.25, bank: 0.35, converter: 0.12, lead: 0.28 },
-    }),
-    reserveShare: 0.1,
-    gramLimitG: null,
-  };
-}
+/** The bench's input (`summerTripInput` of the testing module). */
+export const benchPlanningInput = summerTripInput;
 
 /** Time for one plan in the bench, ms: a plan that needs more stops with its best kit so far (and says so). */
 const optimumBudgetMs = { 50: 30_000, 200: 60_000 } as const;

@@ -5,39 +5,13 @@
 import { describe, expect, it } from 'vitest';
 import { optimiseKit } from '../optimisation/optimise.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { tripSolarInputSchema } from '../schemas/trip-solar.js';
-import { randomHeadlamp, randomLocker, randomPhone, randomRadio } from '../testing/random-planning.js';
+import { summerTripInput } from '../testing/random-planning.js';
 import { gramsText } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';
 import { planTrip } from './plan-trip.js';
 
 /** Eight nights at 46.5° N in July with a phone, a headlamp and a 12 V radio, and 30 item types of invented gear. */
-function input(seed: number): PlanningInput {
-  const random = seededRandom(seed);
-  return {
-    solarInput: tripSolarInputSchema.parse({
-      latitudeDeg: 46.5,
-      longitudeDeg: 9.8,
-      timeZone: 'Europe/Zurich',
-      startDate: '2027-07-10',
-      nights: 8,
-      temperatures: { lowC: 4, highC: 19 },
-    }),
-    devices: [
-      { deviceId: 'phone', spec: randomPhone(random) },
-      { deviceId: 'headlamp', spec: randomHeadlamp(random) },
-      { deviceId: 'radio', spec: randomRadio(random) },
-    ],
-    gear: randomLocker(random, {
-      itemTypes: 30,
-      maxOwned: 2,
-      firstKinds: ['bank', 'phone-lead', 'converter', 'panel'],
-      mix: { panel: 0.25, bank: 0.35, converter: 0.12, lead: 0.28 },
-    }),
-    reserveShare: 0.1,
-    gramLimitG: null,
-  };
-}
+const input = (seed: number): PlanningInput => summerTripInput(seededRandom(seed), 30, 8);
 
 describe('a plan whose search stops early', () => {
   it('names a lower bound that the full search bears out, on the seeds that need more than three rounds', () => {

@@ -486,3 +486,36 @@ export function randomPlanningInput(random: Random, options: RandomPlanningOptio
     gramLimitG: null,
   };
 }
+
+/**
+ * A summer trip at 46.5° N in the "mixed" sky, with a phone, a headlamp and a 12 V radio, and a locker of `items` types
+ * of invented USB gear (up to 2 owned each) — the benchmarks' planning input, and the tests' large locker.
+ * @example summerTripInput(seededRandom(50), 50, 14).gear.length // 50
+ */
+export function summerTripInput(random: Random, items: number, nights: number): PlanningInput {
+  const devices: TripDevice[] = [
+    { deviceId: 'phone', spec: randomPhone(random) },
+    { deviceId: 'headlamp', spec: randomHeadlamp(random) },
+    { deviceId: 'radio', spec: randomRadio(random) },
+  ];
+  return {
+    solarInput: tripSolarInputSchema.parse({
+      latitudeDeg: 46.5,
+      longitudeDeg: 9.8,
+      timeZone: 'Europe/Zurich',
+      startDate: '2027-07-10',
+      nights,
+      temperatures: { lowC: 4, highC: 19 },
+    }),
+    devices,
+    deviceNames: { phone: 'the phone', headlamp: 'the headlamp', radio: 'the radio' },
+    gear: randomLocker(random, {
+      itemTypes: items,
+      maxOwned: 2,
+      firstKinds: ['bank', 'phone-lead', 'converter', 'panel'],
+      mix: { panel: 0.25, bank: 0.35, converter: 0.12, lead: 0.28 },
+    }),
+    reserveShare: 0.1,
+    gramLimitG: null,
+  };
+}

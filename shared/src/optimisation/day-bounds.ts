@@ -180,11 +180,26 @@ function buildDayBounds(pre: PresolvedProblem): (s: number, t: number) => DayBou
     }
     sunny.sort((a, b) => b.potentialWh - a.potentialWh || a.h - b.h);
     const stride = Math.max(1, Math.ceil(sunny.length / maxStepBoundsPerDay));
-    for (let j = 1; j < sunny.length; j += stride) {
-      const inS = sunny.slice(0, j).map((x) => x.h);
-      const outS = sunny.slice(j).map((x) => x.h);
-      bounds.steps.push(vector(s, outS, inS));
-    }
+    // S = the j sunniest steps, for j = 1, 1 + stride, …: each item's Wh in one pass over the sunny steps, the panels'
+    // over the steps not yet in S (a running remainder) and the stores' over those in S (a running sum).
+    const sizes: number[] = [];
+    for (let j = 1; j < sunny.length; j += stride) sizes.push(j);
+    const steps = sizes.map(() => new Float64Array(n));
+    pre.items.forEach((it, i) => {
+      const panelRow = it.panel?.harvestWhByStep?.[s];
+      const storeRow = it.store?.acceptWhByStep?.[s];
+      if (!panelRow && !storeRow) return;
+      let panelLeftWh = 0;
+      for (const x of sunny) panelLeftWh += panelRow?.[x.h] ?? 0;
+      let storeInWh = 0;
+      for (let k = 0, next = 0; next < sizes.length; k++) {
+        const h = (sunny[k] as { h: number }).h;
+        panelLeftWh -= panelRow?.[h] ?? 0;
+        storeInWh += storeRow?.[h] ?? 0;
+        if (k + 1 === sizes[next]) (steps[next++] as BoundVector)[i] = eta * (Math.max(0, panelLeftWh) + storeInWh);
+      }
+    });
+    bounds.steps.push(...steps);
     const topUp = c.firstTopUpStep;
     if (topUp) {
       const cut = Math.min(to, Math.max(from, topUp[t] ?? to));

@@ -84,6 +84,12 @@ export interface KitSearch {
    * is near the model's lower bound (`optimise.ts`).
    */
   readonly lastProposals: readonly KitCounts[];
+  /**
+   * Kits the judge accepts that a shave left with no item to spare, as callers note them (`noteShaved`): a stopped
+   * search's repairs. Its swaps fall back on them when the search cannot go on (`findSwaps`).
+   */
+  readonly shavedKits: readonly KitCounts[];
+  noteShaved(counts: KitCounts): void;
 }
 
 /** When a search that accepts nothing asks whether any kit can be accepted at all (see `KitSearch.next`). */
@@ -160,6 +166,7 @@ export function createKitSearch(
   /** Kits the judge has rejected (simulated, not answered from the cache). */
   let judgeRejections = 0;
   const lastProposals: KitCounts[] = [];
+  const shavedKits: KitCounts[] = [];
 
   const judge = (counts: KitCounts): JudgeVerdict => {
     const key = kitKey(counts);
@@ -537,6 +544,11 @@ export function createKitSearch(
       return lightestAccepted?.counts;
     },
     lastProposals,
+    shavedKits,
+    noteShaved: (counts) => {
+      if (judge(counts).feasible && !shavedKits.some((k) => kitKey(k) === kitKey(counts)))
+        shavedKits.push(new Map(counts));
+    },
   };
 }
 

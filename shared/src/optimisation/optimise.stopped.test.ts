@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { kitMassG } from './kit.js';
 import { createKitSearch } from './kit-search.js';
-import { greedyShave, growToFeasible, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
+import { findSwaps, greedyShave, growToFeasible, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
 import { exhaustiveLightestKit } from './oracle.js';
 import {
   randomSyntheticWorld,
@@ -112,6 +112,48 @@ describe('a stopped search', () => {
       );
     }
     expect(grown).toBeGreaterThan(worlds / 3);
+  });
+
+  it('offers the kits noted as shaved as swaps when the search stops: each works, none holds the answer or an earlier swap, lightest first', () => {
+    let withSwaps = 0;
+    for (let seed = 1; seed <= worlds; seed++) {
+      const world = randomSyntheticWorld(seededRandom(74_000 + seed), {
+        itemTypes: 9,
+        maxOwned: 2,
+        dayCount: 4,
+        skyCount: 2,
+      });
+      const problem = syntheticProblem(world);
+      const judge = syntheticJudge(world);
+      const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
+      if (!judge(locker).feasible) continue;
+      const search = createKitSearch(problem, judge, { tieBreakByMargin: false });
+      const answer = optimiseKit(problem, judge, {}, search);
+      if (answer.status !== 'optimal') continue;
+      // Kits that work with no item to spare: the locker without one item type at a time, shaved.
+      for (const c of problem.candidates) {
+        const without = new Map(locker);
+        without.delete(c.itemId);
+        if (judge(without).feasible) search.noteShaved(greedyShave(search, without, Infinity).counts);
+      }
+      // No time left for the search itself: every swap is one of the noted kits.
+      const swaps = findSwaps(problem, judge, answer.kit, { timeBudgetMs: 0 }, search);
+      const kits = [new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))];
+      const holds = (big: Map<string, number>, small: Map<string, number>): boolean =>
+        [...small].every(([id, n]) => (big.get(id) ?? 0) >= n);
+      let lastG = -Infinity;
+      for (const swap of swaps) {
+        const kit = new Map(swap.kit.lines.map((l) => [l.itemId, l.count]));
+        expect(judge(kit).feasible).toBe(true);
+        for (const earlier of kits) expect(holds(kit, earlier)).toBe(false);
+        expect(swap.extraG).toBe(swap.kit.massG - answer.kit.massG);
+        expect(swap.kit.massG).toBeGreaterThanOrEqual(lastG);
+        lastG = swap.kit.massG;
+        kits.push(kit);
+      }
+      if (swaps.length > 0) withSwaps++;
+    }
+    expect(withSwaps).toBeGreaterThan(5);
   });
 
   it('grows no kit past its deadline (the caller then shaves the whole locker)', () => {

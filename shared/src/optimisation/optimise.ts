@@ -258,7 +258,9 @@ export function repairNearProposals(
     // No growth: out of time, or the whole locker runs dry (then no proposal grows).
     if (!joined) break;
     const repaired = greedyShave(search, joined, deadlineMs, proposal);
-    if (repaired.verdict.feasible && (!best || grams(repaired.counts) < grams(best.counts))) best = repaired;
+    if (!repaired.verdict.feasible) continue;
+    search.noteShaved(repaired.counts);
+    if (!best || grams(repaired.counts) < grams(best.counts)) best = repaired;
   }
   return best;
 }
@@ -340,6 +342,8 @@ function buysOf(search: KitSearch, optimum: KitChoice, swap: KitChoice): string[
  * The next best distinct kits after `optimum`: each round cuts off the previous kit and every kit holding it (so "the
  * optimum plus a spare lead" is never a swap), then finds the lightest kit the judge accepts. Each swap carries its
  * extra grams, what was added and removed, and what it buys. Pass the search used for the optimum to reuse its cuts.
+ * When the search stops (a best-so-far answer's always does), the kits its repairs shaved fill the list: other kits that
+ * work, lightest first, not proven the next best.
  * @example findSwaps(problem, judge, answer.kit).length // up to 5
  */
 export function findSwaps(
@@ -353,21 +357,41 @@ export function findSwaps(
   const count = options.count ?? defaultSwapCount;
   const swaps: KitSwap[] = [];
   const base = new Map(optimum.lines.map((l) => [l.itemId, l.count]));
-  search.excludeSupersetsOf(base);
-  while (swaps.length < count) {
-    const step = search.next(deadlineMs);
-    if (step.kind !== 'found') break;
-    const kit = choice(step.counts, search, step.verdict);
-    const ids = new Set([...base.keys(), ...step.counts.keys()]);
+  const swapOf = (counts: KitCounts, verdict: JudgeVerdict): KitSwap => {
+    const kit = choice(counts, search, verdict);
+    const ids = new Set([...base.keys(), ...counts.keys()]);
     const added = [];
     const removed = [];
     for (const id of [...ids].sort()) {
-      const d = (step.counts.get(id) ?? 0) - (base.get(id) ?? 0);
+      const d = (counts.get(id) ?? 0) - (base.get(id) ?? 0);
       if (d > 0) added.push({ itemId: id, count: d });
       if (d < 0) removed.push({ itemId: id, count: -d });
     }
-    swaps.push({ kit, extraG: kit.massG - optimum.massG, added, removed, buys: buysOf(search, optimum, kit) });
+    return { kit, extraG: kit.massG - optimum.massG, added, removed, buys: buysOf(search, optimum, kit) };
+  };
+  const taken: KitCounts[] = [base];
+  search.excludeSupersetsOf(base);
+  let step: SearchStep | undefined;
+  while (swaps.length < count) {
+    step = search.next(deadlineMs);
+    if (step.kind !== 'found') break;
+    swaps.push(swapOf(step.counts, step.verdict));
+    taken.push(step.counts);
     search.excludeSupersetsOf(step.counts);
+  }
+  // A search that cannot go on (time, round cap, its tree too large — a best-so-far answer's is) offers the kits its
+  // repairs shaved, lightest first, under the same rule: none holds the answer's kit or an earlier swap.
+  if (step?.kind === 'stopped') {
+    const holds = (big: KitCounts, small: KitCounts): boolean => [...small].every(([id, n]) => (big.get(id) ?? 0) >= n);
+    const shaved = [...search.shavedKits].sort(
+      (a, b) => kitMassG(a, search.problem.candidates) - kitMassG(b, search.problem.candidates),
+    );
+    for (const counts of shaved) {
+      if (swaps.length >= count) break;
+      if (taken.some((kit) => holds(counts, kit))) continue;
+      swaps.push(swapOf(counts, search.judge(counts)));
+      taken.push(counts);
+    }
   }
   return swaps;
 }

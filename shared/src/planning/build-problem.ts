@@ -285,7 +285,14 @@ export function planningContext(
   const mostCum = new Array<number>(dayCount).fill(0);
   for (const d of input.devices) {
     if (!needsChargingPath(d.spec, tripHours / 24)) continue;
-    const alternatives = new Map<string, { itemIds: string[]; efficiency: number }>();
+    /**
+     * The best path efficiency per store and tail (banks with the same ports share their paths, so per group of them),
+     * by key: only its least and greatest are read (the device's most and least draw).
+     */
+    const pathEfficiency = new Map<string, number>();
+    const notePath = (key: string, efficiency: number): void => {
+      if (!(efficiency <= (pathEfficiency.get(key) ?? -Infinity))) pathEfficiency.set(key, efficiency);
+    };
     /** What a path needs besides its store (converter and leads), by key. */
     const tails = new Map<string, string[]>();
     /** Per tail (by key): the stores it starts a path from, and the best share of a drawn Wh that reaches the device. */
@@ -293,7 +300,9 @@ export function planningContext(
     const tailShare = new Map<string, number>();
     const noteTail = (tail: readonly string[], storeIds: readonly string[], share: number): void => {
       const key = tail.join('|');
-      tailStores.set(key, new Set([...(tailStores.get(key) ?? []), ...storeIds]));
+      let stores = tailStores.get(key);
+      if (!stores) tailStores.set(key, (stores = new Set()));
+      for (const id of storeIds) stores.add(id);
       tailShare.set(key, Math.max(tailShare.get(key) ?? 0, share));
     };
     // Only leads that fit some hop of this device's paths can be part of one; a 12 V device's paths pair a lead into
@@ -325,7 +334,7 @@ export function planningContext(
       const key = JSON.stringify(bank.spec.outputPorts);
       banksByPorts.set(key, [...(banksByPorts.get(key) ?? []), bank]);
     }
-    for (const sameBanks of banksByPorts.values()) {
+    for (const [group, sameBanks] of [...banksByPorts.values()].entries()) {
       for (const cs of converterSets) {
         for (const ls of leadSets) {
           for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls)
@@ -339,13 +348,7 @@ export function planningContext(
               sameBanks.map((b) => b.itemId),
               d.spec.chargeEfficiency * path.pathEfficiency,
             );
-            for (const bank of sameBanks) {
-              const itemIds = [bank.itemId, ...tail].sort();
-              const key = itemIds.join('|');
-              const known = alternatives.get(key);
-              if (!known || known.efficiency < path.pathEfficiency)
-                alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
-            }
+            notePath(`banks ${group}|${tail.join('|')}`, path.pathEfficiency);
           }
         }
       }
@@ -377,17 +380,13 @@ export function planningContext(
             tails.set(tail.join('|'), tail);
             const live = (path as ChargePath & Partial<PackPath>).live === true;
             noteTail(tail, [pack.itemId], live ? path.pathEfficiency : d.spec.chargeEfficiency * path.pathEfficiency);
-            const itemIds = [pack.itemId, ...tail].sort();
-            const key = itemIds.join('|');
-            const known = alternatives.get(key);
-            if (!known || known.efficiency < path.pathEfficiency)
-              alternatives.set(key, { itemIds, efficiency: path.pathEfficiency });
+            notePath(`pack ${pack.itemId}|${tail.join('|')}`, path.pathEfficiency);
             if ((path as ChargePath & Partial<PackPath>).live) liveShare = Math.max(liveShare, path.pathEfficiency);
           }
         }
       }
     }
-    const list = [...alternatives.values()];
+    const list = [...pathEfficiency.values()];
     const label = input.deviceNames?.[d.deviceId] ?? d.deviceId;
     // One alternative per tail, with the stores it starts a path from (exact: "this tail and one of these stores",
     // without one alternative per store). A tail holding another is left out when the smaller one fits every store it
@@ -416,8 +415,8 @@ export function planningContext(
     };
     needs.push(need);
     if (list.length === 0) continue;
-    const best = Math.max(...list.map((a) => a.efficiency));
-    const worst = Math.min(...list.map((a) => a.efficiency));
+    const best = Math.max(...list);
+    const worst = Math.min(...list);
     // A device that can run live from a pack draws its use straight through the lead (no charging loss) and only as
     // it uses it: its least draw by a day's end counts the use up to then, at the better of the two shares.
     const bestShare = Math.max(d.spec.chargeEfficiency * best, liveShare);

@@ -5,7 +5,7 @@
  * not outside check values).
  */
 import { describe, expect, it } from 'vitest';
-import { kitMassG } from './kit.js';
+import { kitCounts, kitMassG, kitNoLarger } from './kit.js';
 import { createKitSearch } from './kit-search.js';
 import { findSwaps, greedyShave, growToFeasible, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
 import { exhaustiveLightestKit } from './oracle.js';
@@ -19,22 +19,20 @@ import {
 
 const worlds = 60;
 
-/**
- * Searches stopped after two rounds on worlds of 9 item types whose whole locker keeps up (the searches of the repair
- * tests).
- */
-function* stoppedSearches() {
-  for (let seed = 1; seed <= worlds; seed++) {
-    const world = randomSyntheticWorld(seededRandom(72_000 + seed), {
-      itemTypes: 9,
-      maxOwned: 2,
-      dayCount: 4,
-      skyCount: 2,
-    });
+/** Worlds of 9 item types from `firstSeed` on whose whole locker keeps up (the repair and swap tests' worlds). */
+function* feasibleWorlds(firstSeed: number) {
+  for (let seed = firstSeed; seed < firstSeed + worlds; seed++) {
+    const world = randomSyntheticWorld(seededRandom(seed), { itemTypes: 9, maxOwned: 2, dayCount: 4, skyCount: 2 });
     const problem = syntheticProblem(world);
     const judge = syntheticJudge(world);
     const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
-    if (!judge(locker).feasible) continue;
+    if (judge(locker).feasible) yield { problem, judge, locker };
+  }
+}
+
+/** Searches stopped after two rounds on `feasibleWorlds` (the searches of the repair tests). */
+function* stoppedSearches() {
+  for (const { problem, judge, locker } of feasibleWorlds(72_001)) {
     const search = createKitSearch(problem, judge, { maxRounds: 2, tieBreakByMargin: false });
     if (search.next(Infinity).kind === 'stopped') yield { problem, judge, locker, search };
   }
@@ -54,7 +52,7 @@ describe('a stopped search', () => {
         continue;
       }
       expect(oracle.best).not.toBeNull();
-      const kit = new Map(answer.kit.lines.map((l) => [l.itemId, l.count]));
+      const kit = kitCounts(answer.kit.lines);
       expect(judge(kit).feasible).toBe(true);
       expect(answer.kit.massG).toBe(kitMassG(kit, problem.candidates));
       expect(answer.kit.massG).toBeGreaterThanOrEqual(oracle.best?.massG ?? Infinity);
@@ -116,17 +114,7 @@ describe('a stopped search', () => {
 
   it('offers the kits noted as shaved as swaps when the search stops: each works, none holds the answer or an earlier swap, lightest first', () => {
     let withSwaps = 0;
-    for (let seed = 1; seed <= worlds; seed++) {
-      const world = randomSyntheticWorld(seededRandom(74_000 + seed), {
-        itemTypes: 9,
-        maxOwned: 2,
-        dayCount: 4,
-        skyCount: 2,
-      });
-      const problem = syntheticProblem(world);
-      const judge = syntheticJudge(world);
-      const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
-      if (!judge(locker).feasible) continue;
+    for (const { problem, judge, locker } of feasibleWorlds(74_001)) {
       const search = createKitSearch(problem, judge, { tieBreakByMargin: false });
       const answer = optimiseKit(problem, judge, {}, search);
       if (answer.status !== 'optimal') continue;
@@ -138,14 +126,12 @@ describe('a stopped search', () => {
       }
       // No time left for the search itself: every swap is one of the noted kits.
       const swaps = findSwaps(problem, judge, answer.kit, { timeBudgetMs: 0 }, search);
-      const kits = [new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))];
-      const holds = (big: Map<string, number>, small: Map<string, number>): boolean =>
-        [...small].every(([id, n]) => (big.get(id) ?? 0) >= n);
+      const kits = [kitCounts(answer.kit.lines)];
       let lastG = -Infinity;
       for (const swap of swaps) {
-        const kit = new Map(swap.kit.lines.map((l) => [l.itemId, l.count]));
+        const kit = kitCounts(swap.kit.lines);
         expect(judge(kit).feasible).toBe(true);
-        for (const earlier of kits) expect(holds(kit, earlier)).toBe(false);
+        for (const earlier of kits) expect(kitNoLarger(earlier, kit)).toBe(false);
         expect(swap.extraG).toBe(swap.kit.massG - answer.kit.massG);
         expect(swap.kit.massG).toBeGreaterThanOrEqual(lastG);
         lastG = swap.kit.massG;
@@ -188,7 +174,7 @@ describe('a stopped search', () => {
     const answer = optimiseKit(problem, countingJudge, { timeBudgetMs: budgetMs, now: () => clockMs });
     expect(answer.status).toBe('best-so-far');
     if (answer.status === 'nothing-feasible') return;
-    expect(judge(new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))).feasible).toBe(true);
+    expect(judge(kitCounts(answer.kit.lines)).feasible).toBe(true);
     // The budget, a quarter of it for the shave (below the grace cap), and the one simulation that overran it.
     expect(budgetMs / 4).toBeLessThan(shaveGraceMs);
     expect(clockMs).toBeLessThanOrEqual(budgetMs + budgetMs / 4 + 1_000);
@@ -205,7 +191,7 @@ describe('a stopped search', () => {
       if (answer.status !== 'best-so-far') continue;
       stopped++;
       expect(answer.notes.join(' ')).toContain('too large');
-      expect(judge(new Map(answer.kit.lines.map((l) => [l.itemId, l.count]))).feasible).toBe(true);
+      expect(judge(kitCounts(answer.kit.lines)).feasible).toBe(true);
     }
     expect(stopped).toBeGreaterThan(5);
   });

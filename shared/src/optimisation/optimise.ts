@@ -1,6 +1,6 @@
 import { adaptiveBatches, tryInBatches } from './batch-trials.js';
 import { dailyBalance } from './daily-balance.js';
-import { kitLines, kitMassG } from './kit.js';
+import { kitLines, kitMassG, kitNoLarger } from './kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
 import type {
   KitCandidate,
@@ -382,13 +382,12 @@ export function findSwaps(
   // A search that cannot go on (time, round cap, its tree too large — a best-so-far answer's is) offers the kits its
   // repairs shaved, lightest first, under the same rule: none holds the answer's kit or an earlier swap.
   if (step?.kind === 'stopped') {
-    const holds = (big: KitCounts, small: KitCounts): boolean => [...small].every(([id, n]) => (big.get(id) ?? 0) >= n);
     const shaved = [...search.shavedKits].sort(
       (a, b) => kitMassG(a, search.problem.candidates) - kitMassG(b, search.problem.candidates),
     );
     for (const counts of shaved) {
       if (swaps.length >= count) break;
-      if (taken.some((kit) => holds(counts, kit))) continue;
+      if (taken.some((kit) => kitNoLarger(kit, counts))) continue;
       swaps.push(swapOf(counts, search.judge(counts)));
       taken.push(counts);
     }

@@ -298,12 +298,15 @@ export function planningContext(
     /** Per tail (by key): the stores it starts a path from, and the best share of a drawn Wh that reaches the device. */
     const tailStores = new Map<string, Set<string>>();
     const tailShare = new Map<string, number>();
-    const noteTail = (tail: readonly string[], storeIds: readonly string[], share: number): void => {
+    /** Notes a path's tail with the stores it starts from and its share; returns the tail's key. */
+    const noteTail = (tail: string[], storeIds: readonly string[], share: number): string => {
       const key = tail.join('|');
+      tails.set(key, tail);
       let stores = tailStores.get(key);
       if (!stores) tailStores.set(key, (stores = new Set()));
       for (const id of storeIds) stores.add(id);
       tailShare.set(key, Math.max(tailShare.get(key) ?? 0, share));
+      return key;
     };
     // Only leads that fit some hop of this device's paths can be part of one; a 12 V device's paths pair a lead into
     // the converter with a lead out of it. Banks with the same output ports have the same paths: found once.
@@ -342,13 +345,12 @@ export function planningContext(
             const tail = [
               ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
             ].sort();
-            tails.set(tail.join('|'), tail);
-            noteTail(
+            const key = noteTail(
               tail,
               sameBanks.map((b) => b.itemId),
               d.spec.chargeEfficiency * path.pathEfficiency,
             );
-            notePath(`banks ${group}|${tail.join('|')}`, path.pathEfficiency);
+            notePath(`banks ${group}|${key}`, path.pathEfficiency);
           }
         }
       }
@@ -377,10 +379,13 @@ export function planningContext(
             const tail = [
               ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
             ].sort();
-            tails.set(tail.join('|'), tail);
             const live = (path as ChargePath & Partial<PackPath>).live === true;
-            noteTail(tail, [pack.itemId], live ? path.pathEfficiency : d.spec.chargeEfficiency * path.pathEfficiency);
-            notePath(`pack ${pack.itemId}|${tail.join('|')}`, path.pathEfficiency);
+            const key = noteTail(
+              tail,
+              [pack.itemId],
+              live ? path.pathEfficiency : d.spec.chargeEfficiency * path.pathEfficiency,
+            );
+            notePath(`pack ${pack.itemId}|${key}`, path.pathEfficiency);
             if ((path as ChargePath & Partial<PackPath>).live) liveShare = Math.max(liveShare, path.pathEfficiency);
           }
         }

@@ -524,8 +524,9 @@ export function runSky(
   }
 
   /**
-   * Tops device d up from store s in step i at rate x (W at the battery, on the hull, already within the store's
-   * energy above its reserve and the device's charge power); returns the Wh it gained.
+   * Tops device d up from store s in step i from rate `fromW` (what earlier rounds of the step gave) to `toW` (W at the
+   * battery, on the hull, already within the store's energy above its reserve and the device's charge power): the draw
+   * and losses are the hull's at `toW` less those at `fromW`; returns the Wh it gained.
    */
   function topUp(d: number, s: number, fromW: number, toW: number): number {
     const idx = s * D + d;

@@ -125,8 +125,11 @@ function sessionLogger(k: CompiledKit, input: KitSimulationInput, schedule: Char
     const endUtcMs = step.startUtcMs + step.durationH * 3_600_000;
     const current = open.get(key);
     // The step right after the session's, or the same step again (a later round of its top-ups).
-    const goesOn = current && (current.endUtcMs === step.startUtcMs || current.endUtcMs === endUtcMs);
-    if (current && goesOn && current.dayIndex === step.dayIndex) {
+    if (
+      current &&
+      (current.endUtcMs === step.startUtcMs || current.endUtcMs === endUtcMs) &&
+      current.dayIndex === step.dayIndex
+    ) {
       current.endUtcMs = endUtcMs;
       current.energyWh += energyWh;
       return;

@@ -1,7 +1,13 @@
 /** Worked cases checkable by hand (invented items; the arithmetic is in each comment). */
 import { describe, expect, it } from 'vitest';
 import { createKitSearch } from './kit-search.js';
-import { growToFeasible, lockerCheckAfterRejections, optimiseKit } from './optimise.js';
+import {
+  growToFeasible,
+  lockerCheckAfterMs,
+  lockerCheckAfterRejections,
+  optimiseKit,
+  stuckGrowthAfterMs,
+} from './optimise.js';
 import {
   randomSyntheticWorld,
   seededRandom,
@@ -84,6 +90,12 @@ describe('the whole locker is judged only when nothing else is accepted', () => 
     expect(lockerAt).toBeGreaterThan(lockerCheckAfterRejections + 1);
     expect(lockerAt).toBeLessThanOrEqual(lockerCheckAfterRejections + 2 + 2 * Math.ceil(Math.log2(13)) + 1);
     expect(calls).toBe(lockerAt);
+  });
+  it('under a time budget the growth comes after a quarter of it, never later than without one', () => {
+    expect(stuckGrowthAfterMs(undefined)).toBe(lockerCheckAfterMs);
+    expect(stuckGrowthAfterMs(60_000)).toBe(lockerCheckAfterMs);
+    expect(stuckGrowthAfterMs(1_000)).toBe(250);
+    expect(stuckGrowthAfterMs(2 * lockerCheckAfterMs)).toBe(lockerCheckAfterMs / 2);
   });
   it('a search that runs long with nothing accepted asks once whether the locker runs dry, and a dry locker grows nothing', () => {
     const w = randomSyntheticWorld(seededRandom(73_001), { itemTypes: 12, maxOwned: 2, dayCount: 4, skyCount: 2 });

@@ -31,7 +31,7 @@ function statsOf(search: KitSearch): SearchStats {
 }
 
 /** Every owned unit of every candidate. */
-function wholeLocker(problem: OptimisationProblem): Map<string, number> {
+export function wholeLocker(problem: OptimisationProblem): Map<string, number> {
   return new Map(problem.candidates.filter((c) => c.ownedCount > 0).map((c) => [c.itemId, c.ownedCount]));
 }
 

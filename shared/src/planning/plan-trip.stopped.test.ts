@@ -3,9 +3,12 @@
  * is no lighter. Invented gear (testing/random-planning.ts) on a real trip; not outside check values.
  */
 import { describe, expect, it } from 'vitest';
+import { gramPrice } from '../optimisation/gram-price.js';
+import { kitCounts } from '../optimisation/kit.js';
 import { optimiseKit } from '../optimisation/optimise.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
 import { summerTripInput } from '../testing/random-planning.js';
+import { planningContext } from './build-problem.js';
 import { gramsText } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';
 import { planTrip } from './plan-trip.js';
@@ -35,5 +38,38 @@ describe('a plan whose search stops early', () => {
       expect(full.kit.massG).toBeLessThanOrEqual(stopped.kit?.massG ?? 0);
     }
     expect(named).toBeGreaterThan(0);
+  });
+
+  it('prices a raise by repairing its kit: each price free or about so many grams, for a kit the raised trip accepts', () => {
+    let priced = 0;
+    for (let seed = 1; seed <= 12 && priced < 3; seed++) {
+      const trip = input(seed);
+      const stopOnRound3 = {
+        chooseKit: (context: ReturnType<typeof planningContext>) =>
+          optimiseKit(context.problem, context.judge, { maxRounds: 3 }),
+      };
+      const stopped = planTrip(trip, stopOnRound3);
+      if (stopped.status !== 'best-so-far' || !stopped.kit) continue;
+      for (const price of stopped.gramPrices) {
+        expect(['free', 'grams', 'nothing-feasible', 'unknown']).toContain(price.kind);
+        if (price.kind === 'grams') {
+          expect(price.extraG).toBeGreaterThanOrEqual(0);
+          expect(price.text).toContain('(about)');
+        }
+      }
+      // The reserve raise, priced directly: the repaired kit holds what it must and the raised trip's judge accepts it.
+      const context = planningContext(trip);
+      const base = optimiseKit(context.problem, context.judge, { maxRounds: 3 });
+      if (base.status !== 'best-so-far') continue;
+      const raised = planningContext({ ...trip, reserveShare: trip.reserveShare + 0.1 });
+      const price = gramPrice(base, raised.problem, raised.judge);
+      if (price.kind !== 'grams') continue;
+      priced++;
+      expect(price.approximate).toBe(true);
+      expect(price.extraG).toBe(price.kit.massG - base.kit.massG);
+      expect(raised.judge(kitCounts(price.kit.lines)).feasible).toBe(true);
+      expect(context.judge(kitCounts(base.kit.lines)).feasible).toBe(true);
+    }
+    expect(priced).toBeGreaterThan(0);
   });
 });

@@ -24,10 +24,16 @@ export interface IndexedAlternative {
  * @example alternativePresent({ items: [[0, 1]], anyOf: [2, 3] }, [1, 0, 0, 1]) // true
  */
 export function alternativePresent(alt: IndexedAlternative, counts: ArrayLike<number>): boolean {
-  return (
-    alt.items.every(([i, n]) => (counts[i] ?? 0) >= n) &&
-    (alt.anyOf.length === 0 || alt.anyOf.some((i) => (counts[i] ?? 0) >= 1))
-  );
+  // Plain loops: the master asks this for every node and alternative.
+  const items = alt.items;
+  for (let j = 0; j < items.length; j++) {
+    const [i, n] = items[j] as readonly [number, number];
+    if ((counts[i] ?? 0) < n) return false;
+  }
+  const anyOf = alt.anyOf;
+  if (anyOf.length === 0) return true;
+  for (let j = 0; j < anyOf.length; j++) if ((counts[anyOf[j] as number] ?? 0) >= 1) return true;
+  return false;
 }
 
 /** An item the model keeps. */

@@ -194,25 +194,30 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     return g;
   };
 
-  /** Dominance: i packed ⇒ j at its full count. False when the node holds no kit. */
-  const propagate = (lb: Uint8Array, ub: Uint8Array): boolean => {
+  /**
+   * Dominance: i packed ⇒ j at its full count. −1 when the node holds no kit; otherwise how many floors it raised (a
+   * child whose floor it left alone has its grams and units from its parent's and its own raise).
+   */
+  const propagate = (lb: Uint8Array, ub: Uint8Array): number => {
+    let raised = 0;
     for (let changed = true; changed;) {
       changed = false;
       for (const [i, j] of pre.dominance) {
         const full = owned[j] ?? 0;
         if ((lb[i] ?? 0) >= 1 && (lb[j] ?? 0) < full) {
-          if ((ub[j] ?? 0) < full) return false;
+          if ((ub[j] ?? 0) < full) return -1;
           lb[j] = full;
+          raised++;
           changed = true;
         }
         if ((ub[j] ?? 0) < full && (ub[i] ?? 0) > 0) {
-          if ((lb[i] ?? 0) > 0) return false;
+          if ((lb[i] ?? 0) > 0) return -1;
           ub[i] = 0;
           changed = true;
         }
       }
     }
-    return true;
+    return raised;
   };
 
   /** Every row so far, in birth order: the path rows, then each cut's as it first comes. */
@@ -362,12 +367,21 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         const childLb = lb.slice();
         const childUb = siblingsUb.slice();
         let possible = true;
+        let addedG = 0;
+        let addedUnits = 0;
         for (const [i, k] of raise) {
           if ((childUb[i] ?? 0) < k) possible = false;
-          if ((childLb[i] ?? 0) < k) childLb[i] = k;
+          const more = k - (childLb[i] as number);
+          if (more > 0) {
+            childLb[i] = k;
+            addedG += more * (massG[i] as number);
+            addedUnits += more;
+          }
         }
-        if (possible && propagate(childLb, childUb)) {
-          const floorG = gramsOf(childLb);
+        const raisedByDominance = possible ? propagate(childLb, childUb) : -1;
+        if (raisedByDominance >= 0) {
+          // Summing the floor over every item for each of a node's children (dozens at 200 items) cost more than the rest.
+          const floorG = raisedByDominance === 0 ? node.floorG + addedG : gramsOf(childLb);
           open.push({
             lb: childLb,
             ub: childUb,
@@ -378,7 +392,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
             checked: false,
             surrogateDue: false,
             broken: null,
-            units: packedUnits(childLb),
+            units: raisedByDominance === 0 ? node.units + addedUnits : packedUnits(childLb),
           });
         }
         // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
@@ -390,7 +404,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       if (raises !== unmet) {
         // The other half of the two-way split: the item kept below the count (the row is checked again there).
         const childLb = lb.slice();
-        if (propagate(childLb, siblingsUb))
+        if (propagate(childLb, siblingsUb) >= 0)
           open.push({
             lb: childLb,
             ub: siblingsUb,
@@ -468,7 +482,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     started = true;
     const lb = new Uint8Array(n);
     const ub = Uint8Array.from(owned);
-    if (propagate(lb, ub))
+    if (propagate(lb, ub) >= 0)
       heap.push({
         lb,
         ub,

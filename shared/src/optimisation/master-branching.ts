@@ -187,6 +187,11 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
 
   /** The packed items of the node being checked (one buffer for the search). */
   const packed: Packed = { items: new Int32Array(n), length: 0 };
+  /** Lists a floor's packed items in `packed`. */
+  const packFloor = (lb: Uint8Array): void => {
+    packed.length = 0;
+    for (let i = 0; i < n; i++) if ((lb[i] as number) > 0) packed.items[packed.length++] = i;
+  };
 
   const gramsOf = (lb: Uint8Array): number => {
     let g = 0;
@@ -285,8 +290,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
       // Checked itself against every row already: its bound and broken row are up to date.
       if (node.checked && node.seen === newest) return true;
-      packed.length = 0;
-      for (let i = 0; i < n; i++) if ((lb[i] as number) > 0) packed.items[packed.length++] = i;
+      packFloor(lb);
       let needG = -1;
       let broken: CoverRow | null = null;
       const stillBroken: BornRow[] = [];
@@ -339,8 +343,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
      */
     const surrogateOf = (node: OpenNode): number => {
       const { lb, ub } = node;
-      packed.length = 0;
-      for (let i = 0; i < n; i++) if ((lb[i] as number) > 0) packed.items[packed.length++] = i;
+      packFloor(lb);
       const rows = node.pending ?? [];
       for (const born of rows) if (born.row.energy) born.row.need(lb, ub, packed);
       return surrogateNeedG(rows, lb, ub, massG);

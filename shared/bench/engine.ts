@@ -6,10 +6,10 @@
 import { panelPowerSeries } from '../src/harvest/panel-series.js';
 import type { UsbPanelSpec } from '../src/schemas/items.js';
 import type { KitEntry, TripDevice } from '../src/schemas/kit.js';
-import { tripSolarInputSchema } from '../src/schemas/trip-solar.js';
 import { isKitFeasible, simulateKit } from '../src/simulation/simulate-kit.js';
 import { computeTripSolar } from '../src/sun/trip-solar.js';
 import { testBank, testBoostConverter, testLead, testPhone, testRadio, testUsbPanel } from '../src/testing/fixtures.js';
+import { summerTripSolarInput } from '../src/testing/random-planning.js';
 import { measure } from './measure.js';
 
 function tenItemKit(): KitEntry[] {
@@ -44,14 +44,7 @@ const devices: TripDevice[] = [
 export function benchEngine(): void {
   console.log('\nEnergy engine (10 kit lines, 3 devices, 4 design skies)');
   for (const nights of [14, 60]) {
-    const solarInput = tripSolarInputSchema.parse({
-      latitudeDeg: 46.5,
-      longitudeDeg: 9.8,
-      timeZone: 'Europe/Zurich',
-      startDate: '2027-07-10',
-      nights,
-      temperatures: { lowC: 4, highC: 19 },
-    });
+    const solarInput = summerTripSolarInput(nights);
     measure(`computeTripSolar, ${nights} nights hourly`, () => computeTripSolar(solarInput));
     const solar = computeTripSolar(solarInput);
     const kit = tenItemKit();

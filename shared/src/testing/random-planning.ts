@@ -488,6 +488,22 @@ export function randomPlanningInput(random: Random, options: RandomPlanningOptio
 }
 
 /**
+ * The sun and temperatures of the invented summer trip the benchmarks use: 46.5° N from 10 July 2027, lows of 4 °C and
+ * highs of 19 °C.
+ * @example summerTripSolarInput(14).nights // 14
+ */
+export function summerTripSolarInput(nights: number): TripSolarInput {
+  return tripSolarInputSchema.parse({
+    latitudeDeg: 46.5,
+    longitudeDeg: 9.8,
+    timeZone: 'Europe/Zurich',
+    startDate: '2027-07-10',
+    nights,
+    temperatures: { lowC: 4, highC: 19 },
+  });
+}
+
+/**
  * A summer trip at 46.5° N in the "mixed" sky, with a phone, a headlamp and a 12 V radio, and a locker of `items` types
  * of invented USB gear (up to 2 owned each) — the benchmarks' planning input, and the tests' large locker.
  * @example summerTripInput(seededRandom(50), 50, 14).gear.length // 50
@@ -499,14 +515,7 @@ export function summerTripInput(random: Random, items: number, nights: number): 
     { deviceId: 'radio', spec: randomRadio(random) },
   ];
   return {
-    solarInput: tripSolarInputSchema.parse({
-      latitudeDeg: 46.5,
-      longitudeDeg: 9.8,
-      timeZone: 'Europe/Zurich',
-      startDate: '2027-07-10',
-      nights,
-      temperatures: { lowC: 4, highC: 19 },
-    }),
+    solarInput: summerTripSolarInput(nights),
     devices,
     deviceNames: { phone: 'the phone', headlamp: 'the headlamp', radio: 'the radio' },
     gear: randomLocker(random, {

@@ -119,6 +119,8 @@ export interface KitSearchOptions extends OptimiseOptions {
   masterNodeLimit?: number;
   /** Open nodes the master may hold before the search stops (default `maxOpenNodes`; tests lower it). */
   masterOpenLimit?: number;
+  /** Active items from which `optimiseKit` solves a core of the locker first (default `coreSearchMinItems`). */
+  coreMinItems?: number;
 }
 
 const stillClock = (): number => 0;

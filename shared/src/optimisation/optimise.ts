@@ -1,6 +1,7 @@
 import { adaptiveBatches, tryInBatches } from './batch-trials.js';
 import { dailyBalance } from './daily-balance.js';
-import { kitLines, kitMassG, kitNoLarger } from './kit.js';
+import { coreBudgetShare, coreLocker, coreSearchMaxMs, coreSearchMinItems, restrictedTo } from './core-locker.js';
+import { kitCounts, kitLines, kitMassG, kitNoLarger } from './kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
 import type {
   KitCandidate,
@@ -108,7 +109,52 @@ export function optimiseKit(
   options: KitSearchOptions = {},
   search: KitSearch = createKitSearch(problem, judge, options),
 ): OptimiseAnswer {
-  const deadlineMs = options.timeBudgetMs === undefined ? Infinity : search.now() + options.timeBudgetMs;
+  const startMs = search.now();
+  const coreNote = searchCoreFirst(search, judge, options);
+  const answer = optimiseLocker(problem, options, search, startMs);
+  return coreNote && answer.status === 'best-so-far' ? { ...answer, notes: [...answer.notes, coreNote] } : answer;
+}
+
+/**
+ * On a large locker (`coreSearchMinItems` active items or more), solves its core first (`coreLocker`) within a share
+ * of the time and has `search` judge the core's kit, so the search over the whole locker starts with it as its
+ * lightest accepted kit: a stopped search then repairs from it, and a search that accepts nothing never grows a
+ * proposal to the whole locker. On the 200-item bench lockers over 30 nights (seeds 200–206) with a 1 s budget the
+ * answers went from 4,437 / 837 / 1,870 / 1,178 / 4,349 / 2,467 / 68,479 g (the whole locker, after 3.3 s) to
+ * 1,680 / 717 / 994 / 725 / 1,151 / 1,677 / 933 g; with 5 s from 1,526 / 733 / 1,870 / 689 / 1,118 / 1,640 / 924 g to
+ * 1,531 / 730 / 994 / 689 / 1,116 / 1,632 / 924 g. Returns a note for a stopped answer, or undefined when no core was
+ * searched.
+ */
+function searchCoreFirst(search: KitSearch, judge: KitJudge, options: KitSearchOptions): string | undefined {
+  const pre = search.presolved;
+  if (pre.items.length < (options.coreMinItems ?? coreSearchMinItems) || pre.missingNeeds.length > 0) return undefined;
+  const core = coreLocker(pre);
+  if (core.size >= pre.items.length) return undefined;
+  const coreProblem = restrictedTo(pre, core);
+  const budgetMs =
+    options.timeBudgetMs === undefined
+      ? coreSearchMaxMs
+      : Math.min(coreSearchMaxMs, options.timeBudgetMs * coreBudgetShare);
+  const coreOptions: KitSearchOptions = { ...options, timeBudgetMs: budgetMs };
+  const coreSearch = createKitSearch(coreProblem, judge, coreOptions);
+  const answer = optimiseLocker(coreProblem, coreOptions, coreSearch, search.now());
+  // The plan's figures count the core search's work too.
+  search.stats.rounds += coreSearch.stats.rounds;
+  search.stats.judgedKits += coreSearch.stats.judgedKits;
+  if (answer.status === 'nothing-feasible') return undefined;
+  const verdict = search.judge(kitCounts(answer.kit.lines));
+  if (!verdict.feasible) return undefined;
+  return `A first search over ${core.size} of the ${pre.items.length} items in play (the stores and panels with the most Wh per gram and the lightest ones, and the lightest charging paths) found a ${answer.kit.massG.toLocaleString('en-GB')} g kit${answer.status === 'best-so-far' ? ' before it stopped' : ''}.`;
+}
+
+/** The search over the whole locker of `search` (see `optimiseKit`), its time budget counted from `startMs`. */
+function optimiseLocker(
+  problem: OptimisationProblem,
+  options: KitSearchOptions,
+  search: KitSearch,
+  startMs: number,
+): OptimiseAnswer {
+  const deadlineMs = options.timeBudgetMs === undefined ? Infinity : startMs + options.timeBudgetMs;
   const locker = wholeLocker(problem);
   // The judge is monotone: if the whole locker runs dry, every kit does, and a kit accepted proves the locker keeps up.
   // So the locker, the largest simulation of all, is not judged up front (the 50-item bench locker: 8–13 ms of a 100 ms

@@ -144,7 +144,7 @@ function searchCoreFirst(search: KitSearch, judge: KitJudge, options: KitSearchO
   if (answer.status === 'nothing-feasible') return undefined;
   const verdict = search.judge(kitCounts(answer.kit.lines));
   if (!verdict.feasible) return undefined;
-  return `A first search over ${core.size} of the ${pre.items.length} items in play (the stores and panels with the most Wh per gram and the lightest ones, and the lightest charging paths) found a ${answer.kit.massG.toLocaleString('en-GB')} g kit${answer.status === 'best-so-far' ? ' before it stopped' : ''}.`;
+  return `A quicker first search over ${core.size} of the ${pre.items.length} usable items (the stores and panels with the most Wh per gram, the lightest ones, and the lightest charging paths) found a ${answer.kit.massG.toLocaleString('en-GB')} g kit${answer.status === 'best-so-far' ? ' before it too stopped' : ''}.`;
 }
 
 /** The search over the whole locker of `search` (see `optimiseKit`), its time budget counted from `startMs`. */

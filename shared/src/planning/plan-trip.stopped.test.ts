@@ -11,7 +11,7 @@ import { summerTripInput } from '../testing/random-planning.js';
 import { planningContext } from './build-problem.js';
 import { gramsText } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';
-import { planTrip } from './plan-trip.js';
+import { namedBoundShare, planTrip } from './plan-trip.js';
 
 /** Eight nights at 46.5° N in July with a phone, a headlamp and a 12 V radio, and 30 item types of invented gear. */
 const input = (seed: number): PlanningInput => summerTripInput(seededRandom(seed), 30, 8);
@@ -71,5 +71,31 @@ describe('a plan whose search stops early', () => {
       expect(context.judge(kitCounts(base.kit.lines)).feasible).toBe(true);
     }
     expect(priced).toBeGreaterThan(0);
+  });
+  it('names its bound only when the bound is at least half the kit (one far below tells the hiker nothing)', () => {
+    let seen = 0;
+    for (let seed = 1; seed <= 12 && seen < 2; seed++) {
+      const trip = input(seed);
+      const withBound = (share: number) =>
+        planTrip(trip, {
+          withExtras: false,
+          chooseKit: (context) => {
+            const answer = optimiseKit(context.problem, context.judge, { maxRounds: 3 });
+            return answer.status === 'best-so-far'
+              ? { ...answer, lowerBoundG: Math.ceil(share * answer.kit.massG) }
+              : answer;
+          },
+        });
+      const low = withBound(namedBoundShare - 0.1);
+      if (low.status !== 'best-so-far' || !low.kit) continue;
+      seen++;
+      expect(low.headline).not.toContain('none under');
+      expect(low.headline).toContain('but a lighter one may exist');
+      const high = withBound(namedBoundShare + 0.1);
+      expect(high.headline).toContain(
+        `none under ${gramsText(Math.ceil((namedBoundShare + 0.1) * (high.kit?.massG ?? 0)))}`,
+      );
+    }
+    expect(seen).toBeGreaterThan(0);
   });
 });

@@ -53,13 +53,18 @@ function headline(
       return `Nothing that works fits under ${gramsText(answer.gramLimitG)}: the lightest kit that does weighs ${gramsText(answer.kit.massG)}, ${gramsText(answer.overLimitG)} over the limit.`;
     case 'best-so-far':
       // The model's bound holds for every kit it had not yet cut off (the cut-off ones were rejected): none lighter works.
-      return answer.lowerBoundG > 0 && answer.lowerBoundG < answer.kit.massG
+      // A bound far below the kit (a search stopped after a round or two: "none under 128 g" for a 1,532 g kit) tells
+      // the hiker nothing, so it is named only from `namedBoundShare` of the kit's grams up.
+      return answer.lowerBoundG >= namedBoundShare * answer.kit.massG && answer.lowerBoundG < answer.kit.massG
         ? `The search stopped early: this kit works (${gramsText(answer.kit.massG)}); a lighter one may exist, but none under ${gramsText(answer.lowerBoundG)}. ${verdictText ?? ''}`.trim()
         : `The search stopped early: this kit works (${gramsText(answer.kit.massG)}), but a lighter one may exist. ${verdictText ?? ''}`.trim();
     case 'nothing-feasible':
       return `No kit from this gear keeps every device charged. ${missingText}`.trim();
   }
 }
+
+/** The least share of the kit's grams a stopped search's lower bound must reach to be named in the headline. */
+export const namedBoundShare = 0.5;
 
 /** Names devices in a sentence the simulation wrote with device ids. */
 function withDeviceNames(context: PlanningContext, text: string): string {

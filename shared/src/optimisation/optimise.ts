@@ -120,9 +120,10 @@ export function optimiseKit(
  * of the time and has `search` judge the core's kit, so the search over the whole locker starts with it as its
  * lightest accepted kit: a stopped search then repairs from it, and a search that accepts nothing never grows a
  * proposal to the whole locker. On the 200-item bench lockers over 30 nights (seeds 200–206) with a 1 s budget the
- * answers went from 4,437 / 837 / 1,870 / 1,178 / 4,349 / 2,467 / 68,479 g (the whole locker, after 3.3 s) to
- * 1,680 / 717 / 994 / 725 / 1,151 / 1,677 / 933 g; with 5 s from 1,526 / 733 / 1,870 / 689 / 1,118 / 1,640 / 924 g to
- * 1,531 / 730 / 994 / 689 / 1,116 / 1,632 / 924 g. Returns a note for a stopped answer, or undefined when no core was
+ * answers went from 4,437–4,531 / 783–837 / 1,870–3,968 / 1,178 / 1,623–4,349 / 2,467–64,214 / 4,479–68,479 g (the
+ * whole locker, after 3.3 s) to 1,527–2,200 / 717–769 / 994 / 725–875 / 1,151 / 1,666–1,712 / 933 g over 2–4 runs; with
+ * 5 s from 1,526 / 733 / 1,870 / 689 / 1,118 / 1,640 / 924 g to 1,531 / 730 / 994 / 689 / 1,116 / 1,632 / 924 g.
+ * Returns a note for a stopped answer, or undefined when no core was
  * searched.
  */
 function searchCoreFirst(search: KitSearch, judge: KitJudge, options: KitSearchOptions): string | undefined {

@@ -7,7 +7,15 @@
 import { describe, expect, it } from 'vitest';
 import { kitCounts, kitMassG, kitNoLarger } from './kit.js';
 import { createKitSearch } from './kit-search.js';
-import { findSwaps, greedyShave, growToFeasible, optimiseKit, repairNearProposals, shaveGraceMs } from './optimise.js';
+import {
+  findSwaps,
+  greedyShave,
+  growToFeasible,
+  heavierSwapsOf,
+  optimiseKit,
+  repairNearProposals,
+  shaveGraceMs,
+} from './optimise.js';
 import { exhaustiveLightestKit } from './oracle.js';
 import {
   randomSyntheticWorld,
@@ -140,6 +148,43 @@ describe('a stopped search', () => {
       if (swaps.length > 0) withSwaps++;
     }
     expect(withSwaps).toBeGreaterThan(5);
+  });
+
+  it('also offers the answer with a unit swapped for a heavier one of its kind: each works, none holds the answer or an earlier swap, lightest first', () => {
+    let fromHeavier = 0;
+    for (const { problem, judge } of feasibleWorlds(75_001)) {
+      // A master that may hold one open node stops every solve: the swaps come only from what a stopped search offers.
+      const options = { masterOpenLimit: 1, tieBreakByMargin: false };
+      const search = createKitSearch(problem, judge, options);
+      const answer = optimiseKit(problem, judge, options, search);
+      if (answer.status !== 'best-so-far') continue;
+      const base = kitCounts(answer.kit.lines);
+      const swaps = findSwaps(problem, judge, answer.kit, {}, search);
+      // The swapped kits that none of the repairs shaved: a swap among them came from the swapping.
+      const shaved = new Set(search.shavedKits.map((kit) => [...kit].sort().join()));
+      const heavier = heavierSwapsOf(problem.candidates, base)
+        .map((kit) => [...kit].sort().join())
+        .filter((key) => !shaved.has(key));
+      const kits = [base];
+      let lastG = -Infinity;
+      for (const swap of swaps) {
+        const kit = kitCounts(swap.kit.lines);
+        expect(judge(kit).feasible).toBe(true);
+        for (const earlier of kits) expect(kitNoLarger(earlier, kit)).toBe(false);
+        expect(swap.kit.massG).toBeGreaterThanOrEqual(lastG);
+        lastG = swap.kit.massG;
+        kits.push(kit);
+        if (heavier.includes([...kit].sort().join())) fromHeavier++;
+      }
+      // Each swapped kit is one unit of a line for one of the next heavier items of the same kind, not all packed.
+      for (const kit of heavierSwapsOf(problem.candidates, base)) {
+        const units = (k: Map<string, number>) => [...k.values()].reduce((a, b) => a + b, 0);
+        expect(units(kit)).toBe(units(base));
+        expect(kitMassG(kit, problem.candidates)).toBeGreaterThan(answer.kit.massG);
+        for (const c of problem.candidates) expect(kit.get(c.itemId) ?? 0).toBeLessThanOrEqual(c.ownedCount);
+      }
+    }
+    expect(fromHeavier).toBeGreaterThan(0);
   });
 
   it('grows no kit past its deadline (the caller then shaves the whole locker)', () => {

@@ -2,9 +2,10 @@ import type { ActiveItem, IndexedAlternative, PresolvedProblem } from './presolv
 import type { OptimisationProblem } from './types.js';
 
 /**
- * Active items above which a search first solves a core of the locker (`coreLocker`): the master's branch and bound
- * stays small up to about 60 items over 30 nights; at 188 (the 200-item bench locker) its open nodes outgrow the
- * cap after a few rounds, while a 50-item core of the same locker is solved to its optimum in about a second.
+ * Active items from which a search first solves a core of the locker (`coreLocker`): at 188 (the 200-item bench
+ * locker, 30 nights) the master's open nodes outgrow their cap after about 19 rounds, while a core of about 30 of its
+ * items is most often solved to its optimum in under a second (seed 200's in 2.3 s), and a 61-item subset in 1.5 s; a
+ * 77-item one stopped unproven after 3 s.
  */
 export const coreSearchMinItems = 80;
 
@@ -25,14 +26,18 @@ export const corePathsPerNeed = 4;
 /** The share of a time budget a core search may take; the rest goes to the search over the whole locker. */
 export const coreBudgetShare = 0.5;
 
-/** The most a core search may take, ms (the 200-item bench cores, seeds 200–208, took 0.1–0.6 s but two: 2.3 s and 3.2 s). */
+/**
+ * The most a core search may take, ms (the 200-item bench cores, seeds 200–208, took 0.1–0.6 s but two: 2.3 s, and
+ * 3.2 s stopped).
+ */
 export const coreSearchMaxMs = 3_000;
 
 /**
  * The items of a large locker that a quick first search looks at: the stores and panels with the most Wh per gram and
  * the lightest ones (`coreDensestPerRole`, `coreLightestPerRole`), and the items of each device's lightest charging
- * paths that fit those stores (`corePathsPerNeed`), likewise for what switches a panel group on. The core's lightest kit is a kit of the
- * whole locker too, so it is a sound answer so far, and the search over the whole locker only has to beat it.
+ * paths that fit those stores (`corePathsPerNeed`), likewise for what switches a panel group on. The core's lightest
+ * kit is a kit of the whole locker too, so it is a sound answer so far, and the search over the whole locker only has
+ * to beat it.
  * Source: restricting a MILP to a promising core of its variables is the core approach of knapsack and set-covering
  * heuristics (E. Balas and E. Zemel, An algorithm for large zero-one knapsack problems, Operations Research 28(5),
  * 1980; A. Caprara, M. Fischetti and P. Toth, A heuristic method for the set covering problem, Operations Research

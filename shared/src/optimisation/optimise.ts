@@ -123,8 +123,7 @@ export function optimiseKit(
  * answers went from 4,437–4,531 / 783–837 / 1,870–3,968 / 1,178 / 1,623–4,349 / 2,467–64,214 / 4,479–68,479 g (the
  * whole locker, after 3.3 s) to 1,527–2,200 / 717–769 / 994 / 725–875 / 1,151 / 1,666–1,712 / 933 g over 2–4 runs; with
  * 5 s from 1,526 / 733 / 1,870 / 689 / 1,118 / 1,640 / 924 g to 1,531 / 730 / 994 / 689 / 1,116 / 1,632 / 924 g.
- * Returns a note for a stopped answer, or undefined when no core was
- * searched.
+ * Returns a note for a stopped answer, or undefined when no core was searched.
  */
 function searchCoreFirst(search: KitSearch, judge: KitJudge, options: KitSearchOptions): string | undefined {
   const pre = search.presolved;

@@ -56,9 +56,9 @@ export function coreLocker(
   const indices = pre.items.map((_, i) => i);
   const gramsOf = (i: number): number => (pre.items[i] as ActiveItem).candidate.massG;
   const pickBest = (role: number[], whOf: (it: ActiveItem) => number): void => {
-    const byDensity = [...role].sort(
-      (a, b) => whOf(pre.items[b] as ActiveItem) / gramsOf(b) - whOf(pre.items[a] as ActiveItem) / gramsOf(a) || a - b,
-    );
+    // Each item's Wh per gram worked out once (a panel's sums its whole sky-by-day grid), not at every comparison.
+    const density = new Map(role.map((i) => [i, whOf(pre.items[i] as ActiveItem) / gramsOf(i)]));
+    const byDensity = [...role].sort((a, b) => (density.get(b) ?? 0) - (density.get(a) ?? 0) || a - b);
     const byGrams = [...role].sort((a, b) => gramsOf(a) - gramsOf(b) || a - b);
     for (const i of [...byDensity.slice(0, sizes.densest), ...byGrams.slice(0, sizes.lightest)]) keep.add(i);
   };

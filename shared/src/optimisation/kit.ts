@@ -42,6 +42,19 @@ export function kitMassG(counts: KitCounts, candidates: readonly KitCandidate[])
 }
 
 /**
+ * The kit with one unit of `fromId` taken out (its line gone at zero) and, when given, one unit of `toId` put in.
+ * @example withOneSwapped(new Map([['a', 1]]), 'a', 'b') // Map { 'b' => 1 }
+ */
+export function withOneSwapped(kit: KitCounts, fromId: string, toId?: string): Map<string, number> {
+  const next = new Map(kit);
+  const left = (next.get(fromId) ?? 0) - 1;
+  if (left > 0) next.set(fromId, left);
+  else next.delete(fromId);
+  if (toId !== undefined) next.set(toId, (next.get(toId) ?? 0) + 1);
+  return next;
+}
+
+/**
  * Whether kit `a` holds no more of any item than kit `b` (a ≤ b item by item).
  * @example kitNoLarger(new Map([['a', 1]]), new Map([['a', 2]])) // true
  */

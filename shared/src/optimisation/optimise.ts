@@ -1,7 +1,7 @@
 import { adaptiveBatches, tryInBatches } from './batch-trials.js';
 import { dailyBalance } from './daily-balance.js';
 import { coreBudgetShare, coreLocker, coreSearchMaxMs, coreSearchMinItems, restrictedTo } from './core-locker.js';
-import { kitCounts, kitLines, kitMassG, kitNoLarger } from './kit.js';
+import { kitCounts, kitLines, kitMassG, kitNoLarger, withOneSwapped } from './kit.js';
 import { createKitSearch, type KitSearch, type KitSearchOptions, type SearchStep } from './kit-search.js';
 import type {
   KitCandidate,
@@ -334,10 +334,11 @@ export interface JudgedKit {
  * A kit the judge accepts that holds `proposal`: the proposal plus the shortest run, in a fixed order, of the other
  * items at their counts owned — stores and panels first, then leads, converters and controllers, each lightest first
  * (the master's proposal already holds a path for every device, so energy is what it most often lacks; leads and
- * converters first filled a 1 s plan on the 200-item bench locker with them: 7,000–8,750 g against 3,300–5,100 g) — found by galloping and bisection on the run's length (all of it gives the whole locker, which
- * the caller has judged feasible; the judge is monotone, so a longer run is never worse). About 2 log₂(run) simulations
- * of kits little larger than the proposal instead of a shave from the whole locker. Undefined past `deadlineMs`, or
- * when even the whole locker runs dry.
+ * converters first filled a 1 s plan on the 200-item bench locker with them: 7,000–8,750 g against 3,300–5,100 g) —
+ * found by galloping and bisection on the run's length (all of it gives the whole locker, which the caller has judged
+ * feasible; the judge is monotone, so a longer run is never worse). About 2 log₂(run) simulations of kits little
+ * larger than the proposal instead of a shave from the whole locker. Undefined past `deadlineMs`, or when even the
+ * whole locker runs dry.
  * @example growToFeasible(search, proposal, locker, Infinity) // holds proposal; the judge accepts it
  */
 export function growToFeasible(
@@ -480,13 +481,7 @@ export function heavierSwapsOf(candidates: readonly KitCandidate[], kit: KitCoun
       .filter((c) => c.kind === item.kind && c.massG > item.massG && (kit.get(c.itemId) ?? 0) < c.ownedCount)
       .sort((a, b) => a.massG - b.massG || (a.itemId < b.itemId ? -1 : 1))
       .slice(0, heavierSwapsPerLine);
-    for (const other of heavier) {
-      const next = new Map(kit);
-      if (n === 1) next.delete(id);
-      else next.set(id, n - 1);
-      next.set(other.itemId, (next.get(other.itemId) ?? 0) + 1);
-      swapped.push(next);
-    }
+    for (const other of heavier) swapped.push(withOneSwapped(kit, id, other.itemId));
   }
   return swapped;
 }

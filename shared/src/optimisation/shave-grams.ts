@@ -1,4 +1,4 @@
-import { kitLines, kitMassG } from './kit.js';
+import { kitLines, kitMassG, withOneSwapped } from './kit.js';
 import type { KitCandidate, KitCounts, KitJudge, KitShave } from './types.js';
 
 /**
@@ -15,22 +15,21 @@ export function shaveGrams(candidates: readonly KitCandidate[], judge: KitJudge,
     const massG = kitMassG(counts, candidates);
     if (massG >= baseG) return;
     const verdict = judge(counts);
-    if (verdict.feasible) shaves.push({ change, kit: { lines: kitLines(counts), massG, verdict }, savedG: baseG - massG });
+    if (verdict.feasible)
+      shaves.push({ change, kit: { lines: kitLines(counts), massG, verdict }, savedG: baseG - massG });
   };
   const lines = kitLines(kit);
   for (const line of lines) {
     const item = byId.get(line.itemId);
     if (!item) continue;
-    const less = new Map(kit);
-    less.set(line.itemId, line.count - 1);
-    if (less.get(line.itemId) === 0) less.delete(line.itemId);
-    tryKit({ kind: 'remove', itemId: line.itemId }, less);
+    tryKit({ kind: 'remove', itemId: line.itemId }, withOneSwapped(kit, line.itemId));
     for (const other of candidates) {
       if (other.itemId === item.itemId || other.kind !== item.kind || other.massG >= item.massG) continue;
       if ((kit.get(other.itemId) ?? 0) >= other.ownedCount) continue;
-      const swapped = new Map(less);
-      swapped.set(other.itemId, (swapped.get(other.itemId) ?? 0) + 1);
-      tryKit({ kind: 'replace', itemId: item.itemId, withItemId: other.itemId }, swapped);
+      tryKit(
+        { kind: 'replace', itemId: item.itemId, withItemId: other.itemId },
+        withOneSwapped(kit, item.itemId, other.itemId),
+      );
     }
   }
   return shaves.sort((a, b) => a.kit.massG - b.kit.massG || describe(a).localeCompare(describe(b)));

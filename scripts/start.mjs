@@ -18,8 +18,12 @@ const host = process.env.HOST ?? '0.0.0.0';
 await app.listen(port, host);
 
 const shownHost = host === '0.0.0.0' ? 'localhost' : host;
-console.log(`\nGramwatt is running at http://${shownHost}:${port} (ready in ${Math.round(performance.now() - startedMs)} ms)`);
-console.log(seeded ? 'The invented demo scenario was loaded into the empty database.' : 'Database already had accounts.');
+console.log(
+  `\nGramwatt is running at http://${shownHost}:${port} (ready in ${Math.round(performance.now() - startedMs)} ms)`,
+);
+console.log(
+  seeded ? 'The invented demo scenario was loaded into the empty database.' : 'Database already had accounts.',
+);
 for (const line of demoSignInLines()) console.log(line);
 
 async function stop() {

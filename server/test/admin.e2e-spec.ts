@@ -65,7 +65,12 @@ describe('admin accounts', () => {
     expect(disabled.body.account).toMatchObject({ id: member.id, disabled: true, role: 'member' });
     await memberAgent.get('/api/auth/me').expect(401);
 
-    await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(adminToken)).send({ disabled: false }).expect(200);
+    await t
+      .http()
+      .patch(`/api/admin/accounts/${member.id}`)
+      .set(bearer(adminToken))
+      .send({ disabled: false })
+      .expect(200);
     await memberAgent.get('/api/auth/me').expect(200);
   });
 
@@ -75,7 +80,12 @@ describe('admin accounts', () => {
     const firstToken = await signInToken(t, first.email);
     const secondToken = await signInToken(t, second.email);
 
-    await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(firstToken)).send({ role: 'member' }).expect(200);
+    await t
+      .http()
+      .patch(`/api/admin/accounts/${second.id}`)
+      .set(bearer(firstToken))
+      .send({ role: 'member' })
+      .expect(200);
     await t.http().get('/api/admin/accounts').set(bearer(secondToken)).expect(403);
     await t.http().get('/api/auth/me').set(bearer(secondToken)).expect(200);
   });
@@ -86,7 +96,12 @@ describe('admin accounts', () => {
       await insertAccount(t.db);
       const token = await signInToken(t, admin.email);
 
-      const demote = await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+      const demote = await t
+        .http()
+        .patch(`/api/admin/accounts/${admin.id}`)
+        .set(bearer(token))
+        .send({ role: 'member' })
+        .expect(409);
       expect(demote.body).toEqual({
         statusCode: 409,
         message: 'The last active admin cannot be demoted or disabled',
@@ -137,7 +152,12 @@ describe('admin accounts', () => {
     it('an admin may re-confirm their own role (no change is not a demotion)', async () => {
       const admin = await insertAccount(t.db, { role: 'admin' });
       const token = await signInToken(t, admin.email);
-      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'admin', disabled: false }).expect(200);
+      await t
+        .http()
+        .patch(`/api/admin/accounts/${admin.id}`)
+        .set(bearer(token))
+        .send({ role: 'admin', disabled: false })
+        .expect(200);
     });
   });
 
@@ -149,10 +169,20 @@ describe('admin accounts', () => {
     const empty = await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({}).expect(400);
     expect(empty.body.errors).toEqual([{ path: 'role', message: 'Give a role or a disabled flag' }]);
 
-    const badRole = await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({ role: 'owner' }).expect(400);
+    const badRole = await t
+      .http()
+      .patch(`/api/admin/accounts/${member.id}`)
+      .set(bearer(token))
+      .send({ role: 'owner' })
+      .expect(400);
     expect(badRole.body.errors[0].path).toBe('role');
 
-    const badId = await t.http().patch('/api/admin/accounts/not-a-uuid').set(bearer(token)).send({ role: 'admin' }).expect(400);
+    const badId = await t
+      .http()
+      .patch('/api/admin/accounts/not-a-uuid')
+      .set(bearer(token))
+      .send({ role: 'admin' })
+      .expect(400);
     expect(badId.body.errors).toEqual([{ path: 'id', message: 'Not an account id' }]);
 
     const missing = await t

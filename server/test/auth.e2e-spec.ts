@@ -54,7 +54,11 @@ describe('auth', () => {
 
     it('stores an argon2id hash, never the password', async () => {
       const email = uniqueEmail();
-      await t.http().post('/api/auth/sign-up').send({ email, password: testPassword, displayName: 'Hasher' }).expect(201);
+      await t
+        .http()
+        .post('/api/auth/sign-up')
+        .send({ email, password: testPassword, displayName: 'Hasher' })
+        .expect(201);
       const [row] = await t.db.select().from(accounts).where(eq(accounts.email, email));
       expect(row?.passwordHash).toMatch(/^\$argon2id\$v=19\$m=19456,t=2,p=1\$/);
       expect(row?.passwordHash).not.toContain(testPassword);
@@ -91,7 +95,11 @@ describe('auth', () => {
 
     it('answers 409 for a taken e-mail, whatever its case', async () => {
       const email = uniqueEmail();
-      await t.http().post('/api/auth/sign-up').send({ email, password: testPassword, displayName: 'First' }).expect(201);
+      await t
+        .http()
+        .post('/api/auth/sign-up')
+        .send({ email, password: testPassword, displayName: 'First' })
+        .expect(201);
       const response = await t
         .http()
         .post('/api/auth/sign-up')
@@ -167,7 +175,11 @@ describe('auth', () => {
 
     it('accepts the e-mail in any case', async () => {
       const account = await insertAccount(t.db);
-      await t.http().post('/api/auth/sign-in').send({ email: account.email.toUpperCase(), password: testPassword }).expect(200);
+      await t
+        .http()
+        .post('/api/auth/sign-in')
+        .send({ email: account.email.toUpperCase(), password: testPassword })
+        .expect(200);
     });
   });
 
@@ -293,10 +305,16 @@ describe('auth configuration', () => {
   });
 
   it('marks the cookie Secure in production and honours a shorter token lifetime', async () => {
-    const t = await startTestApp({ env: { NODE_ENV: 'production', AUTH_TOKEN_LIFETIME_S: '600', AUTH_COOKIE_NAME: 'gw' } });
+    const t = await startTestApp({
+      env: { NODE_ENV: 'production', AUTH_TOKEN_LIFETIME_S: '600', AUTH_COOKIE_NAME: 'gw' },
+    });
     try {
       const account = await insertAccount(t.db);
-      const response = await t.http().post('/api/auth/sign-in').send({ email: account.email, password: testPassword }).expect(200);
+      const response = await t
+        .http()
+        .post('/api/auth/sign-in')
+        .send({ email: account.email, password: testPassword })
+        .expect(200);
       const cookie = sessionCookie(response.headers['set-cookie'], 'gw');
       expect(cookie?.attributes.has('secure')).toBe(true);
       expect(cookie?.attributes.get('max-age')).toBe('600');

@@ -25,21 +25,29 @@ const panelSpec: ItemSpec = {
 };
 
 async function insertItem(t: TestApp, owner: AccountRow, name = 'Test panel'): Promise<string> {
-  const [row] = await t.db.insert(lockerItems).values({ ownerId: owner.id, kind: 'panel', name, spec: panelSpec, massG: 310 }).returning();
+  const [row] = await t.db
+    .insert(lockerItems)
+    .values({ ownerId: owner.id, kind: 'panel', name, spec: panelSpec, massG: 310 })
+    .returning();
   if (!row) throw new Error('no item');
   return row.id;
 }
 
 /** A photo of noise: it does not compress, so the bytes are a real test of the round trip. */
 async function noisePhoto(width: number, height: number, format: 'png' | 'jpeg' | 'webp'): Promise<Buffer> {
-  return sharp(randomBytes(width * height * 3), { raw: { width, height, channels: 3 } }).toFormat(format).toBuffer();
+  return sharp(randomBytes(width * height * 3), { raw: { width, height, channels: 3 } })
+    .toFormat(format)
+    .toBuffer();
 }
 
 // Signatures from the format definitions: ELF e_ident (TIS ELF spec v1.2), the PE "MZ" DOS stub
 // (Microsoft PE Format specification), the PDF header (ISO 32000-1:2008, 7.5.2).
 const elfBytes = Buffer.concat([Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0x02, 0x01, 0x01, 0x00]), randomBytes(4096)]);
 const peBytes = Buffer.concat([Buffer.from('MZ', 'ascii'), Buffer.alloc(4094, 0x90)]);
-const pdfBytes = Buffer.from('%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
+const pdfBytes = Buffer.from(
+  '%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n',
+  'latin1',
+);
 
 const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
@@ -66,7 +74,14 @@ describe('locker files (in-memory store)', () => {
     await t.close();
   });
 
-  const upload = (token: string, itemId: string, bytes: Buffer, filename: string, purpose: string | undefined, contentType = 'image/jpeg') => {
+  const upload = (
+    token: string,
+    itemId: string,
+    bytes: Buffer,
+    filename: string,
+    purpose: string | undefined,
+    contentType = 'image/jpeg',
+  ) => {
     const req = t.http().post(`/api/locker/items/${itemId}/files`).set(bearer(token));
     if (purpose !== undefined) req.field('purpose', purpose);
     return req.attach('file', bytes, { filename, contentType });
@@ -77,7 +92,12 @@ describe('locker files (in-memory store)', () => {
     const photo = await noisePhoto(640, 480, 'jpeg');
     const created = await upload(aliceToken, itemId, photo, 'fold-out panel.jpg', 'photo').expect(201);
     const file = created.body.file;
-    expect(file).toMatchObject({ purpose: 'photo', contentType: 'image/jpeg', sizeBytes: photo.length, fileName: 'fold-out panel.jpg' });
+    expect(file).toMatchObject({
+      purpose: 'photo',
+      contentType: 'image/jpeg',
+      sizeBytes: photo.length,
+      fileName: 'fold-out panel.jpg',
+    });
     expect(file.url).toBe(`/api/locker/items/${itemId}/files/${file.id}`);
     expect(file.thumbUrl).toBe(`${file.url}/thumb`);
 
@@ -88,7 +108,9 @@ describe('locker files (in-memory store)', () => {
     expect(Buffer.compare(got.body as Buffer, photo)).toBe(0);
     expect(got.headers['content-type']).toBe('image/jpeg');
     expect(got.headers['x-content-type-options']).toBe('nosniff');
-    expect(got.headers['content-disposition']).toBe(`inline; filename="fold-out panel.jpg"; filename*=UTF-8''fold-out%20panel.jpg`);
+    expect(got.headers['content-disposition']).toBe(
+      `inline; filename="fold-out panel.jpg"; filename*=UTF-8''fold-out%20panel.jpg`,
+    );
     expect(Number(got.headers['content-length'])).toBe(photo.length);
 
     const thumb = await t.http().get(file.thumbUrl).set(bearer(aliceToken)).responseType('blob').expect(200);
@@ -107,7 +129,9 @@ describe('locker files (in-memory store)', () => {
 
   it('stores a PDF spec sheet as an attachment without a thumbnail', async () => {
     const itemId = await insertItem(t, alice);
-    const created = await upload(aliceToken, itemId, pdfBytes, 'sheet.pdf', 'spec-sheet', 'application/pdf').expect(201);
+    const created = await upload(aliceToken, itemId, pdfBytes, 'sheet.pdf', 'spec-sheet', 'application/pdf').expect(
+      201,
+    );
     expect(created.body.file).toMatchObject({ purpose: 'spec-sheet', contentType: 'application/pdf', thumbUrl: null });
     const got = await t.http().get(created.body.file.url).set(bearer(aliceToken)).responseType('blob').expect(200);
     expect(Buffer.compare(got.body as Buffer, pdfBytes)).toBe(0);
@@ -133,7 +157,13 @@ describe('locker files (in-memory store)', () => {
     };
 
     it('a text file called .jpg: 415 naming the file', async () => {
-      const response = await upload(aliceToken, itemId, Buffer.from('just some notes\n'.repeat(40)), 'photo.jpg', 'photo').expect(415);
+      const response = await upload(
+        aliceToken,
+        itemId,
+        Buffer.from('just some notes\n'.repeat(40)),
+        'photo.jpg',
+        'photo',
+      ).expect(415);
       expect(response.body).toMatchObject({ statusCode: 415, errors: [{ path: 'file' }] });
       expect(response.body.message).toMatch(/not a JPEG, PNG or WebP photo or a PDF spec sheet/);
       await expectNothingStored();
@@ -147,7 +177,9 @@ describe('locker files (in-memory store)', () => {
     });
 
     it('a renamed Windows program (MZ) declared as a PDF: 415', async () => {
-      const response = await upload(aliceToken, itemId, peBytes, 'manual.pdf', 'spec-sheet', 'application/pdf').expect(415);
+      const response = await upload(aliceToken, itemId, peBytes, 'manual.pdf', 'spec-sheet', 'application/pdf').expect(
+        415,
+      );
       expect(response.body.message).toMatch(/Windows program/);
       await expectNothingStored();
     });
@@ -169,7 +201,12 @@ describe('locker files (in-memory store)', () => {
     });
 
     it('a request without a file, a missing or unknown purpose, a second file: 400 naming the field', async () => {
-      const noFile = await t.http().post(`/api/locker/items/${itemId}/files`).set(bearer(aliceToken)).field('purpose', 'photo').expect(400);
+      const noFile = await t
+        .http()
+        .post(`/api/locker/items/${itemId}/files`)
+        .set(bearer(aliceToken))
+        .field('purpose', 'photo')
+        .expect(400);
       expect(noFile.body.errors).toEqual([{ path: 'file', message: 'Send one file, in the multipart field `file`' }]);
       const png = await noisePhoto(8, 8, 'png');
       const noPurpose = await upload(aliceToken, itemId, png, 'a.png', undefined).expect(400);
@@ -201,7 +238,8 @@ describe('locker files (in-memory store)', () => {
   it('keeps at most the per-item number of files (409 for one more)', async () => {
     const itemId = await insertItem(t, alice, 'Full');
     const png = await noisePhoto(8, 8, 'png');
-    for (let i = 0; i < maxLockerFilesPerItem; i += 1) await upload(aliceToken, itemId, png, `p${i}.png`, 'photo').expect(201);
+    for (let i = 0; i < maxLockerFilesPerItem; i += 1)
+      await upload(aliceToken, itemId, png, `p${i}.png`, 'photo').expect(201);
     const response = await upload(aliceToken, itemId, png, 'one-more.png', 'photo').expect(409);
     expect(response.body.message).toMatch(/at most 10 files/);
   });

@@ -24,14 +24,19 @@ describe('health, docs and errors', () => {
     const response = await t.http().get('/api/docs-json').expect(200);
     const doc = response.body as {
       openapi: string;
-      paths: Record<string, Record<string, { requestBody?: { content: Record<string, { schema: { $ref?: string } }> } }>>;
+      paths: Record<
+        string,
+        Record<string, { requestBody?: { content: Record<string, { schema: { $ref?: string } }> } }>
+      >;
       components: { schemas: Record<string, { properties?: Record<string, { minLength?: number; format?: string }> }> };
     };
     expect(doc.openapi).toMatch(/^3\./);
     for (const path of ['/api/auth/sign-up', '/api/auth/sign-in', '/api/auth/sign-out', '/api/auth/me']) {
       expect(Object.keys(doc.paths)).toContain(path);
     }
-    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(['/api/admin/accounts', '/api/admin/accounts/{id}', '/api/health']));
+    expect(Object.keys(doc.paths)).toEqual(
+      expect.arrayContaining(['/api/admin/accounts', '/api/admin/accounts/{id}', '/api/health']),
+    );
     const ref = doc.paths['/api/auth/sign-up']?.post?.requestBody?.content['application/json']?.schema.$ref ?? '';
     const schema = doc.components.schemas[ref.split('/').pop() ?? ''];
     expect(schema?.properties?.password?.minLength).toBe(10);
@@ -115,7 +120,10 @@ describe('the built client', () => {
   beforeAll(async () => {
     distDir = mkdtempSync(join(tmpdir(), 'gramwatt-client-'));
     mkdirSync(join(distDir, 'assets'));
-    writeFileSync(join(distDir, 'index.html'), '<!doctype html><title>Gramwatt test shell</title><div id="root"></div>');
+    writeFileSync(
+      join(distDir, 'index.html'),
+      '<!doctype html><title>Gramwatt test shell</title><div id="root"></div>',
+    );
     writeFileSync(join(distDir, 'assets', 'main-abc123.js'), 'console.log("gramwatt");');
     t = await startTestApp({ serveClient: true, env: { CLIENT_DIST_DIR: distDir } });
   });

@@ -50,7 +50,10 @@ describe.skipIf(!pgBinAvailable.ok)('on PostgreSQL through node-postgres (DATABA
       const http = request.agent(app.getHttpServer());
       await http.post('/api/auth/sign-up').send({ email, password: testPassword, displayName: 'Pg Hiker' }).expect(201);
       await http.post('/api/auth/sign-up').send({ email, password: testPassword, displayName: 'Again' }).expect(409);
-      await request(app.getHttpServer()).post('/api/auth/sign-in').send({ email, password: 'wrong-password' }).expect(401);
+      await request(app.getHttpServer())
+        .post('/api/auth/sign-in')
+        .send({ email, password: 'wrong-password' })
+        .expect(401);
       await http.post('/api/auth/sign-in').send({ email, password: testPassword }).expect(200);
       const me = await http.get('/api/auth/me').expect(200);
       expect(me.body.account.email).toBe(email);

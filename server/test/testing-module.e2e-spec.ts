@@ -35,7 +35,10 @@ describe('AppModule through Test.createTestingModule', () => {
     await request(app.getHttpServer()).get('/api/health').expect(200);
     const agent = request.agent(app.getHttpServer());
     const email = uniqueEmail();
-    await agent.post('/api/auth/sign-up').send({ email, password: testPassword, displayName: 'Module Route' }).expect(201);
+    await agent
+      .post('/api/auth/sign-up')
+      .send({ email, password: testPassword, displayName: 'Module Route' })
+      .expect(201);
     const me = await agent.get('/api/auth/me').expect(200);
     expect(me.body.account.email).toBe(email);
   });

@@ -44,6 +44,8 @@ export function measure(name: string, run: () => unknown, options: MeasureOption
     minMs: samplesMs[0] ?? Number.NaN,
   };
   const fmt = (ms: number) => (ms < 10 ? ms.toFixed(3) : ms.toFixed(1)).padStart(9);
-  console.log(`${name.padEnd(72)} median ${fmt(result.medianMs)} ms   p95 ${fmt(result.p95Ms)} ms   (${result.runs} runs)`);
+  console.log(
+    `${name.padEnd(72)} median ${fmt(result.medianMs)} ms   p95 ${fmt(result.p95Ms)} ms   (${result.runs} runs)`,
+  );
   return result;
 }

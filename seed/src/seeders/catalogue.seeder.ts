@@ -21,7 +21,13 @@ export async function seedCatalogue(db: Database): Promise<void> {
       throw new Error(`demo catalogue entry ${index} (${input.name}) is invalid: ${problems}`);
     }
     const entry = parsed.data;
-    const values = { kind: entry.spec.kind, name: entry.name, notes: entry.notes, spec: entry.spec, massG: lockerItemMassG(entry.spec) };
+    const values = {
+      kind: entry.spec.kind,
+      name: entry.name,
+      notes: entry.notes,
+      spec: entry.spec,
+      massG: lockerItemMassG(entry.spec),
+    };
     const updated = await db
       .update(schema.catalogueEntries)
       .set({ ...values, updatedAt: new Date() })

@@ -28,7 +28,11 @@ export class AuthController {
   @Public()
   @UseGuards(ThrottlerGuard)
   @Post('sign-up')
-  @ZodResponse({ status: HttpStatus.CREATED, type: AccountResponseDto, description: 'The new account; the session cookie is set' })
+  @ZodResponse({
+    status: HttpStatus.CREATED,
+    type: AccountResponseDto,
+    description: 'The new account; the session cookie is set',
+  })
   @ApiErrorResponses(400, 409, 429)
   async signUp(@Body() body: SignUpDto, @Res({ passthrough: true }) response: Response) {
     const account = await this.auth.signUp(body);
@@ -40,7 +44,11 @@ export class AuthController {
   @Public()
   @UseGuards(ThrottlerGuard)
   @Post('sign-in')
-  @ZodResponse({ status: HttpStatus.OK, type: AccountResponseDto, description: 'The account; the session cookie is set' })
+  @ZodResponse({
+    status: HttpStatus.OK,
+    type: AccountResponseDto,
+    description: 'The account; the session cookie is set',
+  })
   @ApiErrorResponses(400, 401, 429)
   async signIn(@Body() body: SignInDto, @Res({ passthrough: true }) response: Response) {
     const account = await this.auth.signIn(body);

@@ -18,5 +18,7 @@ export function toCatalogueEntry(row: CatalogueEntryRow): CatalogueEntry {
 /** Entries in power-role order (Collect, Store, Convert, Connect, Use), then by name regardless of case. */
 export function compareCatalogueEntries(a: CatalogueEntryRow, b: CatalogueEntryRow): number {
   const byKind = lockerItemKinds.indexOf(a.kind) - lockerItemKinds.indexOf(b.kind);
-  return byKind !== 0 ? byKind : a.name.localeCompare(b.name, 'en', { sensitivity: 'base' }) || a.id.localeCompare(b.id);
+  return byKind !== 0
+    ? byKind
+    : a.name.localeCompare(b.name, 'en', { sensitivity: 'base' }) || a.id.localeCompare(b.id);
 }

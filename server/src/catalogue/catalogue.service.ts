@@ -1,5 +1,10 @@
 import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
-import { type CatalogueEntryValues, type CatalogueKind, lockerItemInputSchema, lockerItemMassG } from '@gramwatt/shared';
+import {
+  type CatalogueEntryValues,
+  type CatalogueKind,
+  lockerItemInputSchema,
+  lockerItemMassG,
+} from '@gramwatt/shared';
 import { eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { isUniqueViolation } from '../common/database-errors';
@@ -67,7 +72,10 @@ export class CatalogueService {
 
   /** Deletes an entry (items already copied from it stay in their lockers); 404 when there is none. */
   async remove(id: string): Promise<void> {
-    const deleted = await this.db.delete(catalogueEntries).where(eq(catalogueEntries.id, id)).returning({ id: catalogueEntries.id });
+    const deleted = await this.db
+      .delete(catalogueEntries)
+      .where(eq(catalogueEntries.id, id))
+      .returning({ id: catalogueEntries.id });
     if (deleted.length === 0) throw new NotFoundException(entryNotFoundMessage);
   }
 
@@ -78,11 +86,19 @@ export class CatalogueService {
    */
   async copyToLocker(id: string, ownerId: string): Promise<LockerItemRow> {
     const entry = await this.get(id);
-    const parsed = lockerItemInputSchema.safeParse({ name: entry.name, notes: entry.notes, countOwned: 1, spec: entry.spec });
+    const parsed = lockerItemInputSchema.safeParse({
+      name: entry.name,
+      notes: entry.notes,
+      countOwned: 1,
+      spec: entry.spec,
+    });
     if (!parsed.success) {
       throw new ConflictException({
         message: 'This catalogue entry no longer passes the item checks; ask an admin to update it',
-        errors: parsed.error.issues.map((issue) => ({ path: issue.path.map(String).join('.'), message: issue.message })),
+        errors: parsed.error.issues.map((issue) => ({
+          path: issue.path.map(String).join('.'),
+          message: issue.message,
+        })),
       });
     }
     return this.locker.create(ownerId, parsed.data);
@@ -93,7 +109,10 @@ export class CatalogueService {
       return await write();
     } catch (error) {
       if (isUniqueViolation(error, nameConstraint)) {
-        throw new ConflictException({ message: nameTakenMessage, errors: [{ path: 'name', message: nameTakenMessage }] });
+        throw new ConflictException({
+          message: nameTakenMessage,
+          errors: [{ path: 'name', message: nameTakenMessage }],
+        });
       }
       throw error;
     }

@@ -1,4 +1,11 @@
-import { BadRequestException, ConflictException, ForbiddenException, HttpException, HttpStatus, NotFoundException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  HttpException,
+  HttpStatus,
+  NotFoundException,
+} from '@nestjs/common';
 import { ThrottlerException } from '@nestjs/throttler';
 import { signUpSchema } from '@gramwatt/shared';
 import { ZodSerializationException, ZodValidationException } from 'nestjs-zod';
@@ -18,8 +25,12 @@ function zodErrorOf(schema: z.ZodType, value: unknown): z.ZodError {
 
 describe('ApiExceptionFilter', () => {
   it('turns zod issues into field errors with dotted paths', () => {
-    const schema = z.object({ devices: z.array(z.object({ transmitCurrentA: z.number().positive({ error: 'Must be above 0 A' }) })) });
-    const body = filter.toApiError(new ZodValidationException(zodErrorOf(schema, { devices: [{ transmitCurrentA: 1 }, { transmitCurrentA: -2 }] })));
+    const schema = z.object({
+      devices: z.array(z.object({ transmitCurrentA: z.number().positive({ error: 'Must be above 0 A' }) })),
+    });
+    const body = filter.toApiError(
+      new ZodValidationException(zodErrorOf(schema, { devices: [{ transmitCurrentA: 1 }, { transmitCurrentA: -2 }] })),
+    );
     expect(body).toEqual({
       statusCode: 400,
       message: 'Must be above 0 A',
@@ -35,7 +46,11 @@ describe('ApiExceptionFilter', () => {
   });
 
   it('keeps the status and message of an HttpException', () => {
-    expect(filter.toApiError(new NotFoundException('No such trip'))).toEqual({ statusCode: 404, message: 'No such trip', errors: [] });
+    expect(filter.toApiError(new NotFoundException('No such trip'))).toEqual({
+      statusCode: 404,
+      message: 'No such trip',
+      errors: [],
+    });
     expect(filter.toApiError(new ForbiddenException())).toEqual({ statusCode: 403, message: 'Forbidden', errors: [] });
     expect(filter.toApiError(new HttpException('Too large', HttpStatus.PAYLOAD_TOO_LARGE))).toEqual({
       statusCode: 413,

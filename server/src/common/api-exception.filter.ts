@@ -1,11 +1,4 @@
-import {
-  type ArgumentsHost,
-  Catch,
-  type ExceptionFilter,
-  HttpException,
-  HttpStatus,
-  Logger,
-} from '@nestjs/common';
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { ApiError, ApiFieldError } from '@gramwatt/shared';
 import type { Response } from 'express';
 import { ZodSerializationException, ZodValidationException } from 'nestjs-zod';
@@ -18,7 +11,6 @@ interface HttpLikeError {
 }
 
 const internalErrorMessage = 'Something went wrong on our side';
-
 
 /**
  * Turns every error into the one API error shape `{ statusCode, message, errors: [{ path, message }] }`.
@@ -43,7 +35,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
     }
     if (exception instanceof ZodSerializationException) {
       const zodError = exception.getZodError();
-      this.logger.error(`Response did not match its schema: ${zodError instanceof ZodError ? zodError.message : String(zodError)}`);
+      this.logger.error(
+        `Response did not match its schema: ${zodError instanceof ZodError ? zodError.message : String(zodError)}`,
+      );
       return internalError();
     }
     if (exception instanceof HttpException) {

@@ -19,7 +19,12 @@ export const bodyParserMessages: Readonly<Record<string, string>> = {
  * with a plain message (the parser's own message can echo the body), so the one exception filter answers
  * them in the API error shape.
  */
-export function translateBodyParserErrors(error: unknown, _request: Request, _response: Response, next: NextFunction): void {
+export function translateBodyParserErrors(
+  error: unknown,
+  _request: Request,
+  _response: Response,
+  next: NextFunction,
+): void {
   if (error instanceof Error) {
     const { type, status } = error as Error & { type?: unknown; status?: unknown };
     if (typeof type === 'string' && typeof status === 'number' && status >= 400 && status < 500) {

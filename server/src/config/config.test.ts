@@ -88,7 +88,9 @@ describe('config validation', () => {
     it('makes the cookie Secure in production only, unless told otherwise', () => {
       expect(readAuthConfig({ JWT_SECRET: secret }).cookieSecure).toBe(false);
       expect(readAuthConfig({ NODE_ENV: 'production', JWT_SECRET: secret }).cookieSecure).toBe(true);
-      expect(readAuthConfig({ NODE_ENV: 'production', JWT_SECRET: secret, AUTH_COOKIE_SECURE: 'false' }).cookieSecure).toBe(false);
+      expect(
+        readAuthConfig({ NODE_ENV: 'production', JWT_SECRET: secret, AUTH_COOKIE_SECURE: 'false' }).cookieSecure,
+      ).toBe(false);
       expect(() => readAuthConfig({ JWT_SECRET: secret, AUTH_COOKIE_SECURE: 'maybe' })).toThrow(/AUTH_COOKIE_SECURE/);
     });
 
@@ -111,7 +113,9 @@ describe('config validation', () => {
     });
 
     it('accepts postgres:// and postgresql:// URLs and rejects others', () => {
-      expect(readDatabaseConfig({ DATABASE_URL: 'postgres://u:p@localhost:5432/gw' }).url).toBe('postgres://u:p@localhost:5432/gw');
+      expect(readDatabaseConfig({ DATABASE_URL: 'postgres://u:p@localhost:5432/gw' }).url).toBe(
+        'postgres://u:p@localhost:5432/gw',
+      );
       expect(readDatabaseConfig({ DATABASE_URL: 'postgresql://localhost/gw' }).url).toBe('postgresql://localhost/gw');
       expect(() => readDatabaseConfig({ DATABASE_URL: 'mysql://localhost/gw' })).toThrow(/DATABASE_URL/);
     });

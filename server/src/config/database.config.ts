@@ -9,7 +9,9 @@ export const pgliteDirName = 'pglite';
 const databaseEnvSchema = z.object({
   DATABASE_URL: z
     .string()
-    .regex(/^postgres(ql)?:\/\//, { error: 'must be a postgres:// or postgresql:// URL (leave unset for the embedded database)' })
+    .regex(/^postgres(ql)?:\/\//, {
+      error: 'must be a postgres:// or postgresql:// URL (leave unset for the embedded database)',
+    })
     .optional(),
 });
 

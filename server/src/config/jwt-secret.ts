@@ -51,7 +51,9 @@ function readSecretFile(file: string): string | undefined {
   try {
     const text = readFileSync(file, 'utf8').trim();
     if (text.length < minJwtSecretLength) {
-      throw new Error(`${file} holds a secret shorter than ${minJwtSecretLength} characters; delete it to generate a new one`);
+      throw new Error(
+        `${file} holds a secret shorter than ${minJwtSecretLength} characters; delete it to generate a new one`,
+      );
     }
     return text;
   } catch (error) {

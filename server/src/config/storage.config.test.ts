@@ -12,12 +12,18 @@ describe('storage config', () => {
       fakePort: 0,
       fakeDir: join(resolve('/srv/gw'), 's3'),
     });
-    expect(readStorageConfig({ NODE_ENV: 'production', S3_FAKE_PORT: '4569' })).toMatchObject({ mode: 'local-fake', fakePort: 4569 });
+    expect(readStorageConfig({ NODE_ENV: 'production', S3_FAKE_PORT: '4569' })).toMatchObject({
+      mode: 'local-fake',
+      fakePort: 4569,
+    });
   });
 
   it('keeps files in memory under NODE_ENV=test unless told otherwise', () => {
     expect(readStorageConfig({ NODE_ENV: 'test' })).toEqual({ driver: 'memory' });
-    expect(readStorageConfig({ NODE_ENV: 'test', STORAGE_DRIVER: 's3' })).toMatchObject({ driver: 's3', mode: 'local-fake' });
+    expect(readStorageConfig({ NODE_ENV: 'test', STORAGE_DRIVER: 's3' })).toMatchObject({
+      driver: 's3',
+      mode: 'local-fake',
+    });
     expect(readStorageConfig({ STORAGE_DRIVER: 'memory' })).toEqual({ driver: 'memory' });
   });
 
@@ -45,7 +51,9 @@ describe('storage config', () => {
   });
 
   it('refuses an endpoint without keys, naming each missing variable', () => {
-    expect(() => readStorageConfig({ S3_ENDPOINT: 'http://127.0.0.1:9000' })).toThrow(/S3_ACCESS_KEY_ID: must be set with S3_ENDPOINT[\s\S]*S3_SECRET_ACCESS_KEY/);
+    expect(() => readStorageConfig({ S3_ENDPOINT: 'http://127.0.0.1:9000' })).toThrow(
+      /S3_ACCESS_KEY_ID: must be set with S3_ENDPOINT[\s\S]*S3_SECRET_ACCESS_KEY/,
+    );
   });
 
   it.each([

@@ -32,7 +32,10 @@ const storageEnvSchema = z
       .string()
       .regex(bucketNamePattern, { error: 'must be 3–63 lower-case letters, digits, dots or hyphens' })
       .default(defaultS3Bucket),
-    S3_REGION: z.string().regex(/^[a-z0-9-]+$/, { error: 'use lower-case letters, digits and hyphens' }).default(defaultS3Region),
+    S3_REGION: z
+      .string()
+      .regex(/^[a-z0-9-]+$/, { error: 'use lower-case letters, digits and hyphens' })
+      .default(defaultS3Region),
     S3_ACCESS_KEY_ID: z.string().optional(),
     S3_SECRET_ACCESS_KEY: z.string().optional(),
     S3_FORCE_PATH_STYLE: envFlagSchema.default(true),
@@ -46,7 +49,8 @@ const storageEnvSchema = z
   .superRefine((env, ctx) => {
     if (env.S3_ENDPOINT === undefined) return;
     for (const key of ['S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const) {
-      if (env[key] === undefined) ctx.addIssue({ code: 'custom', path: [key], message: 'must be set with S3_ENDPOINT' });
+      if (env[key] === undefined)
+        ctx.addIssue({ code: 'custom', path: [key], message: 'must be set with S3_ENDPOINT' });
     }
   });
 

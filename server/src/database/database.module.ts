@@ -1,4 +1,11 @@
-import { type DynamicModule, Global, Logger, Module, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
+import {
+  type DynamicModule,
+  Global,
+  Logger,
+  Module,
+  type OnApplicationShutdown,
+  type OnModuleInit,
+} from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { AppConfig, DatabaseConfig } from '../config';
 import { createDatabase } from './create-database';
@@ -51,7 +58,9 @@ export class DatabaseModule {
             if (options.database) return options.database;
             const { url, pgliteDir } = config.getOrThrow<DatabaseConfig>('database');
             const { dataDir } = config.getOrThrow<AppConfig>('app');
-            new Logger('Database').log(url ? 'Using PostgreSQL from DATABASE_URL' : `Using embedded PGlite in ${pgliteDir}`);
+            new Logger('Database').log(
+              url ? 'Using PostgreSQL from DATABASE_URL' : `Using embedded PGlite in ${pgliteDir}`,
+            );
             const handle = await createDatabase(url ? { databaseUrl: url } : { dataDir });
             pendingClose.set(handle.db, handle.close);
             return handle.db;

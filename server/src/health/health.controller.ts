@@ -15,7 +15,11 @@ export class HealthController {
   @Public()
   @Get()
   @ZodResponse({ status: HttpStatus.OK, type: HealthDto, description: 'Up, with the database answering' })
-  @ApiResponse({ status: HttpStatus.SERVICE_UNAVAILABLE, type: HealthDto.Output, description: 'Degraded: the database does not answer' })
+  @ApiResponse({
+    status: HttpStatus.SERVICE_UNAVAILABLE,
+    type: HealthDto.Output,
+    description: 'Degraded: the database does not answer',
+  })
   async check(@Res({ passthrough: true }) response: Response) {
     const health = await this.health.check();
     if (health.status !== 'ok') response.status(HttpStatus.SERVICE_UNAVAILABLE);

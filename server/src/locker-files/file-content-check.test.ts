@@ -10,10 +10,15 @@ import { checkFileContent, describeSniffedType, sniffFileType } from './file-con
  */
 const elfBytes = Buffer.concat([Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0x02, 0x01, 0x01, 0x00]), Buffer.alloc(120)]);
 const peBytes = Buffer.concat([Buffer.from('MZ', 'ascii'), Buffer.alloc(126, 0x90)]);
-const pdfBytes = Buffer.from('%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
+const pdfBytes = Buffer.from(
+  '%PDF-1.7\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n',
+  'latin1',
+);
 
 const image = (format: 'png' | 'jpeg' | 'webp' | 'gif' | 'tiff') =>
-  sharp({ create: { width: 8, height: 6, channels: 3, background: '#3a6b4f' } }).toFormat(format).toBuffer();
+  sharp({ create: { width: 8, height: 6, channels: 3, background: '#3a6b4f' } })
+    .toFormat(format)
+    .toBuffer();
 
 describe('sniffFileType', () => {
   it('finds JPEG, PNG and WebP from real encoder output and PDF from its header', async () => {
@@ -37,7 +42,10 @@ describe('checkFileContent', () => {
   it('accepts each photo type as a photo and a PDF as a spec sheet', async () => {
     for (const format of ['jpeg', 'png', 'webp'] as const) {
       const bytes = await image(format);
-      expect(checkFileContent(await sniffFileType(bytes), bytes.length, 'photo')).toEqual({ ok: true, contentType: `image/${format}` });
+      expect(checkFileContent(await sniffFileType(bytes), bytes.length, 'photo')).toEqual({
+        ok: true,
+        contentType: `image/${format}`,
+      });
     }
     expect(checkFileContent(await sniffFileType(pdfBytes), pdfBytes.length, 'spec-sheet')).toEqual({
       ok: true,
@@ -64,14 +72,20 @@ describe('checkFileContent', () => {
     const png = await image('png');
     const asSheet = checkFileContent(await sniffFileType(png), png.length, 'spec-sheet');
     expect(asSheet).toMatchObject({ ok: false, statusCode: 415, path: 'purpose' });
-    expect(asSheet.ok || asSheet.message).toMatch(/PNG image, but purpose spec-sheet takes a PDF; send it with purpose photo/);
+    expect(asSheet.ok || asSheet.message).toMatch(
+      /PNG image, but purpose spec-sheet takes a PDF; send it with purpose photo/,
+    );
     const asPhoto = checkFileContent(await sniffFileType(pdfBytes), pdfBytes.length, 'photo');
     expect(asPhoto).toMatchObject({ ok: false, statusCode: 415, path: 'purpose' });
   });
 
   it('refuses unknown content with 415 and an empty file with 400', () => {
     expect(checkFileContent(undefined, 10, 'photo')).toMatchObject({ ok: false, statusCode: 415, path: 'file' });
-    expect(checkFileContent(undefined, 0, 'photo')).toMatchObject({ ok: false, statusCode: 400, message: 'The file is empty' });
+    expect(checkFileContent(undefined, 0, 'photo')).toMatchObject({
+      ok: false,
+      statusCode: 400,
+      message: 'The file is empty',
+    });
   });
 
   it('names other types by extension and media type', () => {

@@ -58,7 +58,10 @@ const wantedByPurpose: Record<LockerFilePurpose, string> = {
 };
 
 function isAccepted(mime: string): mime is LockerFileContentType {
-  return (photoContentTypes as readonly string[]).includes(mime) || (specSheetContentTypes as readonly string[]).includes(mime);
+  return (
+    (photoContentTypes as readonly string[]).includes(mime) ||
+    (specSheetContentTypes as readonly string[]).includes(mime)
+  );
 }
 
 /** Describes sniffed content for a message: "a PNG image", "a program (ELF executable)", "a TIFF file (image/tiff)". */
@@ -74,7 +77,11 @@ export function describeSniffedType(sniffed: SniffedType): string {
  * @example
  * checkFileContent({ mime: 'image/png', ext: 'png' }, 1024, 'spec-sheet').ok // false: 415 naming `purpose`
  */
-export function checkFileContent(sniffed: SniffedType | undefined, sizeBytes: number, purpose: LockerFilePurpose): AcceptedFile | RejectedFile {
+export function checkFileContent(
+  sniffed: SniffedType | undefined,
+  sizeBytes: number,
+  purpose: LockerFilePurpose,
+): AcceptedFile | RejectedFile {
   if (sizeBytes === 0) return { ok: false, statusCode: 400, path: 'file', message: 'The file is empty' };
   if (!sniffed) {
     return {

@@ -4,7 +4,9 @@ import { cleanFileName, contentDisposition } from './file-name';
 
 describe('cleanFileName', () => {
   it('keeps a name whose extension matches the content', () => {
-    expect(cleanFileName('fold-out panel.JPG', 'image/jpeg', 'photo')).toBe('fold-out panel.JPG'.replace('.JPG', '.jpg'));
+    expect(cleanFileName('fold-out panel.JPG', 'image/jpeg', 'photo')).toBe(
+      'fold-out panel.JPG'.replace('.JPG', '.jpg'),
+    );
     expect(cleanFileName('sheet.pdf', 'application/pdf', 'spec-sheet')).toBe('sheet.pdf');
   });
 
@@ -44,6 +46,8 @@ describe('contentDisposition', () => {
   });
 
   it('escapes quotes and the characters attr-char leaves out', () => {
-    expect(contentDisposition('inline', `a"b'(c)*.png`)).toBe(`inline; filename="a_b'(c)*.png"; filename*=UTF-8''a%22b%27%28c%29%2A.png`);
+    expect(contentDisposition('inline', `a"b'(c)*.png`)).toBe(
+      `inline; filename="a_b'(c)*.png"; filename*=UTF-8''a%22b%27%28c%29%2A.png`,
+    );
   });
 });

@@ -69,7 +69,12 @@ export class LockerFilesController {
     @Body() body: LockerFileUploadDto,
   ) {
     if (!file) throw missingFileError();
-    const stored = await this.files.upload(account.id, params.itemId, { bytes: file.buffer, originalName: file.originalname }, body.purpose);
+    const stored = await this.files.upload(
+      account.id,
+      params.itemId,
+      { bytes: file.buffer, originalName: file.originalname },
+      body.purpose,
+    );
     return { file: stored };
   }
 

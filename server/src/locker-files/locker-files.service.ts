@@ -71,12 +71,20 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
    * Stores a file for the owner's item. 404 when the item is not theirs, 413 over the size limit, 415 when
    * the content is not a type the purpose takes (naming `file` or `purpose`), 409 when the item is full.
    */
-  async upload(ownerId: string, itemId: string, incoming: IncomingFile, purpose: LockerFilePurpose): Promise<LockerFile> {
+  async upload(
+    ownerId: string,
+    itemId: string,
+    incoming: IncomingFile,
+    purpose: LockerFilePurpose,
+  ): Promise<LockerFile> {
     await this.assertOwnsItem(ownerId, itemId);
     if (incoming.bytes.length > maxLockerFileBytes) throw new PayloadTooLargeException(tooLargeMessage);
     const verdict = checkFileContent(await sniffFileType(incoming.bytes), incoming.bytes.length, purpose);
     if (!verdict.ok) {
-      throw new HttpException({ message: verdict.message, errors: [{ path: verdict.path, message: verdict.message }] }, verdict.statusCode);
+      throw new HttpException(
+        { message: verdict.message, errors: [{ path: verdict.path, message: verdict.message }] },
+        verdict.statusCode,
+      );
     }
     const [held] = await this.db
       .select({ files: count() })
@@ -147,7 +155,9 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
   /** Deletes the owner's file and its bytes; 404 when it is not theirs or not there. */
   async remove(ownerId: string, itemId: string, fileId: string): Promise<void> {
     const file = await this.findOwned(ownerId, itemId, fileId);
-    await this.db.delete(lockerItemFiles).where(and(eq(lockerItemFiles.id, file.id), eq(lockerItemFiles.ownerId, ownerId)));
+    await this.db
+      .delete(lockerItemFiles)
+      .where(and(eq(lockerItemFiles.id, file.id), eq(lockerItemFiles.ownerId, ownerId)));
     await this.drainDeletedObjects();
   }
 
@@ -203,7 +213,9 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
           removed += 1;
         } catch (error) {
           failed.push(objectKey);
-          this.logger.warn(`Could not delete stored object ${objectKey}: ${error instanceof Error ? error.message : String(error)}`);
+          this.logger.warn(
+            `Could not delete stored object ${objectKey}: ${error instanceof Error ? error.message : String(error)}`,
+          );
         }
       }
       if (failed.length > 0) {
@@ -238,7 +250,9 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
     const [file] = await this.db
       .select()
       .from(lockerItemFiles)
-      .where(and(eq(lockerItemFiles.id, fileId), eq(lockerItemFiles.itemId, itemId), eq(lockerItemFiles.ownerId, ownerId)));
+      .where(
+        and(eq(lockerItemFiles.id, fileId), eq(lockerItemFiles.itemId, itemId), eq(lockerItemFiles.ownerId, ownerId)),
+      );
     if (!file) throw new NotFoundException(fileNotFoundMessage);
     return file;
   }

@@ -3,7 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { makeThumbnail, maxPhotoPixels, thumbnailEdgePx } from './thumbnail';
 
 const photo = (width: number, height: number, format: 'jpeg' | 'png' | 'webp' = 'jpeg') =>
-  sharp({ create: { width, height, channels: 3, background: '#7a5c3e' } }).toFormat(format).toBuffer();
+  sharp({ create: { width, height, channels: 3, background: '#7a5c3e' } })
+    .toFormat(format)
+    .toBuffer();
 
 describe('makeThumbnail', () => {
   it('fits a landscape photo inside the edge, keeping its aspect ratio, as WebP', async () => {

@@ -28,15 +28,24 @@ export class LockerFileUploadInterceptor extends FileInterceptor(uploadFieldName
 /** The API error for an error multer raised while reading the body. */
 export function translateMulterError(error: unknown): unknown {
   if (error instanceof PayloadTooLargeException) {
-    return new PayloadTooLargeException({ message: tooLargeMessage, errors: [{ path: 'file', message: tooLargeMessage }] });
+    return new PayloadTooLargeException({
+      message: tooLargeMessage,
+      errors: [{ path: 'file', message: tooLargeMessage }],
+    });
   }
   if (error instanceof BadRequestException && /unexpected|too many files/i.test(error.message)) {
-    return new BadRequestException({ message: sendOneFileMessage, errors: [{ path: 'file', message: sendOneFileMessage }] });
+    return new BadRequestException({
+      message: sendOneFileMessage,
+      errors: [{ path: 'file', message: sendOneFileMessage }],
+    });
   }
   return error;
 }
 
 /** Thrown when the request carries no file at all. */
 export function missingFileError(): BadRequestException {
-  return new BadRequestException({ message: sendOneFileMessage, errors: [{ path: 'file', message: sendOneFileMessage }] });
+  return new BadRequestException({
+    message: sendOneFileMessage,
+    errors: [{ path: 'file', message: sendOneFileMessage }],
+  });
 }

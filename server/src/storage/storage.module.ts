@@ -68,7 +68,11 @@ export class StorageLifecycle implements OnApplicationShutdown {
       useFactory: (config: ConfigService) => openStorage(config.getOrThrow<StorageConfig>(storageConfigKey)),
     },
     { provide: OBJECT_STORE, inject: [STORAGE_HANDLE], useFactory: (handle: StorageHandle) => handle.store },
-    { provide: StorageLifecycle, inject: [STORAGE_HANDLE], useFactory: (handle: StorageHandle) => new StorageLifecycle(handle) },
+    {
+      provide: StorageLifecycle,
+      inject: [STORAGE_HANDLE],
+      useFactory: (handle: StorageHandle) => new StorageLifecycle(handle),
+    },
   ],
   exports: [OBJECT_STORE],
 })

@@ -37,7 +37,10 @@ export class AccountsService {
       return row;
     } catch (error) {
       if (isUniqueViolation(error)) {
-        throw new ConflictException({ message: emailTakenMessage, errors: [{ path: 'email', message: emailTakenMessage }] });
+        throw new ConflictException({
+          message: emailTakenMessage,
+          errors: [{ path: 'email', message: emailTakenMessage }],
+        });
       }
       throw error;
     }

@@ -28,7 +28,8 @@ export function toLpText(model: LinearModel): string {
   const usesZero = objectiveTerms.length === 0 || model.rows.some((r) => r.terms.length === 0);
   model.rows.forEach((row, i) => {
     const body = formatTerms(row.terms);
-    if (row.lower !== undefined && row.upper !== undefined && row.lower === row.upper) out.push(` r${i}: ${body} = ${row.lower}`);
+    if (row.lower !== undefined && row.upper !== undefined && row.lower === row.upper)
+      out.push(` r${i}: ${body} = ${row.lower}`);
     else {
       if (row.lower !== undefined) out.push(` r${i}l: ${body} >= ${row.lower}`);
       if (row.upper !== undefined) out.push(` r${i}u: ${body} <= ${row.upper}`);

@@ -26,7 +26,11 @@ export interface ExhaustiveAnswer {
  * feasible one is the lightest feasible kit. Slow by design — it is the reference the optimiser is tested against.
  * @example exhaustiveLightestKit(candidates, judge).best?.massG // 300
  */
-export function exhaustiveLightestKit(candidates: readonly KitCandidate[], judge: KitJudge, options: ExhaustiveOptions = {}): ExhaustiveAnswer {
+export function exhaustiveLightestKit(
+  candidates: readonly KitCandidate[],
+  judge: KitJudge,
+  options: ExhaustiveOptions = {},
+): ExhaustiveAnswer {
   const skip = options.skipNoLargerThanRejected ?? true;
   const maxKits = options.maxKits ?? 200_000;
   const items = candidates.filter((c) => c.ownedCount > 0);
@@ -47,7 +51,8 @@ export function exhaustiveLightestKit(candidates: readonly KitCandidate[], judge
       counts[i] = 0;
     }
   }
-  const toMap = (v: number[]): Map<string, number> => new Map(items.flatMap((c, i) => ((v[i] ?? 0) > 0 ? [[c.itemId, v[i] as number] as const] : [])));
+  const toMap = (v: number[]): Map<string, number> =>
+    new Map(items.flatMap((c, i) => ((v[i] ?? 0) > 0 ? [[c.itemId, v[i] as number] as const] : [])));
   for (const k of kits) k.key = kitKey(toMap(k.counts));
   kits.sort((a, b) => a.massG - b.massG || (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   const rejected: Map<string, number>[] = [];

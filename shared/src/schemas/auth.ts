@@ -30,7 +30,10 @@ export type SignUpInput = z.infer<typeof signUpSchema>;
 /** Body of `POST /api/auth/sign-in`. */
 export const signInSchema = z.object({
   email: emailSchema,
-  password: z.string({ error: 'Password is required' }).min(1, { error: 'Password is required' }).max(maxPasswordLength),
+  password: z
+    .string({ error: 'Password is required' })
+    .min(1, { error: 'Password is required' })
+    .max(maxPasswordLength),
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 

@@ -1,4 +1,10 @@
-import { type CanActivate, type ExecutionContext, ForbiddenException, Injectable, UnauthorizedException } from '@nestjs/common';
+import {
+  type CanActivate,
+  type ExecutionContext,
+  ForbiddenException,
+  Injectable,
+  UnauthorizedException,
+} from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import type { AccountRole } from '@gramwatt/shared';
 import { roleRequiredMessage, signInRequiredMessage } from '../auth-messages';

@@ -1,6 +1,7 @@
 import {
   checkResultSchema,
   chosenKitSchema,
+  planModelVersion,
   planRecordSchema,
   planResultSchema,
   tripSchema,
@@ -275,7 +276,7 @@ export const buildEvaluation = ({
 export const buildPlanResult = (overrides: Partial<PlanResult> = {}, evaluation = buildEvaluation()): PlanResult => {
   const kit = buildPlanKit(optimumLines());
   return planResultSchema.parse({
-    modelVersion: 'gramwatt-plan-1',
+    modelVersion: planModelVersion,
     status: 'optimal',
     headline: `The lightest kit that works weighs ${kit.massG} g. ${evaluation.verdict.text}`,
     kit,

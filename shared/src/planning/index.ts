@@ -2,6 +2,7 @@
 export * from './planning-input.js';
 export { planningContext, type PlanningContext } from './build-problem.js';
 export { evaluateKit, planKit } from './evaluate-kit.js';
-export { planTrip, planModelVersion, type PlanOptions } from './plan-trip.js';
+export { planModelVersion } from './model-version.js';
+export { planTrip, type PlanOptions } from './plan-trip.js';
 export { checkKit } from './check-kit.js';
 export { planParty, partyCarriers, partyProblemOf, walkingFeedsOf } from './plan-party.js';

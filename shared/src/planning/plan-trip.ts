@@ -10,10 +10,8 @@ import { planningContext, type PlanningContext } from './build-problem.js';
 import { evaluateKit, planKit } from './evaluate-kit.js';
 import { pathChoice } from './path-choice.js';
 import { buysText, countedName, dayLabel, gramsText, listText, percentText, skyName } from './plain-words.js';
+import { planModelVersion } from './model-version.js';
 import type { PlanningInput } from './planning-input.js';
-
-/** Version of the model and rules behind a plan; stored with each plan so old plans can be told apart. */
-export const planModelVersion = 'gramwatt-plan-1';
 
 /** How many more steps of a requirement "free up to N more" looks at. */
 const maxFreeSteps = 12;

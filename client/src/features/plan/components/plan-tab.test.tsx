@@ -43,6 +43,7 @@ describe('PlanTab', () => {
     expect(within(strip).getByText(/^Day 3, Fri 12 Mar: 69 % stored at the day's end \(103 Wh\)$/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Find the lightest kit again' })).toBeEnabled();
     expect(screen.queryByText('The trip changed after this plan was made')).toBeNull();
+    expect(screen.queryByText('An earlier version of the planner made this plan')).toBeNull();
   });
 
   it('shows the newest stored plan on load, with gram prices, swaps, the ledger and the cautions', async () => {
@@ -79,6 +80,14 @@ describe('PlanTab', () => {
     installPlanApi({ trip: changed, plans: [plan] });
     renderPlanTab();
     expect(await screen.findByText('The trip changed after this plan was made')).toBeInTheDocument();
+  });
+
+  it('says when an earlier version of the planner made the plan, and not for the current one', async () => {
+    const earlier = buildPlanRecord({ ...buildPlanResult(), modelVersion: 'gramwatt-plan-1' });
+    installPlanApi({ plans: [earlier] });
+    renderPlanTab();
+    expect(await screen.findByText('An earlier version of the planner made this plan')).toBeInTheDocument();
+    expect(screen.getByText(/Find the lightest kit again to see the current answer/)).toBeInTheDocument();
   });
 
   it('says who carries what on a party’s kit', async () => {

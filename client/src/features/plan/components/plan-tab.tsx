@@ -1,3 +1,4 @@
+import { planModelVersion } from '@gramwatt/shared';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -19,6 +20,7 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const changedAt = useTripChangedAt(tripId).data;
   const isOutdated =
     plan.data !== undefined && changedAt !== undefined && Date.parse(changedAt) > Date.parse(plan.data.createdAt);
+  const isEarlierPlanner = plan.data !== undefined && plan.data.modelVersion !== planModelVersion;
 
   const solve = canSolve && (
     <SolveAction tripId={tripId} hasPlan={latestId !== undefined} onSolved={(p) => setSolvedId(p.id)} />
@@ -56,6 +58,15 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
           Its devices or their use are not what the planner weighed.{' '}
           {canSolve
             ? 'Find the lightest kit again for the trip as it is now.'
+            : 'The leader or a partner can solve it again.'}
+        </Alert>
+      )}
+      {isEarlierPlanner && (
+        <Alert tone="caution" title="An earlier version of the planner made this plan">
+          Gramwatt now weighs the same trip and gear a little differently, so this kit and its figures may no longer be
+          its answer.{' '}
+          {canSolve
+            ? 'Find the lightest kit again to see the current answer.'
             : 'The leader or a partner can solve it again.'}
         </Alert>
       )}

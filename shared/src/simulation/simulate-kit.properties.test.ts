@@ -13,6 +13,8 @@ import { compileKit } from './compile-kit.js';
 import { scaleSolar } from '../testing/synthetic-solar.js';
 
 const reserveArb = share(0, 0.3);
+/** A trip, a kit, its devices, a reserve and a factor (1–3) that scales the sun or the demand. */
+const scaledCase = [tripArb, kitArb(), devicesArb, reserveArb, share(1, 3)] as const;
 /**
  * One fixed seed, as the both-path properties use: the runs (and the counts of meaningful cases) are the same on every
  * machine, and a failure reproduces. Wider soaks, many seeds and 50,000–100,000 runs each, are recorded in
@@ -78,23 +80,16 @@ describe('simulation properties (fast-check)', () => {
       let lastingSunny = 0;
       let lastingHungry = 0;
       fc.assert(
-        fc.property(
-          tripArb,
-          kitArb(),
-          devicesArb,
-          reserveArb,
-          share(1, 3),
-          (solar, kit, devices, reserveShare, factor) => {
-            if (isKitFeasible({ solar, kit, devices, reserveShare })) {
-              lastingSunny++;
-              expect(isKitFeasible({ solar: scaleSolar(solar, factor), kit, devices, reserveShare })).toBe(true);
-            }
-            if (isKitFeasible({ solar, kit, devices: scaleDemand(devices, factor), reserveShare })) {
-              lastingHungry++;
-              expect(isKitFeasible({ solar, kit, devices, reserveShare })).toBe(true);
-            }
-          },
-        ),
+        fc.property(...scaledCase, (solar, kit, devices, reserveShare, factor) => {
+          if (isKitFeasible({ solar, kit, devices, reserveShare })) {
+            lastingSunny++;
+            expect(isKitFeasible({ solar: scaleSolar(solar, factor), kit, devices, reserveShare })).toBe(true);
+          }
+          if (isKitFeasible({ solar, kit, devices: scaleDemand(devices, factor), reserveShare })) {
+            lastingHungry++;
+            expect(isKitFeasible({ solar, kit, devices, reserveShare })).toBe(true);
+          }
+        }),
         { numRuns: 2000, seed: propertySeed },
       );
       expect(lastingSunny).toBeGreaterThan(200);
@@ -107,18 +102,11 @@ describe('simulation properties (fast-check)', () => {
     'more sun never lowers any step’s stored energy, in any unit',
     () => {
       fc.assert(
-        fc.property(
-          tripArb,
-          kitArb(),
-          devicesArb,
-          reserveArb,
-          share(1, 3),
-          (solar, kit, devices, reserveShare, factor) => {
-            const base = simulateKit({ solar, kit, devices, reserveShare });
-            const sunnier = simulateKit({ solar: scaleSolar(solar, factor), kit, devices, reserveShare });
-            expect(worstUnitDropWh(base, sunnier)).toBeLessThan(1e-9);
-          },
-        ),
+        fc.property(...scaledCase, (solar, kit, devices, reserveShare, factor) => {
+          const base = simulateKit({ solar, kit, devices, reserveShare });
+          const sunnier = simulateKit({ solar: scaleSolar(solar, factor), kit, devices, reserveShare });
+          expect(worstUnitDropWh(base, sunnier)).toBeLessThan(1e-9);
+        }),
         runs,
       );
     },
@@ -131,18 +119,11 @@ describe('simulation properties (fast-check)', () => {
       // Stores only: a device whose demand grows past its own battery starts being topped up, so its own battery may
       // hold more than before — paid for by the stores, which is what this property pins down.
       fc.assert(
-        fc.property(
-          tripArb,
-          kitArb(),
-          devicesArb,
-          reserveArb,
-          share(1, 3),
-          (solar, kit, devices, reserveShare, factor) => {
-            const base = simulateKit({ solar, kit, devices, reserveShare });
-            const hungrier = simulateKit({ solar, kit, devices: scaleDemand(devices, factor), reserveShare });
-            expect(worstStoreRiseWh(base, hungrier)).toBeLessThan(1e-9);
-          },
-        ),
+        fc.property(...scaledCase, (solar, kit, devices, reserveShare, factor) => {
+          const base = simulateKit({ solar, kit, devices, reserveShare });
+          const hungrier = simulateKit({ solar, kit, devices: scaleDemand(devices, factor), reserveShare });
+          expect(worstStoreRiseWh(base, hungrier)).toBeLessThan(1e-9);
+        }),
         runs,
       );
     },

@@ -104,3 +104,25 @@ describe('a search that solves the core first', () => {
     expect(stopped).toBeGreaterThan(0);
   });
 });
+
+describe('the demand share of a device', () => {
+  it('is the whole locker’s best in the core too, and a problem whose paths beat it is refused', () => {
+    const problem = contextOf(3).problem;
+    const pre = presolve(problem);
+    const corePre = presolve(restrictedTo(pre, coreLocker(pre)));
+    for (const need of corePre.needs) {
+      const whole = pre.needs.find((n) => n.need.needId === need.need.needId);
+      // The core keeps the whole locker's demand rows and the share they count each device at.
+      expect(need.need.demandShare).toBe(whole?.need.demandShare);
+      for (const a of need.alternatives) expect(a.efficiency ?? 0).toBeLessThanOrEqual(need.need.demandShare ?? 0);
+    }
+    const needs = problem.coefficients.needs.map((n) => ({ ...n, demandShare: 0.1 }));
+    expect(() => presolve({ ...problem, coefficients: { ...problem.coefficients, needs } })).toThrow(
+      /above demandShare/,
+    );
+    const outOfRange = problem.coefficients.needs.map((n) => ({ ...n, demandShare: 1.5 }));
+    expect(() => presolve({ ...problem, coefficients: { ...problem.coefficients, needs: outOfRange } })).toThrow(
+      /demandShare must be in \(0, 1\]/,
+    );
+  });
+});

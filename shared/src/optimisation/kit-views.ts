@@ -44,7 +44,8 @@ function staticsOf(pre: PresolvedProblem): { needs: DeviceNeed[]; storeIndices: 
             {
               gainWh: need.need.gainWh,
               alternatives: need.alternatives,
-              eBest: Math.max(...need.alternatives.map((a) => a.efficiency ?? 1)),
+              // The share the demand rows count the device at: the whole locker's best, also in a search over its core.
+              eBest: need.need.demandShare ?? Math.max(...need.alternatives.map((a) => a.efficiency ?? 1)),
             },
           ]
         : [],

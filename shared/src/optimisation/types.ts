@@ -74,6 +74,12 @@ export interface PathNeed {
    * holds, from the stores they reach.
    */
   gainWh?: readonly (readonly number[])[];
+  /**
+   * Optional: the share `demandWh` counts this device's gain at — the best of the whole locker's paths (default: the
+   * best alternative's efficiency). A search over part of the locker (its core) keeps the whole locker's demand rows,
+   * and a kit's view raises the demand from this share to the kit's own, not from the best the part holds.
+   */
+  demandShare?: number;
 }
 
 /** Panels whose harvest counts only when one of the alternatives is present (e.g. a 12 V panel needs a controller). */

@@ -438,6 +438,7 @@ export function planningContext(
     need.gainWh = Array.from({ length: skyCount }, () =>
       gainCum.map((v, t) => Math.max(0, v - (t > 0 ? (gainCum[t - 1] ?? 0) : 0))),
     );
+    need.demandShare = bestShare;
   }
   const daily = (cum: readonly number[]): Grid =>
     Array.from({ length: skyCount }, () => cum.map((v, t) => Math.max(0, v - (t > 0 ? (cum[t - 1] ?? 0) : 0))));

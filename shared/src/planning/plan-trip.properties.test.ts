@@ -9,6 +9,7 @@ import { dailyBalance } from '../optimisation/daily-balance.js';
 import { buildDailyModel } from '../optimisation/daily-model.js';
 import { solveWithJsLp } from '../optimisation/js-lp-backend.js';
 import { kitCounts, kitMassG } from '../optimisation/kit.js';
+import { kitViewsShort } from '../optimisation/kit-views.js';
 import { presolve } from '../optimisation/presolve.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
 import type { KitCounts } from '../optimisation/types.js';
@@ -144,6 +145,8 @@ function checkRelaxation(
       if (input.gear.some((g) => g.spec.kind === 'battery' && (kit.get(g.itemId) ?? 0) > 0)) withPack++;
       const pre = presolve(context.problem);
       expect(dailyBalance(pre, kit)).toMatchObject({ feasible: true, missingPaths: [], shortfalls: [] });
+      // And in every view of the kit (its devices' draw and room through the ways it holds).
+      expect(kitViewsShort(pre, kit)).toBe(false);
       const fixed = solveWithJsLp(buildDailyModel(pre, [], { phase: 'fixed-kit', counts: kit }), {
         timeoutMs: 5000,
         now: () => 0,

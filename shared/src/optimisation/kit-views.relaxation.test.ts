@@ -53,7 +53,7 @@ function shavedToEdge(
   judge: (kit: KitCounts) => { feasible: boolean },
   random: () => number,
 ): KitCounts | undefined {
-  const kit: KitCounts = new Map(pre.items.map((it) => [it.candidate.itemId, it.candidate.ownedCount]));
+  const kit = new Map(pre.items.map((it) => [it.candidate.itemId, it.candidate.ownedCount]));
   if (!judge(kit).feasible) return undefined;
   expect(kitViewsShort(pre, kit)).toBe(false);
   const order = [...pre.items].sort(() => random() - 0.5);

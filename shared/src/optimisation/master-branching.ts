@@ -52,8 +52,9 @@ export interface MasterLimits {
 export const defaultMasterNodeLimit = 2_000_000;
 
 /**
- * Open nodes a search may hold, about 150 MB at 200 items (two byte arrays of counts each): past it the search stops
- * (a 200-item locker held 2.3 GB after 30 s with four-byte counts and no cap).
+ * Open nodes a search may hold, about 85 MB at 200 items (a floor and a ceiling of a byte per item, and 42 bytes of
+ * fields each, in `NodeStore`): past it the search stops (a 200-item locker held 2.3 GB after 30 s with four-byte
+ * counts and no cap).
  */
 export const maxOpenNodes = 200_000;
 
@@ -114,32 +115,126 @@ export interface MasterSearch {
 }
 
 /**
- * An open node: every count between its floor and ceiling. `boundG` is a lower bound on the grams of any kit in it that
- * meets the rows born up to `seen` (−1: none checked yet, the bound is its parent's or its floor's); `broken` is one of
- * those rows its floor kit breaks, to branch on (null: the floor meets them all).
+ * The open nodes, field by field in typed arrays indexed by node id. A node: every count between its floor `lb` and
+ * ceiling `ub` (kept side by side in `counts`). `boundG` is a lower bound on the grams of any kit in it that meets the
+ * rows born up to `seen` (−1: none checked yet, the bound is its parent's or its floor's); `broken` is one of those rows
+ * its floor kit breaks, to branch on (null: the floor meets them all). Nodes as objects, each with two byte arrays, were
+ * most of what the young generation copied: a 50-item plan opens about 13,500, most of which never come up.
  */
-interface OpenNode {
-  lb: Uint8Array;
-  ub: Uint8Array;
-  floorG: number;
-  boundG: number;
-  seen: number;
+class NodeStore {
+  /** Bytes per node in `counts`: the floor, then the ceiling. */
+  private readonly width: number;
+  private capacity: number;
+  counts: Uint8Array;
+  floorG: Float64Array;
+  boundG: Float64Array;
+  seen: Int32Array;
+  /** Units packed at the floor (the heap's tie-break: nearer a leaf first). */
+  units: Int32Array;
+  /** Whether the node itself was checked (a child starts with its parent's `seen` and `pending`, its floor unchecked). */
+  checked: Uint8Array;
+  /**
+   * Whether the floor breaks two or more energy rows whose surrogate (`surrogateNeedG`) the bound does not count yet: it
+   * is worked out only when the node comes up to be split (see the search loop).
+   */
+  surrogateDue: Uint8Array;
+  /** The solve a node was opened in (a copy's nodes are let go when it ends, see `peek`). */
+  openedIn: Int32Array;
   /**
    * Rows born up to `seen` that the floor kit may still break (the rest it meets): a child's floor holds its parent's,
    * and every row is met by a larger kit if by a smaller (upward closed), so a child checks only the rows its parent
    * broke and those born since. Null: none.
    */
-  pending: readonly BornRow[] | null;
-  /** Whether the node itself was checked (a child starts with its parent's `seen` and `pending`, its floor unchecked). */
-  checked: boolean;
-  /**
-   * Whether the floor breaks two or more energy rows whose surrogate (`surrogateNeedG`) the bound does not count yet: it
-   * is worked out only when the node comes up to be split (see the search loop).
-   */
-  surrogateDue: boolean;
-  broken: CoverRow | null;
-  /** Units packed at the floor (the heap's tie-break: nearer a leaf first). */
-  units: number;
+  pending: (readonly BornRow[] | null)[] = [];
+  broken: (CoverRow | null)[] = [];
+  private readonly free: number[] = [];
+  private used = 0;
+
+  constructor(private readonly n: number) {
+    this.width = 2 * n;
+    this.capacity = 256;
+    this.counts = new Uint8Array(this.capacity * this.width);
+    this.floorG = new Float64Array(this.capacity);
+    this.boundG = new Float64Array(this.capacity);
+    this.seen = new Int32Array(this.capacity);
+    this.units = new Int32Array(this.capacity);
+    this.checked = new Uint8Array(this.capacity);
+    this.surrogateDue = new Uint8Array(this.capacity);
+    this.openedIn = new Int32Array(this.capacity);
+  }
+
+  /** A node id for a new node with floor `lb` and ceiling `ub` (its other fields to be set by the caller). */
+  open(lb: Uint8Array, ub: Uint8Array, solve: number): number {
+    let id = this.free.pop();
+    if (id === undefined) {
+      if (this.used === this.capacity) this.grow();
+      id = this.used++;
+      this.pending.push(null);
+      this.broken.push(null);
+    }
+    const at = id * this.width;
+    this.counts.set(lb, at);
+    this.counts.set(ub, at + this.n);
+    this.checked[id] = 0;
+    this.surrogateDue[id] = 0;
+    this.openedIn[id] = solve;
+    return id;
+  }
+
+  /** A copy of node `id` (a copied heap's nodes are copied before they change). */
+  copy(id: number, solve: number): number {
+    const at = id * this.width;
+    const other = this.open(
+      this.counts.subarray(at, at + this.n),
+      this.counts.subarray(at + this.n, at + this.width),
+      solve,
+    );
+    this.floorG[other] = this.floorG[id] as number;
+    this.boundG[other] = this.boundG[id] as number;
+    this.seen[other] = this.seen[id] as number;
+    this.units[other] = this.units[id] as number;
+    this.checked[other] = this.checked[id] as number;
+    this.surrogateDue[other] = this.surrogateDue[id] as number;
+    this.pending[other] = this.pending[id] ?? null;
+    this.broken[other] = this.broken[id] ?? null;
+    return other;
+  }
+
+  /** Copies node `id`'s floor and ceiling into `lb` and `ub`. */
+  read(id: number, lb: Uint8Array, ub: Uint8Array): void {
+    const at = id * this.width;
+    const counts = this.counts;
+    const n = this.n;
+    for (let i = 0; i < n; i++) {
+      lb[i] = counts[at + i] as number;
+      ub[i] = counts[at + n + i] as number;
+    }
+  }
+
+  /** Lets node `id` go: its id is reused. */
+  close(id: number): void {
+    this.pending[id] = null;
+    this.broken[id] = null;
+    this.free.push(id);
+  }
+
+  private grow(): void {
+    const capacity = 2 * this.capacity;
+    const widen = <T extends Uint8Array | Int32Array | Float64Array>(a: T, make: (size: number) => T, per = 1): T => {
+      const b = make(capacity * per);
+      b.set(a);
+      return b;
+    };
+    this.counts = widen(this.counts, (k) => new Uint8Array(k), this.width);
+    this.floorG = widen(this.floorG, (k) => new Float64Array(k));
+    this.boundG = widen(this.boundG, (k) => new Float64Array(k));
+    this.seen = widen(this.seen, (k) => new Int32Array(k));
+    this.units = widen(this.units, (k) => new Int32Array(k));
+    this.checked = widen(this.checked, (k) => new Uint8Array(k));
+    this.surrogateDue = widen(this.surrogateDue, (k) => new Uint8Array(k));
+    this.openedIn = widen(this.openedIn, (k) => new Int32Array(k));
+    this.capacity = capacity;
+  }
 }
 
 /** A row with the number of its birth: a node checked up to birth b needs only the rows born later. */
@@ -179,6 +274,15 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   const massG = pre.items.map((it) => it.candidate.massG);
   const owned = pre.items.map((it) => it.candidate.ownedCount);
   const heap = new NodeHeap();
+  const store = new NodeStore(n);
+  /** The number of the current solve (a peek lets its copy's nodes go when it ends). */
+  let serial = 0;
+  /** The floor and ceiling of the node being worked on, of a child being opened, and of its later siblings. */
+  const lb = new Uint8Array(n);
+  const ub = new Uint8Array(n);
+  const childLb = new Uint8Array(n);
+  const childUb = new Uint8Array(n);
+  const siblingsUb = new Uint8Array(n);
   let births = 0;
   const pathRows: BornRow[] = pre.needs.map((need) => ({ row: pathRow(need.alternatives, massG), birth: births++ }));
   /** Rows of cuts seen so far, by cut object: a cut passed again keeps its row and birth. */
@@ -282,14 +386,15 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       });
 
     /**
-     * Checks a node against the rows born since it was last checked and its pending rows. False when it holds no kit
-     * that meets them; otherwise its bound and broken row are brought up to date.
+     * Checks node `id` (its floor and ceiling read into `lb` and `ub`) against the rows born since it was last checked
+     * and its pending rows. False when it holds no kit that meets them; otherwise its bound and broken row are brought
+     * up to date.
      */
-    const check = (node: OpenNode): boolean => {
-      const { lb, ub } = node;
+    const check = (id: number): boolean => {
       if (supersets.some((set) => set.every(([i, k]) => (lb[i] ?? 0) >= k))) return false;
+      const seenBefore = store.seen[id] as number;
       // Checked itself against every row already: its bound and broken row are up to date.
-      if (node.checked && node.seen === newest) return true;
+      if (store.checked[id] === 1 && seenBefore === newest) return true;
       packFloor(lb);
       let needG = -1;
       let broken: CoverRow | null = null;
@@ -306,8 +411,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         return true;
       };
       // The "no larger than" rows born since the node's last check that its floor meets, as bits from word `w0`.
-      const w0 = (node.seen + 1) >>> 5;
-      const words = newest > node.seen ? (newest >>> 5) - w0 + 1 : 0;
+      const w0 = (seenBefore + 1) >>> 5;
+      const words = newest > seenBefore ? (newest >>> 5) - w0 + 1 : 0;
       if (words > 0) {
         if (metMask.length < words) metMask = new Uint32Array(2 * words);
         metMask.fill(0, 0, words);
@@ -321,44 +426,63 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       for (let r = rows.length - 1; r >= 0; r--) {
         const born = rows[r] as BornRow;
         const birth = born.birth;
-        if (birth <= node.seen) break;
+        if (birth <= seenBefore) break;
         if (born.byBits && ((metMask[(birth >>> 5) - w0] as number) & (1 << (birth & 31))) !== 0) continue;
         if (!look(born)) return false;
       }
-      if (node.pending) for (const born of node.pending) if (!look(born)) return false;
-      node.surrogateDue = broken !== null && brokenEnergyRows(stillBroken) >= 2;
-      node.seen = newest;
-      node.checked = true;
-      node.pending = stillBroken.length > 0 ? stillBroken : null;
+      const pending = store.pending[id];
+      if (pending) for (const born of pending) if (!look(born)) return false;
+      store.surrogateDue[id] = broken !== null && brokenEnergyRows(stillBroken) >= 2 ? 1 : 0;
+      store.seen[id] = newest;
+      store.checked[id] = 1;
+      store.pending[id] = stillBroken.length > 0 ? stillBroken : null;
       if (broken) {
-        node.boundG = Math.max(node.boundG, node.floorG + needG);
-        node.broken ??= broken;
+        store.boundG[id] = Math.max(store.boundG[id] as number, (store.floorG[id] as number) + needG);
+        store.broken[id] ??= broken;
       }
       return true;
     };
 
     /**
-     * The surrogate bound of a node's broken energy rows (grams over its floor): each row's shortfall is worked out
+     * The surrogate bound of node `id`'s broken energy rows (grams over its floor): each row's shortfall is worked out
      * again for this node's floor first (a row keeps the shortfall of the last node it was asked about).
      */
-    const surrogateOf = (node: OpenNode): number => {
-      const { lb, ub } = node;
+    const surrogateOf = (id: number): number => {
       packFloor(lb);
-      const rows = node.pending ?? [];
+      const rows = store.pending[id] ?? [];
       for (const born of rows) if (born.row.energy) born.row.need(lb, ub, packed);
       return surrogateNeedG(rows, lb, ub, massG);
     };
 
+    /** Opens a child with floor `childLb` and ceiling `childUb` under `parent`, its bound at least its parent's. */
+    const openChild = (
+      parent: number,
+      childLb: Uint8Array,
+      childUb: Uint8Array,
+      floorG: number,
+      units: number,
+    ): void => {
+      const child = store.open(childLb, childUb, serial);
+      store.floorG[child] = floorG;
+      store.boundG[child] = Math.max(store.boundG[parent] as number, floorG);
+      store.seen[child] = store.seen[parent] as number;
+      store.pending[child] = store.pending[parent] ?? null;
+      store.units[child] = units;
+      open.push(child, store.boundG[child] as number, units);
+    };
+
     /**
-     * Opens the children of a node: one per way to meet the row it breaks when every way raises a single item (see
-     * the module comment); otherwise two, on the item most of the ways raise — packed to that count, or kept below it
-     * (ways that raise several items would overlap, and a path row may have hundreds).
+     * Opens the children of node `id` (floor and ceiling in `lb` and `ub`): one per way to meet the row it breaks when
+     * every way raises a single item (see the module comment); otherwise two, on the item most of the ways raise —
+     * packed to that count, or kept below it (ways that raise several items would overlap, and a path row may have
+     * hundreds).
      */
-    const split = (node: OpenNode, ways: readonly Raise[]): void => {
-      const { lb } = node;
+    const split = (id: number, ways: readonly Raise[]): void => {
       const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
       const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
-      const siblingsUb = node.ub.slice();
+      siblingsUb.set(ub);
+      const floorG = store.floorG[id] as number;
+      const units = store.units[id] as number;
       // Every way left raises a single item (see above): one child per item and count.
       const seen = new Set<number>();
       for (const raise of raises) {
@@ -367,8 +491,8 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         const key = first[0] * 256 + first[1];
         if (seen.has(key)) continue;
         seen.add(key);
-        const childLb = lb.slice();
-        const childUb = siblingsUb.slice();
+        childLb.set(lb);
+        childUb.set(siblingsUb);
         let possible = true;
         let addedG = 0;
         let addedUnits = 0;
@@ -384,19 +508,13 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
         const raisedByDominance = possible ? propagate(childLb, childUb) : -1;
         if (raisedByDominance >= 0) {
           // Summing the floor over every item for each of a node's children (dozens at 200 items) cost more than the rest.
-          const floorG = raisedByDominance === 0 ? node.floorG + addedG : gramsOf(childLb);
-          open.push({
-            lb: childLb,
-            ub: childUb,
-            floorG,
-            boundG: Math.max(node.boundG, floorG),
-            seen: node.seen,
-            pending: node.pending,
-            checked: false,
-            surrogateDue: false,
-            broken: null,
-            units: raisedByDominance === 0 ? node.units + addedUnits : packedUnits(childLb),
-          });
+          openChild(
+            id,
+            childLb,
+            childUb,
+            raisedByDominance === 0 ? floorG + addedG : gramsOf(childLb),
+            raisedByDominance === 0 ? units + addedUnits : packedUnits(childLb),
+          );
         }
         // The next siblings hold kits that do not take this way (kept apart when the way raises a single item).
         if (raise.length === 1) {
@@ -406,76 +524,78 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       }
       if (raises !== unmet) {
         // The other half of the two-way split: the item kept below the count (the row is checked again there).
-        const childLb = lb.slice();
-        if (propagate(childLb, siblingsUb) >= 0)
-          open.push({
-            lb: childLb,
-            ub: siblingsUb,
-            floorG: node.floorG,
-            boundG: node.boundG,
-            seen: node.seen,
-            pending: node.pending,
-            checked: false,
-            surrogateDue: false,
-            broken: null,
-            units: node.units,
-          });
+        childLb.set(lb);
+        if (propagate(childLb, siblingsUb) >= 0) openChild(id, childLb, siblingsUb, floorG, units);
       }
     };
 
+    /** Puts node `id` back in line. */
+    const putBack = (id: number): void => open.push(id, store.boundG[id] as number, store.units[id] as number);
+
     for (;;) {
       const popped = open.pop();
-      if (!popped) return { status: 'infeasible', nodes };
+      if (popped === undefined) return { status: 'infeasible', nodes };
       // A copy's nodes are shared with the kept heap, where a raised bound in place would break its order.
-      const node = copyNodes ? { ...popped } : popped;
-      if (node.boundG > capG + 1e-9) {
+      const id = copyNodes ? store.copy(popped, serial) : popped;
+      if ((store.boundG[id] as number) > capG + 1e-9) {
         // Every open node is above the cap: none is lost, a later solve without the cap may need them.
-        open.push(node);
+        putBack(id);
         return { status: 'infeasible', nodes };
       }
       nodes++;
       if (nodes > nodeLimit || ((nodes & 255) === 0 && now() >= deadlineMs)) {
-        open.push(node);
+        putBack(id);
         return { status: 'gave-up', nodes };
       }
       if (open.size >= (limits.openLimit ?? maxOpenNodes)) {
-        open.push(node);
+        putBack(id);
         return { status: 'too-large', nodes };
       }
-      const before = node.boundG;
-      if (!check(node)) continue;
-      if (node.boundG > before + 1e-9) {
-        // Re-bounded under newer rows: back in line.
-        open.push(node);
+      store.read(id, lb, ub);
+      const before = store.boundG[id] as number;
+      if (!check(id)) {
+        store.close(id);
         continue;
       }
-      if (node.surrogateDue) {
+      if ((store.boundG[id] as number) > before + 1e-9) {
+        // Re-bounded under newer rows: back in line.
+        putBack(id);
+        continue;
+      }
+      if (store.surrogateDue[id] === 1) {
         // The rows' surrogate, once the node is the least (most checks raise a node's bound by a single row and put it
         // back in line, and few come up again: on the 200-item bench locker 147,000 of 149,000 checks; working it out
         // at each check took 1.7 of the master's 5.2 s). The same bound as at the check: its rows have not changed.
-        node.surrogateDue = false;
-        const surrogateG = surrogateOf(node);
-        if (surrogateG === Infinity) continue;
-        if (node.floorG + surrogateG > node.boundG + 1e-9) {
-          node.boundG = node.floorG + surrogateG;
-          open.push(node);
+        store.surrogateDue[id] = 0;
+        const surrogateG = surrogateOf(id);
+        if (surrogateG === Infinity) {
+          store.close(id);
+          continue;
+        }
+        const floorG = store.floorG[id] as number;
+        if (floorG + surrogateG > (store.boundG[id] as number) + 1e-9) {
+          store.boundG[id] = floorG + surrogateG;
+          putBack(id);
           continue;
         }
       }
-      if (node.broken) {
-        split(node, node.broken.raises(node.lb, node.ub));
+      const broken = store.broken[id];
+      if (broken) {
+        split(id, broken.raises(lb, ub));
+        store.close(id);
         continue;
       }
-      const same = exactly.find((k) => k.every((v, i) => v === (node.lb[i] ?? 0)));
+      const same = exactly.find((k) => k.every((v, i) => v === (lb[i] ?? 0)));
       if (same) {
         split(
-          node,
-          same.flatMap((v, i) => ((node.ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : [])),
+          id,
+          same.flatMap((v, i) => ((ub[i] ?? 0) > v ? [[[i, v + 1] as const]] : [])),
         );
+        store.close(id);
         continue;
       }
-      open.push(node);
-      return { status: 'optimal', counts: Array.from(node.lb), massG: node.floorG, nodes };
+      putBack(id);
+      return { status: 'optimal', counts: Array.from(lb), massG: store.floorG[id] as number, nodes };
     }
   };
 
@@ -483,31 +603,32 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
   const start = (): void => {
     if (started) return;
     started = true;
-    const lb = new Uint8Array(n);
-    const ub = Uint8Array.from(owned);
-    if (propagate(lb, ub) >= 0)
-      heap.push({
-        lb,
-        ub,
-        floorG: gramsOf(lb),
-        boundG: gramsOf(lb),
-        seen: -1,
-        pending: null,
-        checked: false,
-        surrogateDue: false,
-        broken: null,
-        units: packedUnits(lb),
-      });
+    const rootLb = new Uint8Array(n);
+    const rootUb = Uint8Array.from(owned);
+    if (propagate(rootLb, rootUb) >= 0) {
+      const id = store.open(rootLb, rootUb, 0);
+      store.floorG[id] = gramsOf(rootLb);
+      store.boundG[id] = gramsOf(rootLb);
+      store.seen[id] = -1;
+      store.units[id] = packedUnits(rootLb);
+      heap.push(id, store.boundG[id] as number, store.units[id] as number);
+    }
   };
 
   return {
     next(instance, limits = {}) {
       start();
+      serial++;
       return solve(instance, limits, heap, false);
     },
     peek(instance, limits = {}) {
       start();
-      return solve(instance, limits, heap.copy(), true);
+      serial++;
+      const copy = heap.copy();
+      const answer = solve(instance, limits, copy, true);
+      // The copy's own nodes (those it opened or copied) go with it; the kept heap's stay.
+      for (const id of copy.ids()) if (store.openedIn[id] === serial) store.close(id);
+      return answer;
     },
   };
 }
@@ -530,10 +651,10 @@ function nonNegativeCut(cut: EnergyCut): boolean {
   return true;
 }
 
-/** A binary min-heap of open nodes by bound; among equal bounds the node with more packed first (nearer a leaf). */
+/** A binary min-heap of open node ids by bound; among equal bounds the node with more packed first (nearer a leaf). */
 class NodeHeap {
-  private nodes: OpenNode[] = [];
-  /** Each node's bound and units beside it: comparisons read these packed numbers, not the nodes. */
+  private nodes: number[] = [];
+  /** Each node's bound and units beside it: comparisons read these packed numbers. */
   private bounds: number[] = [];
   private units: number[] = [];
   /** A heap over the same nodes (its own order from here on). */
@@ -547,31 +668,34 @@ class NodeHeap {
   get size(): number {
     return this.nodes.length;
   }
-  private place(k: number, node: OpenNode, boundG: number, units: number): void {
+  /** The ids it holds, in no order. */
+  ids(): readonly number[] {
+    return this.nodes;
+  }
+  private place(k: number, node: number, boundG: number, units: number): void {
     this.nodes[k] = node;
     this.bounds[k] = boundG;
     this.units[k] = units;
   }
-  push(node: OpenNode): void {
-    const { boundG, units } = node;
+  push(node: number, boundG: number, units: number): void {
     // Sift the hole up, moving parents down, and place the node once.
     let k = this.nodes.length;
     while (k > 0) {
       const parent = (k - 1) >> 1;
       if (!before(boundG, units, this.bounds[parent] as number, this.units[parent] as number)) break;
-      this.place(k, this.nodes[parent] as OpenNode, this.bounds[parent] as number, this.units[parent] as number);
+      this.place(k, this.nodes[parent] as number, this.bounds[parent] as number, this.units[parent] as number);
       k = parent;
     }
     this.place(k, node, boundG, units);
   }
-  pop(): OpenNode | undefined {
+  pop(): number | undefined {
     const { nodes, bounds, units } = this;
     const top = nodes[0];
     const last = nodes.pop();
     const lastBound = bounds.pop() as number;
     const lastUnits = units.pop() as number;
     const size = nodes.length;
-    if (size > 0 && last) {
+    if (size > 0 && last !== undefined) {
       // Sift the hole down from the root, moving the better child up, and place the last node once.
       let k = 0;
       for (;;) {
@@ -581,7 +705,7 @@ class NodeHeap {
         const m =
           r < size && before(bounds[r] as number, units[r] as number, bounds[l] as number, units[l] as number) ? r : l;
         if (!before(bounds[m] as number, units[m] as number, lastBound, lastUnits)) break;
-        this.place(k, nodes[m] as OpenNode, bounds[m] as number, units[m] as number);
+        this.place(k, nodes[m] as number, bounds[m] as number, units[m] as number);
         k = m;
       }
       this.place(k, last, lastBound, lastUnits);

@@ -221,6 +221,13 @@ export function buildDailyModel(
             rows.push({ name: `lb${s}_${t}_${j}`, terms: [...dayTerms, [early, -1], ...negTerms(v)], upper: 0 }),
           );
           rows.push({ name: `el${s}_${t}`, terms: [...dayTerms, [early, -1]], lower: 0 });
+          // The morning fits in the stores' capacity above the reserve, whatever the room rows counted before.
+          if (c.earlyRoomCapped)
+            rows.push({
+              name: `ec${s}_${t}`,
+              terms: [[early, 1], ...capacityTerms.map(([col, w]) => [col, -w] as const)],
+              upper: 0,
+            });
           rows.push({
             name: `er${s}_${t}`,
             terms: [...harvested.map((col) => [col, 1] as const), [early, 1]],

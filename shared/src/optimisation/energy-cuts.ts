@@ -170,6 +170,7 @@ export function evaluateDailyModel(
           for (const v of b.split.late) lateWh = Math.min(lateWh, scaledValue(v, ratioCounts));
           let earlyWh = b.split.early.length > 0 ? Infinity : 0;
           for (const v of b.split.early) earlyWh = Math.min(earlyWh, scaledValue(v, ratioCounts));
+          if (c.earlyRoomCapped) earlyWh = Math.min(earlyWh, spareCapacityWh);
           const splitWh = Math.min(earlyWh, previousRoomWh - cumWh) + lateWh;
           if (splitWh < bestWh) bestWh = splitWh;
         }
@@ -191,14 +192,16 @@ export function evaluateDailyModel(
         if (b.split) {
           const lateValues = b.split.late.map(value);
           const late = b.split.late[argMin(lateValues)] as BoundVector;
-          const earlyValues = b.split.early.map(value);
+          // The stores' capacity above the reserve is one more bound on the morning (`earlyRoomCapped`).
+          const earlyVectors = c.earlyRoomCapped ? [...b.split.early, capacity] : b.split.early;
+          const earlyValues = earlyVectors.map(value);
           const earlyIdx = argMin(earlyValues);
           const earlyRoomWh = previousRoomWh - cumWh;
           const earlyBoundWh = earlyValues[earlyIdx] ?? 0;
           // When the room left the day before caps the morning: cum_t ≤ D_{<t} + late bound.
           consider(Math.min(earlyBoundWh, earlyRoomWh) + Math.min(...lateValues), {
             kind: 'split',
-            early: earlyBoundWh <= earlyRoomWh ? (b.split.early[earlyIdx] as BoundVector) : null,
+            early: earlyBoundWh <= earlyRoomWh ? (earlyVectors[earlyIdx] as BoundVector) : null,
             roomWh: previousRoomWh,
             late,
           });

@@ -1,5 +1,6 @@
 /**
- * A kit's views are relaxations of the judge: every kit the hour-by-hour simulation accepts passes every view of it,
+ * The daily model and a kit's views are relaxations of the judge: every kit the hour-by-hour simulation accepts passes
+ * the daily model and every view of it,
  * over the whole locker and over its core (the first search of a large locker, whose views raise the demand from the
  * whole locker's best share). Checked where it is tightest — kits shaved to the edge of feasibility (no unit can go
  * without the simulation rejecting the kit) — on summer trips of the bench's kind. The real sun, the real simulation
@@ -9,6 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { planningContext } from '../planning/build-problem.js';
 import { summerTripInput } from '../testing/random-planning.js';
 import { coreLocker, restrictedTo } from './core-locker.js';
+import { evaluateDailyModel } from './energy-cuts.js';
 import { kitViews, kitViewsShort } from './kit-views.js';
 import { presolve, type PresolvedProblem } from './presolve.js';
 import { seededRandom } from './synthetic-problem.js';
@@ -63,6 +65,7 @@ function shavedToEdge(
       const fewer = new Map(kit).set(id, (kit.get(id) ?? 0) - 1);
       if (!judge(fewer).feasible) break;
       kit.set(id, (kit.get(id) ?? 0) - 1);
+      expect(evaluateDailyModel(pre, kit, { anyShortfall: true }).shortfalls).toEqual([]);
       expect(kitViewsShort(pre, kit)).toBe(false);
     }
   }

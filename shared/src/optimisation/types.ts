@@ -171,6 +171,13 @@ export interface DailyCoefficients {
    * bank spills the morning's sun. Every later step of the day counts as overlapping the top-ups.
    */
   firstTopUpStep?: readonly number[];
+  /**
+   * With `firstTopUpStep`: no store gives energy before a day's first top-up (no device runs live from a store), so
+   * the day's stored harvest before it also fits in the stores' room at the day's start, at most their capacity above
+   * the reserve — however many days of room the room rows have counted before (their most draw runs ahead of the true
+   * draw day after day).
+   */
+  earlyRoomCapped?: boolean;
 }
 
 /** The problem: candidates, daily model, optional gram limit. */

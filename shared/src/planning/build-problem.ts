@@ -281,6 +281,8 @@ export function planningContext(
     (_, t) => hoursBefore[t + 1 < dayCount ? (firstTopUpStep[t + 1] ?? stepCount) : stepCount] ?? tripHours,
   );
   const needs: PathNeed[] = [];
+  /** Whether some device can run live from a pack (then stores give energy outside the top-ups). */
+  let anyLive = false;
   const leastCum = new Array<number>(dayCount).fill(0);
   const mostCum = new Array<number>(dayCount).fill(0);
   for (const d of input.devices) {
@@ -425,6 +427,7 @@ export function planningContext(
     // A device that can run live from a pack draws its use straight through the lead (no charging loss) and only as
     // it uses it: its least draw by a day's end counts the use up to then, at the better of the two shares.
     const bestShare = Math.max(d.spec.chargeEfficiency * best, liveShare);
+    if (liveShare > 0) anyLive = true;
     const perHourWh = deviceDemandWhPerDay(d.spec) / 24;
     /** What the device must have gained from stores by each day's end (its least draw × the best share). */
     const gainCum = new Array<number>(dayCount).fill(0);
@@ -466,6 +469,7 @@ export function planningContext(
       timing: 'overlapping',
       dayFirstStep,
       firstTopUpStep,
+      earlyRoomCapped: !anyLive,
     },
   };
 

@@ -152,7 +152,8 @@ class NodeStore {
 
   constructor(private readonly n: number) {
     this.width = 2 * n;
-    this.capacity = 256;
+    // Room for the nodes of a small search from the start (a gram price's search opens thousands; each doubling copies).
+    this.capacity = 2048;
     this.counts = new Uint8Array(this.capacity * this.width);
     this.floorG = new Float64Array(this.capacity);
     this.boundG = new Float64Array(this.capacity);

@@ -236,7 +236,12 @@ describe('plans', () => {
       .send({ kit: lines, source: 'swap', planId: plan.id })
       .expect(200);
     const chosen: ChosenKit | null = chosenKitResponseSchema.parse(stored.body).kit;
-    expect(chosen).toMatchObject({ source: 'swap', planId: plan.id, updatedAt: t.clock.now().toISOString() });
+    expect(chosen).toMatchObject({
+      source: 'swap',
+      planId: plan.id,
+      updatedAt: t.clock.now().toISOString(),
+      modelVersion: planModelVersion,
+    });
     expect(chosen?.kit.massG).toBe(swap.kit.massG);
     expect(chosen?.kit.lines.map((l) => l.itemId).sort()).toEqual(lines.map((l) => l.itemId).sort());
     expect(chosen?.evaluation.verdict.status).not.toBe('runs-dry');
@@ -256,7 +261,14 @@ describe('plans', () => {
         },
       ],
       cautions: chosen?.evaluation.cautions.map((c) => c.text),
+      earlierPlanner: false,
     });
+    // A kit an earlier planner simulated says so on the share page (its verdict may no longer be the planner's).
+    await t.db.update(tripKits).set({ modelVersion: 'gramwatt-plan-1' }).where(eq(tripKits.tripId, route.trip.id));
+    const older = await t.http().get(`/api${share.body.share.path}`).expect(200);
+    expect(older.body.trip.plan.earlierPlanner).toBe(true);
+    const kitRead = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
+    expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });
 
   it('answers 422 for a trip with no devices', async () => {

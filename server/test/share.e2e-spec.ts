@@ -186,6 +186,7 @@ describe('share link with the plans feature present', () => {
       },
     ],
     cautions: ['Never charge lithium below 0 °C.'],
+    earlierPlanner: false,
   };
   const source: TripPlanSummarySource = { summaryFor: async () => summary };
   let t: TestApp;
@@ -215,5 +216,26 @@ describe('share link with the plans feature present', () => {
     expect(mail?.text).toContain('Keeps up: 31 % to spare on the worst day');
     expect(mail?.text).toContain('Ash Leader carries Fold panel, 2 × Pocket bank (612 g)');
     expect(mail?.text).toContain('Never charge lithium below 0 °C.');
+    expect(mail?.text).not.toContain('earlier version of the planner');
+  });
+
+  it('says in the page and the e-mail when an earlier planner judged the chosen kit', async () => {
+    summary.earlierPlanner = true;
+    try {
+      const leader = await namedHiker(t, 'Ash Elder');
+      const home = await namedHiker(t, 'Rowan Elder');
+      const trip = await createTrip(t, leader);
+      await t.db.insert(tripMembers).values({ tripId: trip.id, accountId: home.id, role: 'viewer' });
+      const response = await t.http().post(`/api/trips/${trip.id}/send-home`).set(leader.auth).expect(200);
+      const opened = await t
+        .http()
+        .get(`/api/share/${tokenOf(response.body.share.path)}`)
+        .expect(200);
+      expect(opened.body.trip.plan.earlierPlanner).toBe(true);
+      const [mail] = await mailTo(t, home.email);
+      expect(mail?.text).toContain('An earlier version of the planner judged this kit');
+    } finally {
+      summary.earlierPlanner = false;
+    }
   });
 });

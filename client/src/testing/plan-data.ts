@@ -387,6 +387,7 @@ export const buildChosenKit = (lines: PlanKitLine[] = optimumLines(), overrides:
     planId: null,
     updatedAt: '2027-02-20T10:16:00.000Z',
     evaluation: buildEvaluation({ lines }),
+    modelVersion: planModelVersion,
     ...overrides,
   });
 

@@ -1,5 +1,5 @@
 import { BadRequestException, Inject, Injectable } from '@nestjs/common';
-import { type ChooseKitRequest, type ChosenKit, PlanningInputError } from '@gramwatt/shared';
+import { type ChooseKitRequest, type ChosenKit, PlanningInputError, planModelVersion } from '@gramwatt/shared';
 import { eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
@@ -54,6 +54,7 @@ export class ChosenKitService {
       lines: body.kit,
       kit: evaluated.kit,
       evaluation: withDeviceNames(evaluated.evaluation, input.deviceNames),
+      modelVersion: planModelVersion,
       chosenBy: member.accountId,
       chosenAt: this.clock.now(),
     };

@@ -34,6 +34,7 @@ export function toChosenKit(row: TripKitRow): ChosenKit {
     planId: row.planId,
     updatedAt: row.chosenAt.toISOString(),
     evaluation: row.evaluation,
+    modelVersion: row.modelVersion,
   };
 }
 
@@ -41,7 +42,14 @@ export function toChosenKit(row: TripKitRow): ChosenKit {
 export function optimumAsChosenKit(row: TripPlanRow): ChosenKit | null {
   const { kit, evaluation } = row.result;
   if (!kit || !evaluation) return null;
-  return { kit, source: 'optimum', planId: row.id, updatedAt: row.createdAt.toISOString(), evaluation };
+  return {
+    kit,
+    source: 'optimum',
+    planId: row.id,
+    updatedAt: row.createdAt.toISOString(),
+    evaluation,
+    modelVersion: row.modelVersion,
+  };
 }
 
 /**

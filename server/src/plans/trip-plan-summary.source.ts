@@ -1,3 +1,4 @@
+import { planModelVersion } from '@gramwatt/shared';
 import { Injectable } from '@nestjs/common';
 import type { TripPlanSummary, TripPlanSummarySource } from '../share/trip-plan-summary';
 import { ChosenKitService } from './chosen-kit.service';
@@ -39,6 +40,7 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
       kitMassG: chosen.kit.massG,
       carriers,
       cautions: chosen.evaluation.cautions.map((caution) => caution.text),
+      earlierPlanner: chosen.modelVersion !== planModelVersion,
     };
   }
 }

@@ -45,6 +45,11 @@ export function planMail({ trip, leaderName, link, note }: PlanMailInput): Rende
   blocks.push({ type: 'heading', text: 'Power plan' });
   if (trip.plan) {
     blocks.push({ type: 'paragraph', text: trip.plan.verdict });
+    if (trip.plan.earlierPlanner)
+      blocks.push({
+        type: 'paragraph',
+        text: 'An earlier version of the planner judged this kit: the verdict may no longer be its answer. Ask the leader to choose the kit again.',
+      });
     blocks.push({ type: 'paragraph', text: `Power gear: ${Math.round(trip.plan.kitMassG)} g in all.` });
     blocks.push({
       type: 'list',

@@ -12,6 +12,8 @@ export interface TripPlanSummary {
   carriers: { name: string; massG: number; items: { name: string; count: number }[] }[];
   /** Cautions that apply to this kit, as sentences. */
   cautions: string[];
+  /** Whether an earlier version of the planner judged the kit. */
+  earlierPlanner: boolean;
 }
 
 /** Reads the chosen kit's summary of a trip, or null when the trip has no plan yet. */

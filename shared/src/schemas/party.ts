@@ -116,6 +116,8 @@ export const sharedPlanSummarySchema = z.object({
     }),
   ),
   cautions: z.array(z.string()),
+  /** Whether an earlier version of the planner judged the kit (its verdict may no longer be the planner's). */
+  earlierPlanner: z.boolean(),
 });
 export type SharedPlanSummary = z.infer<typeof sharedPlanSummarySchema>;
 

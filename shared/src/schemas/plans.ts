@@ -307,6 +307,11 @@ export const chosenKitSchema = z.object({
   planId: z.string().nullable(),
   updatedAt: z.string(),
   evaluation: kitEvaluationSchema,
+  /**
+   * The planner version whose simulation `evaluation` is (`planModelVersion` when it was chosen; null for a kit chosen
+   * before versions were kept): an earlier one may judge the kit differently.
+   */
+  modelVersion: z.string().nullable(),
 });
 export type ChosenKit = z.infer<typeof chosenKitSchema>;
 

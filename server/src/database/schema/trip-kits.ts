@@ -1,6 +1,6 @@
 import type { KitEvaluation, KitSelection, PlanKit } from '@gramwatt/shared';
 import { kitSources } from '@gramwatt/shared';
-import { jsonb, pgEnum, pgTable, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { accounts } from './accounts';
 import { tripPlans } from './trip-plans';
 import { trips } from './trips';
@@ -23,6 +23,8 @@ export const tripKits = pgTable('trip_kits', {
   lines: jsonb('lines').$type<KitSelection>().notNull(),
   kit: jsonb('kit').$type<PlanKit>().notNull(),
   evaluation: jsonb('evaluation').$type<KitEvaluation>().notNull(),
+  /** The planner version that simulated `evaluation`; null for kits chosen before versions were kept. */
+  modelVersion: text('model_version'),
   chosenBy: uuid('chosen_by').references(() => accounts.id, { onDelete: 'set null' }),
   chosenAt: timestamp('chosen_at', { withTimezone: true, mode: 'date' }).notNull().defaultNow(),
 });

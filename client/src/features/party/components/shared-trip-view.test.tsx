@@ -36,6 +36,7 @@ const sharedTrip: SharedTrip = {
       'Fuse DC leads on the positive side close to the battery.',
       'Figures are estimates, not a guarantee: carry a margin.',
     ],
+    earlierPlanner: false,
   },
   linkExpiresAt: '2027-08-01T10:00:00.000Z',
 };
@@ -60,6 +61,17 @@ describe('the shared trip page', () => {
     expect(cautions).toHaveTextContent('Fuse DC leads');
     expect(within(cautions).getAllByRole('listitem')).toHaveLength(2);
     expect(screen.queryByRole('navigation')).toBeNull();
+    expect(screen.queryByText(/earlier version of the planner/)).toBeNull();
+  });
+
+  it('says when an earlier version of the planner judged the chosen kit', async () => {
+    const plan = sharedTrip.plan && { ...sharedTrip.plan, earlierPlanner: true };
+    partyDb.sharedTrips.set('older', { ...sharedTrip, plan });
+    await renderApp('/share/older');
+    const kit = within(await screen.findByRole('region', { name: 'The kit' }));
+    expect(kit.getByText('An earlier version of the planner judged this kit')).toBeInTheDocument();
+    expect(kit.getByText(/Ask the trip leader to choose the kit again/)).toBeInTheDocument();
+    expect(kit.getByText('Keeps up: 31 % to spare on the worst day.')).toBeInTheDocument();
   });
 
   it('says when the leader has not chosen a kit yet, and shows the standing cautions', async () => {

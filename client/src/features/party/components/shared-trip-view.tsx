@@ -1,5 +1,6 @@
 import type { DeviceKind, SharedTrip } from '@gramwatt/shared';
 import type { ReactNode } from 'react';
+import { Alert } from '@/components/ui/alert';
 import { PageSpinner } from '@/components/ui/spinner';
 import { isApiError } from '@/lib/api-client';
 import { formatDate, formatPlace } from '@/lib/format';
@@ -51,6 +52,14 @@ function PlanBlock({ plan }: { plan: SharedTrip['plan'] }) {
     );
   return (
     <Block id="shared-plan-heading" title="The kit">
+      {plan.earlierPlanner && (
+        <div className="mb-3">
+          <Alert tone="caution" title="An earlier version of the planner judged this kit">
+            Gramwatt now weighs the same trip and gear a little differently, so this verdict may no longer be its
+            answer. Ask the trip leader to choose the kit again.
+          </Alert>
+        </div>
+      )}
       <p className="text-lg font-medium text-scree-950">{plan.verdict}</p>
       <p className="mt-1 text-scree-700">{plan.kitMassG.toLocaleString('en-GB')} g of power gear in all.</p>
       <ul className="mt-4 grid gap-3 sm:grid-cols-2">

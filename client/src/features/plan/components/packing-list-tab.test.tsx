@@ -56,6 +56,20 @@ describe('PackingListTab', () => {
     expect(screen.getByRole('region', { name: 'Cautions' })).toHaveTextContent(/Fuse DC leads on the positive side/);
   });
 
+  it('says when an earlier version of the planner judged the chosen kit, and not otherwise', async () => {
+    installPlanApi({ chosen: buildChosenKit(optimumLines(), { modelVersion: 'gramwatt-plan-1' }) });
+    renderPackingList();
+    expect(await screen.findByText('An earlier version of the planner judged this kit')).toBeInTheDocument();
+    expect(screen.getByText(/Choose the kit again/)).toBeInTheDocument();
+  });
+
+  it('shows no earlier-planner caution for a kit the current planner judged', async () => {
+    installPlanApi({ chosen: buildChosenKit() });
+    renderPackingList();
+    expect(await screen.findByRole('heading', { name: 'Packing list: Test high route' })).toBeInTheDocument();
+    expect(screen.queryByText(/earlier version of the planner/)).toBeNull();
+  });
+
   it('prints from the Print button', async () => {
     installPlanApi({ chosen: buildChosenKit() });
     const print = vi.spyOn(window, 'print').mockImplementation(() => {});

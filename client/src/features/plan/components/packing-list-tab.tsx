@@ -1,3 +1,5 @@
+import { planModelVersion } from '@gramwatt/shared';
+import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatDate } from '@/lib/format';
@@ -9,7 +11,7 @@ import './packing-list-print.css';
 import { TabError, TabLoading } from './tab-states';
 
 /** The Packing list tab: the chosen kit as a list to pack and print. */
-export function PackingListTab({ tripId }: PlanTabProps) {
+export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
   const chosen = useChosenKit(tripId);
   const party = useTripParty(tripId);
 
@@ -39,6 +41,15 @@ export function PackingListTab({ tripId }: PlanTabProps) {
           Print
         </Button>
       </div>
+      {chosen.data.modelVersion !== planModelVersion && (
+        <Alert tone="caution" title="An earlier version of the planner judged this kit">
+          Gramwatt now weighs the same trip and gear a little differently, so its verdict and schedule may no longer be
+          the planner&apos;s.{' '}
+          {canChooseKit
+            ? 'Choose the kit again (on the Plan or the Try a kit tab) to have it judged afresh.'
+            : 'The leader or a partner can choose it again to have it judged afresh.'}
+        </Alert>
+      )}
       <PackingList chosen={chosen.data} members={party.data.members} devices={party.data.devices} />
     </article>
   );

@@ -1,0 +1,1 @@
+ALTER TABLE "trip_kits" ADD COLUMN "model_version" text;

@@ -201,9 +201,10 @@ describe('share link with the plans feature present', () => {
     await t.close();
   });
 
-  it('puts the chosen kit’s verdict, carriers and cautions in the share page and the e-mail', async () => {
-    const leader = await namedHiker(t, 'Ash Leader');
-    const home = await namedHiker(t, 'Rowan at home');
+  /** A leader sends the plan home to one viewer; the share page as opened from the link, and the viewer's e-mail. */
+  const sendHome = async (leaderName: string, homeName: string) => {
+    const leader = await namedHiker(t, leaderName);
+    const home = await namedHiker(t, homeName);
     const trip = await createTrip(t, leader);
     await t.db.insert(tripMembers).values({ tripId: trip.id, accountId: home.id, role: 'viewer' });
     const response = await t.http().post(`/api/trips/${trip.id}/send-home`).set(leader.auth).expect(200);
@@ -211,29 +212,25 @@ describe('share link with the plans feature present', () => {
       .http()
       .get(`/api/share/${tokenOf(response.body.share.path)}`)
       .expect(200);
-    expect(opened.body.trip.plan).toEqual(summary);
     const [mail] = await mailTo(t, home.email);
-    expect(mail?.text).toContain('Keeps up: 31 % to spare on the worst day');
-    expect(mail?.text).toContain('Ash Leader carries Fold panel, 2 × Pocket bank (612 g)');
-    expect(mail?.text).toContain('Never charge lithium below 0 °C.');
-    expect(mail?.text).not.toContain('earlier version of the planner');
+    return { plan: opened.body.trip.plan, mailText: mail?.text ?? '' };
+  };
+
+  it('puts the chosen kit’s verdict, carriers and cautions in the share page and the e-mail', async () => {
+    const { plan, mailText } = await sendHome('Ash Leader', 'Rowan at home');
+    expect(plan).toEqual(summary);
+    expect(mailText).toContain('Keeps up: 31 % to spare on the worst day');
+    expect(mailText).toContain('Ash Leader carries Fold panel, 2 × Pocket bank (612 g)');
+    expect(mailText).toContain('Never charge lithium below 0 °C.');
+    expect(mailText).not.toContain('earlier version of the planner');
   });
 
   it('says in the page and the e-mail when an earlier planner judged the chosen kit', async () => {
     summary.earlierPlanner = true;
     try {
-      const leader = await namedHiker(t, 'Ash Elder');
-      const home = await namedHiker(t, 'Rowan Elder');
-      const trip = await createTrip(t, leader);
-      await t.db.insert(tripMembers).values({ tripId: trip.id, accountId: home.id, role: 'viewer' });
-      const response = await t.http().post(`/api/trips/${trip.id}/send-home`).set(leader.auth).expect(200);
-      const opened = await t
-        .http()
-        .get(`/api/share/${tokenOf(response.body.share.path)}`)
-        .expect(200);
-      expect(opened.body.trip.plan.earlierPlanner).toBe(true);
-      const [mail] = await mailTo(t, home.email);
-      expect(mail?.text).toContain('An earlier version of the planner judged this kit');
+      const { plan, mailText } = await sendHome('Ash Elder', 'Rowan Elder');
+      expect(plan.earlierPlanner).toBe(true);
+      expect(mailText).toContain('An earlier version of the planner judged this kit');
     } finally {
       summary.earlierPlanner = false;
     }

@@ -1,7 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { installPlanApi } from '@/testing/mocks/plan-handlers';
-import { buildChosenKit, fixtureGear, kitLines, optimumLines, planTripId } from '@/testing/plan-data';
+import { buildChosenKit, buildPlanTrip, fixtureGear, kitLines, optimumLines, planTripId } from '@/testing/plan-data';
 import { renderWithProviders } from '@/testing/test-utils';
 import { PackingListTab } from './packing-list-tab';
 
@@ -63,11 +63,24 @@ describe('PackingListTab', () => {
     expect(screen.getByText(/Choose the kit again/)).toBeInTheDocument();
   });
 
-  it('shows no earlier-planner caution for a kit the current planner judged', async () => {
+  it('shows neither caution for a kit the current planner judged on the trip as it is', async () => {
     installPlanApi({ chosen: buildChosenKit() });
     renderPackingList();
     expect(await screen.findByRole('heading', { name: 'Packing list: Test high route' })).toBeInTheDocument();
     expect(screen.queryByText(/earlier version of the planner/)).toBeNull();
+    expect(screen.queryByText('The trip changed after this kit was chosen')).toBeNull();
+  });
+
+  it('says when the trip changed after the kit was chosen', async () => {
+    const trip = buildPlanTrip();
+    const changed = {
+      ...trip,
+      devices: trip.devices.map((d, i) => (i === 0 ? { ...d, updatedAt: '2027-02-21T09:00:00.000Z' } : d)),
+    };
+    installPlanApi({ trip: changed, chosen: buildChosenKit() });
+    renderPackingList();
+    expect(await screen.findByText('The trip changed after this kit was chosen')).toBeInTheDocument();
+    expect(screen.getByText(/for the devices and use the trip had then/)).toBeInTheDocument();
   });
 
   it('prints from the Print button', async () => {

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatDate } from '@/lib/format';
 import { useChosenKit } from '../api/get-chosen-kit';
-import { useTripParty } from '../api/get-trip-party';
+import { useTripChangedAt, useTripParty } from '../api/get-trip-party';
 import type { PlanTabProps } from '../types';
 import { PackingList } from './packing-list';
 import './packing-list-print.css';
@@ -14,6 +14,7 @@ import { TabError, TabLoading } from './tab-states';
 export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
   const chosen = useChosenKit(tripId);
   const party = useTripParty(tripId);
+  const changedAt = useTripChangedAt(tripId).data;
 
   if (chosen.isPending || party.isPending) return <TabLoading label="Loading the packing list" />;
   if (chosen.isError) return <TabError title="The chosen kit could not be loaded" error={chosen.error} />;
@@ -24,6 +25,11 @@ export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
         Find the lightest kit on the Plan tab, or pick one on Try a kit, and the packing list follows from it.
       </EmptyState>
     );
+
+  const isOutdated = changedAt !== undefined && Date.parse(changedAt) > Date.parse(chosen.data.updatedAt);
+  const again = canChooseKit
+    ? 'Choose the kit again (on the Plan or the Try a kit tab) to have it judged afresh.'
+    : 'The leader or a partner can choose it again to have it judged afresh.';
 
   return (
     <article data-print-root aria-labelledby="packing-list-heading" className="flex flex-col gap-4">
@@ -41,13 +47,15 @@ export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
           Print
         </Button>
       </div>
+      {isOutdated && (
+        <Alert tone="caution" title="The trip changed after this kit was chosen">
+          Its verdict and schedule are for the devices and use the trip had then. {again}
+        </Alert>
+      )}
       {chosen.data.modelVersion !== planModelVersion && (
         <Alert tone="caution" title="An earlier version of the planner judged this kit">
           Gramwatt now weighs the same trip and gear a little differently, so its verdict and schedule may no longer be
-          the planner&apos;s.{' '}
-          {canChooseKit
-            ? 'Choose the kit again (on the Plan or the Try a kit tab) to have it judged afresh.'
-            : 'The leader or a partner can choose it again to have it judged afresh.'}
+          the planner&apos;s. {again}
         </Alert>
       )}
       <PackingList chosen={chosen.data} members={party.data.members} devices={party.data.devices} />

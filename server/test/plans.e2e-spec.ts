@@ -262,11 +262,25 @@ describe('plans', () => {
       ],
       cautions: chosen?.evaluation.cautions.map((c) => c.text),
       earlierPlanner: false,
+      tripChanged: false,
     });
     // A kit an earlier planner simulated says so on the share page (its verdict may no longer be the planner's).
     await t.db.update(tripKits).set({ modelVersion: 'gramwatt-plan-1' }).where(eq(tripKits.tripId, route.trip.id));
     const older = await t.http().get(`/api${share.body.share.path}`).expect(200);
     expect(older.body.trip.plan.earlierPlanner).toBe(true);
+    expect(older.body.trip.plan.tripChanged).toBe(false);
+    // A device changed after the choice: the share page says its verdict is for the trip as it was.
+    t.clock.advanceS(60);
+    const tripRead = await t.http().get(`/api/trips/${route.trip.id}`).set(leader.auth).expect(200);
+    const deviceId = (tripRead.body.trip ?? tripRead.body).devices[0].id as string;
+    await t
+      .http()
+      .patch(`/api/trips/${route.trip.id}/devices/${deviceId}`)
+      .set(leader.auth)
+      .send({ useProfileOverride: null })
+      .expect(200);
+    const changed = await t.http().get(`/api${share.body.share.path}`).expect(200);
+    expect(changed.body.trip.plan.tripChanged).toBe(true);
     const kitRead = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });

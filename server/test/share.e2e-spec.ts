@@ -187,6 +187,7 @@ describe('share link with the plans feature present', () => {
     ],
     cautions: ['Never charge lithium below 0 °C.'],
     earlierPlanner: false,
+    tripChanged: false,
   };
   const source: TripPlanSummarySource = { summaryFor: async () => summary };
   let t: TestApp;
@@ -225,14 +226,17 @@ describe('share link with the plans feature present', () => {
     expect(mailText).not.toContain('earlier version of the planner');
   });
 
-  it('says in the page and the e-mail when an earlier planner judged the chosen kit', async () => {
+  it('says in the page and the e-mail when an earlier planner judged the chosen kit, or the trip changed since', async () => {
     summary.earlierPlanner = true;
+    summary.tripChanged = true;
     try {
       const { plan, mailText } = await sendHome('Ash Elder', 'Rowan Elder');
-      expect(plan.earlierPlanner).toBe(true);
+      expect(plan).toMatchObject({ earlierPlanner: true, tripChanged: true });
       expect(mailText).toContain('An earlier version of the planner judged this kit');
+      expect(mailText).toContain('The trip changed after this kit was chosen');
     } finally {
       summary.earlierPlanner = false;
+      summary.tripChanged = false;
     }
   });
 });

@@ -1,5 +1,8 @@
 import { planModelVersion } from '@gramwatt/shared';
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
+import { eq, max } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../database/database.types';
+import { tripDevices, trips } from '../database/schema';
 import type { TripPlanSummary, TripPlanSummarySource } from '../share/trip-plan-summary';
 import { ChosenKitService } from './chosen-kit.service';
 import { PlanningInputBuilder } from './planning-input.builder';
@@ -12,6 +15,7 @@ import { PlanningInputBuilder } from './planning-input.builder';
 @Injectable()
 export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
   constructor(
+    @Inject(DRIZZLE) private readonly db: Database,
     private readonly chosen: ChosenKitService,
     private readonly inputs: PlanningInputBuilder,
   ) {}
@@ -41,6 +45,17 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
       carriers,
       cautions: chosen.evaluation.cautions.map((caution) => caution.text),
       earlierPlanner: chosen.modelVersion !== planModelVersion,
+      tripChanged: (await this.changedAt(tripId)) > Date.parse(chosen.updatedAt),
     };
+  }
+
+  /** When the trip or one of its devices last changed (ms), as the plan tab and the packing list read it. */
+  private async changedAt(tripId: string): Promise<number> {
+    const [trip] = await this.db.select({ at: trips.updatedAt }).from(trips).where(eq(trips.id, tripId));
+    const [devices] = await this.db
+      .select({ at: max(tripDevices.updatedAt) })
+      .from(tripDevices)
+      .where(eq(tripDevices.tripId, tripId));
+    return Math.max(trip?.at.getTime() ?? 0, devices?.at?.getTime() ?? 0);
   }
 }

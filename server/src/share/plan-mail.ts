@@ -45,6 +45,11 @@ export function planMail({ trip, leaderName, link, note }: PlanMailInput): Rende
   blocks.push({ type: 'heading', text: 'Power plan' });
   if (trip.plan) {
     blocks.push({ type: 'paragraph', text: trip.plan.verdict });
+    if (trip.plan.tripChanged)
+      blocks.push({
+        type: 'paragraph',
+        text: 'The trip changed after this kit was chosen: the verdict is for the devices and use it had then. Ask the leader to choose the kit again.',
+      });
     if (trip.plan.earlierPlanner)
       blocks.push({
         type: 'paragraph',

@@ -14,6 +14,8 @@ export interface TripPlanSummary {
   cautions: string[];
   /** Whether an earlier version of the planner judged the kit. */
   earlierPlanner: boolean;
+  /** Whether the trip or one of its devices changed after the kit was chosen (its verdict is for the trip as it was). */
+  tripChanged: boolean;
 }
 
 /** Reads the chosen kit's summary of a trip, or null when the trip has no plan yet. */

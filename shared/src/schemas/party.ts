@@ -118,6 +118,8 @@ export const sharedPlanSummarySchema = z.object({
   cautions: z.array(z.string()),
   /** Whether an earlier version of the planner judged the kit (its verdict may no longer be the planner's). */
   earlierPlanner: z.boolean(),
+  /** Whether the trip or one of its devices changed after the kit was chosen (the verdict is for the trip as it was). */
+  tripChanged: z.boolean(),
 });
 export type SharedPlanSummary = z.infer<typeof sharedPlanSummarySchema>;
 

@@ -37,6 +37,7 @@ const sharedTrip: SharedTrip = {
       'Figures are estimates, not a guarantee: carry a margin.',
     ],
     earlierPlanner: false,
+    tripChanged: false,
   },
   linkExpiresAt: '2027-08-01T10:00:00.000Z',
 };
@@ -62,6 +63,16 @@ describe('the shared trip page', () => {
     expect(within(cautions).getAllByRole('listitem')).toHaveLength(2);
     expect(screen.queryByRole('navigation')).toBeNull();
     expect(screen.queryByText(/earlier version of the planner/)).toBeNull();
+    expect(screen.queryByText(/trip changed after/)).toBeNull();
+  });
+
+  it('says when the trip changed after the kit was chosen', async () => {
+    const plan = sharedTrip.plan && { ...sharedTrip.plan, tripChanged: true };
+    partyDb.sharedTrips.set('changed', { ...sharedTrip, plan });
+    await renderApp('/share/changed');
+    const kit = within(await screen.findByRole('region', { name: 'The kit' }));
+    expect(kit.getByText('The trip changed after this kit was chosen')).toBeInTheDocument();
+    expect(kit.queryByText(/earlier version of the planner/)).toBeNull();
   });
 
   it('says when an earlier version of the planner judged the chosen kit', async () => {

@@ -52,6 +52,13 @@ function PlanBlock({ plan }: { plan: SharedTrip['plan'] }) {
     );
   return (
     <Block id="shared-plan-heading" title="The kit">
+      {plan.tripChanged && (
+        <div className="mb-3">
+          <Alert tone="caution" title="The trip changed after this kit was chosen">
+            Its verdict is for the devices and use the trip had then. Ask the trip leader to choose the kit again.
+          </Alert>
+        </div>
+      )}
       {plan.earlierPlanner && (
         <div className="mb-3">
           <Alert tone="caution" title="An earlier version of the planner judged this kit">

@@ -21,6 +21,9 @@ describe('admin accounts', () => {
   });
 
   const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+  /** `PATCH /api/admin/accounts/:id` with `body`, as the holder of `token`. */
+  const patchAccount = (id: string, token: string, body: object) =>
+    t.http().patch(`/api/admin/accounts/${id}`).set(bearer(token)).send(body);
 
   it('answers 401 without a session and 403 to a member', async () => {
     const member = await insertAccount(t.db);
@@ -32,7 +35,7 @@ describe('admin accounts', () => {
       message: 'Your account does not have the role this needs',
       errors: [],
     });
-    await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({ role: 'admin' }).expect(403);
+    await patchAccount(member.id, token, { role: 'admin' }).expect(403);
     const [row] = await t.db.select().from(accounts).where(eq(accounts.id, member.id));
     expect(row?.role).toBe('member');
   });
@@ -56,21 +59,11 @@ describe('admin accounts', () => {
     const memberAgent = t.agent();
     await memberAgent.post('/api/auth/sign-in').send({ email: member.email, password: testPassword }).expect(200);
 
-    const disabled = await t
-      .http()
-      .patch(`/api/admin/accounts/${member.id}`)
-      .set(bearer(adminToken))
-      .send({ disabled: true })
-      .expect(200);
+    const disabled = await patchAccount(member.id, adminToken, { disabled: true }).expect(200);
     expect(disabled.body.account).toMatchObject({ id: member.id, disabled: true, role: 'member' });
     await memberAgent.get('/api/auth/me').expect(401);
 
-    await t
-      .http()
-      .patch(`/api/admin/accounts/${member.id}`)
-      .set(bearer(adminToken))
-      .send({ disabled: false })
-      .expect(200);
+    await patchAccount(member.id, adminToken, { disabled: false }).expect(200);
     await memberAgent.get('/api/auth/me').expect(200);
   });
 
@@ -80,12 +73,7 @@ describe('admin accounts', () => {
     const firstToken = await signInToken(t, first.email);
     const secondToken = await signInToken(t, second.email);
 
-    await t
-      .http()
-      .patch(`/api/admin/accounts/${second.id}`)
-      .set(bearer(firstToken))
-      .send({ role: 'member' })
-      .expect(200);
+    await patchAccount(second.id, firstToken, { role: 'member' }).expect(200);
     await t.http().get('/api/admin/accounts').set(bearer(secondToken)).expect(403);
     await t.http().get('/api/auth/me').set(bearer(secondToken)).expect(200);
   });
@@ -96,18 +84,13 @@ describe('admin accounts', () => {
       await insertAccount(t.db);
       const token = await signInToken(t, admin.email);
 
-      const demote = await t
-        .http()
-        .patch(`/api/admin/accounts/${admin.id}`)
-        .set(bearer(token))
-        .send({ role: 'member' })
-        .expect(409);
+      const demote = await patchAccount(admin.id, token, { role: 'member' }).expect(409);
       expect(demote.body).toEqual({
         statusCode: 409,
         message: 'The last active admin cannot be demoted or disabled',
         errors: [],
       });
-      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ disabled: true }).expect(409);
+      await patchAccount(admin.id, token, { disabled: true }).expect(409);
 
       const [row] = await t.db.select().from(accounts).where(eq(accounts.id, admin.id));
       expect(row).toMatchObject({ role: 'admin', disabled: false });
@@ -118,7 +101,7 @@ describe('admin accounts', () => {
       const admin = await insertAccount(t.db, { role: 'admin' });
       await insertAccount(t.db, { role: 'admin', disabled: true });
       const token = await signInToken(t, admin.email);
-      await t.http().patch(`/api/admin/accounts/${admin.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+      await patchAccount(admin.id, token, { role: 'member' }).expect(409);
     });
 
     it('with two admins one may step down, then the other may not', async () => {
@@ -126,11 +109,11 @@ describe('admin accounts', () => {
       const second = await insertAccount(t.db, { role: 'admin' });
       const token = await signInToken(t, first.email);
 
-      await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(token)).send({ disabled: true }).expect(200);
-      await t.http().patch(`/api/admin/accounts/${first.id}`).set(bearer(token)).send({ role: 'member' }).expect(409);
+      await patchAccount(second.id, token, { disabled: true }).expect(200);
+      await patchAccount(first.id, token, { role: 'member' }).expect(409);
       // Re-enabling the second makes stepping down possible again.
-      await t.http().patch(`/api/admin/accounts/${second.id}`).set(bearer(token)).send({ disabled: false }).expect(200);
-      await t.http().patch(`/api/admin/accounts/${first.id}`).set(bearer(token)).send({ role: 'member' }).expect(200);
+      await patchAccount(second.id, token, { disabled: false }).expect(200);
+      await patchAccount(first.id, token, { role: 'member' }).expect(200);
     });
 
     it('lets only one of two concurrent demotions of the last two admins through', async () => {
@@ -152,12 +135,7 @@ describe('admin accounts', () => {
     it('an admin may re-confirm their own role (no change is not a demotion)', async () => {
       const admin = await insertAccount(t.db, { role: 'admin' });
       const token = await signInToken(t, admin.email);
-      await t
-        .http()
-        .patch(`/api/admin/accounts/${admin.id}`)
-        .set(bearer(token))
-        .send({ role: 'admin', disabled: false })
-        .expect(200);
+      await patchAccount(admin.id, token, { role: 'admin', disabled: false }).expect(200);
     });
   });
 
@@ -166,31 +144,16 @@ describe('admin accounts', () => {
     const member = await insertAccount(t.db);
     const token = await signInToken(t, admin.email);
 
-    const empty = await t.http().patch(`/api/admin/accounts/${member.id}`).set(bearer(token)).send({}).expect(400);
+    const empty = await patchAccount(member.id, token, {}).expect(400);
     expect(empty.body.errors).toEqual([{ path: 'role', message: 'Give a role or a disabled flag' }]);
 
-    const badRole = await t
-      .http()
-      .patch(`/api/admin/accounts/${member.id}`)
-      .set(bearer(token))
-      .send({ role: 'owner' })
-      .expect(400);
+    const badRole = await patchAccount(member.id, token, { role: 'owner' }).expect(400);
     expect(badRole.body.errors[0].path).toBe('role');
 
-    const badId = await t
-      .http()
-      .patch('/api/admin/accounts/not-a-uuid')
-      .set(bearer(token))
-      .send({ role: 'admin' })
-      .expect(400);
+    const badId = await patchAccount('not-a-uuid', token, { role: 'admin' }).expect(400);
     expect(badId.body.errors).toEqual([{ path: 'id', message: 'Not an account id' }]);
 
-    const missing = await t
-      .http()
-      .patch('/api/admin/accounts/1b4e28ba-2fa1-41d2-883f-0016d3cca427')
-      .set(bearer(token))
-      .send({ role: 'admin' })
-      .expect(404);
+    const missing = await patchAccount('1b4e28ba-2fa1-41d2-883f-0016d3cca427', token, { role: 'admin' }).expect(404);
     expect(missing.body).toEqual({ statusCode: 404, message: 'No such account', errors: [] });
   });
 });

@@ -264,7 +264,7 @@ class BirthBits {
  * Creates a master search over a presolved problem: best-first branch and bound whose open nodes carry over from one
  * solve to the next (cuts only remove kits, so every open node is still a valid part of what is left, and its bound
  * only rises). A solve pops the node of least bound and checks it against the rows born since it was last checked
- * and the rows its parent broke (see `OpenNode.pending`): a higher bound puts it back in line; a floor kit that
+ * and the rows its parent broke (see `NodeStore.pending`): a higher bound puts it back in line; a floor kit that
  * meets every row (and no "not exactly" cut) is the answer — every other open node's bound is at least its grams —
  * and the node stays open, for the next solve's cuts to split. Children are opened with their parent's bound (or
  * their floor's grams, if higher) and checked only when they come up: most never do.

@@ -142,14 +142,13 @@ export function validateProblem(problem: OptimisationProblem): void {
     for (const a of need.alternatives)
       if (a.efficiency !== undefined && !(a.efficiency > 0 && a.efficiency <= 1))
         throw new Error(`need ${need.needId}: an alternative's efficiency must be in (0, 1]`);
-    if (need.demandShare !== undefined && !(need.demandShare > 0 && need.demandShare <= 1))
-      throw new Error(`need ${need.needId}: demandShare must be in (0, 1]`);
-    // The demand rows count the device at `demandShare`: no alternative may put more of a drawn Wh into it.
-    if (
-      need.demandShare !== undefined &&
-      need.alternatives.some((a) => (a.efficiency ?? 0) > need.demandShare! + 1e-12)
-    )
-      throw new Error(`need ${need.needId}: an alternative's efficiency is above demandShare`);
+    const share = need.demandShare;
+    if (share !== undefined) {
+      if (!(share > 0 && share <= 1)) throw new Error(`need ${need.needId}: demandShare must be in (0, 1]`);
+      // The demand rows count the device at `demandShare`: no alternative may put more of a drawn Wh into it.
+      if (need.alternatives.some((a) => (a.efficiency ?? 0) > share + 1e-12))
+        throw new Error(`need ${need.needId}: an alternative's efficiency is above demandShare`);
+    }
   }
   if (problem.gramLimitG !== undefined && !(problem.gramLimitG >= 0)) throw new Error('gramLimitG must be ≥ 0');
 }

@@ -43,6 +43,20 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
+/** Why the chosen kit's verdict may be stale, as the summary flags it. */
+const staleNotes = [
+  {
+    when: 'tripChanged',
+    title: 'The trip changed after this kit was chosen',
+    text: 'Its verdict is for the devices and use the trip had then.',
+  },
+  {
+    when: 'earlierPlanner',
+    title: 'An earlier version of the planner judged this kit',
+    text: 'Gramwatt now weighs the same trip and gear a little differently, so this verdict may no longer be its answer.',
+  },
+] as const;
+
 function PlanBlock({ plan }: { plan: SharedTrip['plan'] }) {
   if (!plan)
     return (
@@ -52,21 +66,15 @@ function PlanBlock({ plan }: { plan: SharedTrip['plan'] }) {
     );
   return (
     <Block id="shared-plan-heading" title="The kit">
-      {plan.tripChanged && (
-        <div className="mb-3">
-          <Alert tone="caution" title="The trip changed after this kit was chosen">
-            Its verdict is for the devices and use the trip had then. Ask the trip leader to choose the kit again.
-          </Alert>
-        </div>
-      )}
-      {plan.earlierPlanner && (
-        <div className="mb-3">
-          <Alert tone="caution" title="An earlier version of the planner judged this kit">
-            Gramwatt now weighs the same trip and gear a little differently, so this verdict may no longer be its
-            answer. Ask the trip leader to choose the kit again.
-          </Alert>
-        </div>
-      )}
+      {staleNotes
+        .filter((note) => plan[note.when])
+        .map((note) => (
+          <div key={note.when} className="mb-3">
+            <Alert tone="caution" title={note.title}>
+              {note.text} Ask the trip leader to choose the kit again.
+            </Alert>
+          </div>
+        ))}
       <p className="text-lg font-medium text-scree-950">{plan.verdict}</p>
       <p className="mt-1 text-scree-700">{plan.kitMassG.toLocaleString('en-GB')} g of power gear in all.</p>
       <ul className="mt-4 grid gap-3 sm:grid-cols-2">

@@ -281,6 +281,31 @@ describe('plans', () => {
       .expect(200);
     const changed = await t.http().get(`/api${share.body.share.path}`).expect(200);
     expect(changed.body.trip.plan.tripChanged).toBe(true);
+    // Chosen again (as of now), then the device edited in the locker: stale again; then taken off the trip: stale.
+    const staleAfter = async (change: () => Promise<unknown>) => {
+      await t.db.update(tripKits).set({ chosenAt: t.clock.now() }).where(eq(tripKits.tripId, route.trip.id));
+      const fresh = await t.http().get(`/api${share.body.share.path}`).expect(200);
+      expect(fresh.body.trip.plan.tripChanged).toBe(false);
+      t.clock.advanceS(60);
+      await change();
+      return (await t.http().get(`/api${share.body.share.path}`).expect(200)).body.trip.plan.tripChanged;
+    };
+    const device = (tripRead.body.trip ?? tripRead.body).devices[0];
+    const editInLocker = async () => {
+      const item = (await t.http().get(`/api/locker/items/${device.itemId}`).set(leader.auth).expect(200)).body.item;
+      const { name, notes, countOwned } = item;
+      const spec = { ...item.spec, ownBatteryWh: item.spec.ownBatteryWh + 1 };
+      await t
+        .http()
+        .put(`/api/locker/items/${item.id}`)
+        .set(leader.auth)
+        .send({ name, notes, countOwned, spec })
+        .expect(200);
+    };
+    expect(await staleAfter(editInLocker)).toBe(true);
+    const takeOff = () =>
+      t.http().delete(`/api/trips/${route.trip.id}/devices/${deviceId}`).set(leader.auth).expect(204);
+    expect(await staleAfter(takeOff)).toBe(true);
     const kitRead = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });

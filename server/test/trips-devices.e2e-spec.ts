@@ -259,4 +259,51 @@ describe('trip devices and use-profile overrides', () => {
     expect(await t.db.select().from(tripDevices).where(eq(tripDevices.tripId, trip.id))).toEqual([]);
     await t.http().patch(`${devicesUrl}/not-a-device`).set(fern.auth).send({}).expect(404);
   });
+
+  it("every change that can stale a chosen kit moves the trip's or a device's change time", async () => {
+    const trip = await createTrip(t, fern);
+    const devicesUrl = `/api/trips/${trip.id}/devices`;
+    const tripUrl = `/api/trips/${trip.id}`;
+    const phone = await insertLockerItem(t.db, fern.id, testPhoneSpec());
+    const radio = await insertLockerItem(t.db, fern.id, testRadioSpec());
+    const lamp = await insertLockerItem(t.db, fern.id, testPhoneSpec({ ownBatteryWh: 3 }));
+    const added = await t.http().post(devicesUrl).set(fern.auth).send({ itemId: phone.id }).expect(201);
+    await t.http().post(devicesUrl).set(fern.auth).send({ itemId: radio.id }).expect(201);
+    await t.http().post(devicesUrl).set(fern.auth).send({ itemId: lamp.id }).expect(201);
+    const read = async () => (await t.http().get(tripUrl).set(fern.auth).expect(200)).body.trip;
+
+    // Taking a device off the trip: the trip's own time moves (the device's row is gone).
+    t.clock.advanceS(60);
+    await t.http().delete(`${devicesUrl}/${added.body.device.id}`).set(fern.auth).expect(204);
+    const afterRemoval = await read();
+    expect(afterRemoval.updatedAt).toBe(t.clock.now().toISOString());
+
+    // Editing a device in the locker (a bigger battery): that device's time on the trip moves.
+    t.clock.advanceS(60);
+    await putLockerSpec(fern, radio.id, testRadioSpec({ ownBatteryWh: 40 }));
+    const afterEdit = await read();
+    expect(afterEdit.devices.find((d: { itemId: string }) => d.itemId === radio.id).updatedAt).toBe(
+      t.clock.now().toISOString(),
+    );
+
+    // Deleting a device from the locker takes it off the trip by cascade: the trip's own time moves.
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${lamp.id}`).set(fern.auth).expect(204);
+    const afterDelete = await read();
+    expect(afterDelete.devices.map((d: { itemId: string }) => d.itemId)).toEqual([radio.id]);
+    expect(afterDelete.updatedAt).toBe(t.clock.now().toISOString());
+
+    // Replacing the whole locker from a CSV file (here its own export) takes the last device off too.
+    t.clock.advanceS(60);
+    const exported = await t.http().get('/api/locker/export').set(fern.auth).expect(200);
+    await t
+      .http()
+      .post('/api/locker/import?mode=replace&commit=true')
+      .set(fern.auth)
+      .attach('file', Buffer.from(exported.text, 'utf8'), { filename: 'locker.csv', contentType: 'text/csv' })
+      .expect(200);
+    const afterReplace = await read();
+    expect(afterReplace.devices).toEqual([]);
+    expect(afterReplace.updatedAt).toBe(t.clock.now().toISOString());
+  });
 });

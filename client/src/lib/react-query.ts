@@ -11,6 +11,12 @@ export const queryConfig = {
   },
 } satisfies DefaultOptions;
 
+/**
+ * Prefix of every trip query (the list and each trip). Trips carry their devices' locker specs, so a change in the
+ * locker invalidates them too; the key lives here because features do not import each other.
+ */
+export const tripsQueryKey = ['trips'] as const;
+
 /** Key of the signed-in account query; lives here so a 401 anywhere can clear it without an import cycle. */
 export const accountQueryKey = ['auth', 'me'] as const;
 

@@ -6,10 +6,11 @@ import {
   readLockerCsv,
   writeLockerCsv,
 } from '@gramwatt/shared';
-import { eq } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { lockerItems } from '../database/schema';
+import { lockerItems, tripDevices } from '../database/schema';
+import { markTripsOfItemsChanged } from '../trips/trips-changed';
 import { LockerService, lockerItemValues } from './locker.service';
 
 /** Rows per INSERT: well under PostgreSQL's 65,535 bind parameters (10 columns a row). */
@@ -54,7 +55,12 @@ export class LockerCsvService {
     const now = this.clock.now();
     const values = read.rows.map(({ item }) => lockerItemValues(ownerId, item, now));
     await this.db.transaction(async (tx) => {
-      if (mode === 'replace') await tx.delete(lockerItems).where(eq(lockerItems.ownerId, ownerId));
+      if (mode === 'replace') {
+        // The devices among the replaced items leave their trips by cascade: those trips count as changed.
+        const owned = tx.select({ id: lockerItems.id }).from(lockerItems).where(eq(lockerItems.ownerId, ownerId));
+        await markTripsOfItemsChanged(tx, inArray(tripDevices.itemId, owned), now);
+        await tx.delete(lockerItems).where(eq(lockerItems.ownerId, ownerId));
+      }
       for (let i = 0; i < values.length; i += insertChunkRows) {
         await tx.insert(lockerItems).values(values.slice(i, i + insertChunkRows));
       }

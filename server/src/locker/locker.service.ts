@@ -7,10 +7,11 @@ import {
   lockerItemKinds,
   lockerItemMassG,
 } from '@gramwatt/shared';
-import { type SQL, and, asc, desc, eq, ilike, sql } from 'drizzle-orm';
+import { type SQL, and, asc, desc, eq, ilike, inArray, sql } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type LockerItemRow, type NewLockerItemRow, lockerItems } from '../database/schema';
+import { type LockerItemRow, type NewLockerItemRow, lockerItems, tripDevices } from '../database/schema';
+import { markTripsOfItemsChanged } from '../trips/trips-changed';
 import { listFilesByItem } from '../locker-files/files-by-item';
 
 export const itemNotFoundMessage = 'No such item in your locker';
@@ -135,11 +136,20 @@ export class LockerService {
 
   /** Deletes the owner's item (its files' rows go with it by cascade); 404 when it is not theirs. */
   async delete(ownerId: string, id: string): Promise<void> {
-    const deleted = await this.db
-      .delete(lockerItems)
-      .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)))
-      .returning({ id: lockerItems.id });
-    if (deleted.length === 0) throw new NotFoundException(itemNotFoundMessage);
+    await this.db.transaction(async (tx) => {
+      const owned = tx
+        .select({ id: lockerItems.id })
+        .from(lockerItems)
+        .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)));
+      // A device deleted from the locker leaves its trips by cascade: they count as changed (marked first, while the
+      // cascade has not yet removed the rows that tell which trips; a 404 below rolls it back).
+      await markTripsOfItemsChanged(tx, inArray(tripDevices.itemId, owned), this.clock.now());
+      const deleted = await tx
+        .delete(lockerItems)
+        .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)))
+        .returning({ id: lockerItems.id });
+      if (deleted.length === 0) throw new NotFoundException(itemNotFoundMessage);
+    });
   }
 
   /** The files of the owner's items, by item id, oldest first. */

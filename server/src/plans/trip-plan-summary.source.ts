@@ -2,7 +2,7 @@ import { planModelVersion } from '@gramwatt/shared';
 import { Inject, Injectable } from '@nestjs/common';
 import { eq, max } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { tripDevices, trips } from '../database/schema';
+import { lockerItems, tripDevices, trips } from '../database/schema';
 import type { TripPlanSummary, TripPlanSummarySource } from '../share/trip-plan-summary';
 import { ChosenKitService } from './chosen-kit.service';
 import { PlanningInputBuilder } from './planning-input.builder';
@@ -49,13 +49,17 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
     };
   }
 
-  /** When the trip or one of its devices last changed (ms), as the plan tab and the packing list read it. */
+  /**
+   * When the trip, one of its devices or a device's locker item last changed (ms), as the plan tab and the packing list
+   * read it (a removed device bumps the trip's own time).
+   */
   private async changedAt(tripId: string): Promise<number> {
     const [trip] = await this.db.select({ at: trips.updatedAt }).from(trips).where(eq(trips.id, tripId));
     const [devices] = await this.db
-      .select({ at: max(tripDevices.updatedAt) })
+      .select({ at: max(tripDevices.updatedAt), itemAt: max(lockerItems.updatedAt) })
       .from(tripDevices)
+      .innerJoin(lockerItems, eq(lockerItems.id, tripDevices.itemId))
       .where(eq(tripDevices.tripId, tripId));
-    return Math.max(trip?.at.getTime() ?? 0, devices?.at?.getTime() ?? 0);
+    return Math.max(trip?.at.getTime() ?? 0, devices?.at?.getTime() ?? 0, devices?.itemAt?.getTime() ?? 0);
   }
 }

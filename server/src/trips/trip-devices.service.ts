@@ -20,7 +20,7 @@ import { z } from 'zod';
 import { CLOCK, type Clock } from '../common/clock';
 import { isUniqueViolation } from '../common/database-errors';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type TripMemberRow, lockerItems, tripDevices, tripMembers } from '../database/schema';
+import { type TripMemberRow, lockerItems, tripDevices, tripMembers, trips } from '../database/schema';
 import { type TripDeviceWithItem, isDeviceItem, toTripDeviceDetail } from './trip-view';
 
 const uuidSchema = z.uuid();
@@ -139,10 +139,16 @@ export class TripDevicesService {
     return this.get(tripId, deviceId);
   }
 
-  /** Takes a device off the trip (the locker item stays). A partner may remove only their own devices. */
+  /**
+   * Takes a device off the trip (the locker item stays). A partner may remove only their own devices. The trip counts
+   * as changed then (its row's `updatedAt`), so a kit chosen for the longer device list is flagged as stale.
+   */
   async remove(tripId: string, deviceId: string, member: TripMemberRow): Promise<void> {
     await this.findForChange(tripId, deviceId, member);
-    await this.db.delete(tripDevices).where(and(eq(tripDevices.id, deviceId), eq(tripDevices.tripId, tripId)));
+    await this.db.transaction(async (tx) => {
+      await tx.delete(tripDevices).where(and(eq(tripDevices.id, deviceId), eq(tripDevices.tripId, tripId)));
+      await tx.update(trips).set({ updatedAt: this.clock.now() }).where(eq(trips.id, tripId));
+    });
   }
 
   /** How many devices each trip has. */

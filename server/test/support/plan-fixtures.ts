@@ -3,7 +3,7 @@ import { type LockerItemInputRaw, lockerItemInputSchema } from '@gramwatt/shared
 import type { Database } from '../../src/database/database.types';
 import { type LockerItemRow, lockerItems } from '../../src/database/schema';
 import type { TestApp } from './test-app';
-import { type Hiker, createTrip } from './trip-fixtures';
+import { type Hiker, createTrip, fixtureWrittenAt } from './trip-fixtures';
 
 /**
  * An invented radio operator's locker and five-night high route, shaped like the demo scenario (USB panels,
@@ -288,6 +288,8 @@ export async function insertLockerItems(
         spec: item.spec,
         countOwned: item.countOwned,
         massG: Math.round(item.spec.massG ?? 0),
+        createdAt: fixtureWrittenAt,
+        updatedAt: fixtureWrittenAt,
       })
       .returning();
     if (!row) throw new Error('insert returned no row');

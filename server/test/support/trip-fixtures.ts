@@ -55,6 +55,12 @@ export function testBankSpec(overrides: Partial<BankSpec> = {}): BankSpec {
   });
 }
 
+/**
+ * When items written straight to the database were written: before the test clock's start (`TestClock`), as if the
+ * member had set up the locker earlier — the database's own `now()` would put them after every change a test makes.
+ */
+export const fixtureWrittenAt = new Date('2026-01-01T00:00:00.000Z');
+
 /** A locker item inserted directly (as the seed does). */
 export async function insertLockerItem(
   db: Database,
@@ -64,7 +70,16 @@ export async function insertLockerItem(
 ): Promise<LockerItemRow> {
   const [row] = await db
     .insert(lockerItems)
-    .values({ ownerId, kind: spec.kind, name, spec, countOwned: 1, massG: Math.round(spec.massG ?? 0) })
+    .values({
+      ownerId,
+      kind: spec.kind,
+      name,
+      spec,
+      countOwned: 1,
+      massG: Math.round(spec.massG ?? 0),
+      createdAt: fixtureWrittenAt,
+      updatedAt: fixtureWrittenAt,
+    })
     .returning();
   if (!row) throw new Error('insert returned no row');
   return row;

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { env } from '@/config/env';
 import { api } from '@/lib/api-client';
+import { tripsQueryKey } from '@/lib/react-query';
 import { getLockerItemsQueryOptions } from './get-locker-items';
 
 const itemPath = (itemId: string) => `/locker/items/${encodeURIComponent(itemId)}`;
@@ -24,6 +25,11 @@ export const useDeleteLockerItem = () => {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteLockerItem,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey }),
+    // A deleted device leaves every trip it came on.
+    onSettled: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey }),
+        queryClient.invalidateQueries({ queryKey: tripsQueryKey }),
+      ]),
   });
 };

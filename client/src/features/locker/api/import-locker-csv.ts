@@ -1,5 +1,6 @@
 import type { LockerImportIssue, LockerImportMode, LockerImportPreviewRow, LockerImportResult } from '@gramwatt/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { tripsQueryKey } from '@/lib/react-query';
 import { getLockerItemsQueryOptions } from './get-locker-items';
 import { FormDataError, postFormData } from './post-form-data';
 
@@ -41,7 +42,10 @@ export const useImportLockerCsv = () => {
   return useMutation({
     mutationFn: importLockerCsv,
     onSuccess: (_result, { commit }) => {
-      if (commit) void queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey });
+      if (!commit) return;
+      void queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey });
+      // A replaced locker takes its devices off their trips.
+      void queryClient.invalidateQueries({ queryKey: tripsQueryKey });
     },
   });
 };

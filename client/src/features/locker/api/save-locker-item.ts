@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import { tripsQueryKey } from '@/lib/react-query';
 import { getLockerItemsQueryOptions } from './get-locker-items';
 import type { LockerItem, LockerItemInput } from './types';
 
@@ -22,6 +23,11 @@ export const useSaveLockerItem = () => {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: saveLockerItem,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey }),
+    // A device's spec shows (and is judged) on every trip it comes on.
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: getLockerItemsQueryOptions().queryKey }),
+        queryClient.invalidateQueries({ queryKey: tripsQueryKey }),
+      ]),
   });
 };

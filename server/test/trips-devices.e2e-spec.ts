@@ -278,6 +278,22 @@ describe('trip devices and use-profile overrides', () => {
     const afterRemoval = await read();
     expect(afterRemoval.updatedAt).toBe(t.clock.now().toISOString());
 
+    // Renaming a device in the locker (same spec): nothing the verdict reads changed, so no time moves.
+    const radioOnTrip = (trip: { devices: { itemId: string; updatedAt: string }[] }) =>
+      trip.devices.find((d) => d.itemId === radio.id)?.updatedAt;
+    const beforeRename = radioOnTrip(afterRemoval);
+    t.clock.advanceS(60);
+    const current = (await t.http().get(`/api/locker/items/${radio.id}`).set(fern.auth).expect(200)).body.item;
+    await t
+      .http()
+      .put(`/api/locker/items/${radio.id}`)
+      .set(fern.auth)
+      .send({ name: 'Renamed radio', notes: 'new notes', countOwned: 2, spec: current.spec })
+      .expect(200);
+    const afterRename = await read();
+    expect(radioOnTrip(afterRename)).toBe(beforeRename);
+    expect(afterRename.updatedAt).toBe(afterRemoval.updatedAt);
+
     // Editing a device in the locker (a bigger battery): that device's time on the trip moves.
     t.clock.advanceS(60);
     await putLockerSpec(fern, radio.id, testRadioSpec({ ownBatteryWh: 40 }));

@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import {
   type LockerFile,
@@ -52,6 +53,7 @@ export function lockerItemValues(ownerId: string, input: LockerItemInput, now: D
     massG: lockerItemMassG(input.spec),
     createdAt: now,
     updatedAt: now,
+    specChangedAt: now,
   };
 }
 
@@ -111,7 +113,7 @@ export class LockerService {
   async update(ownerId: string, id: string, input: LockerItemInput): Promise<LockerItemRow> {
     return this.db.transaction(async (tx) => {
       const [current] = await tx
-        .select({ kind: lockerItems.kind })
+        .select({ kind: lockerItems.kind, spec: lockerItems.spec })
         .from(lockerItems)
         .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)))
         .limit(1)
@@ -123,10 +125,17 @@ export class LockerService {
           errors: [{ path: 'spec.kind', message: kindChangeMessage }],
         });
       }
-      const { ownerId: _owner, createdAt: _created, ...values } = lockerItemValues(ownerId, input, this.clock.now());
+      const {
+        ownerId: _owner,
+        createdAt: _created,
+        specChangedAt,
+        ...values
+      } = lockerItemValues(ownerId, input, this.clock.now());
+      // A renamed item keeps its spec's time, so trips with the device do not show as changed.
+      const specChanged = !isDeepStrictEqual(current.spec, input.spec);
       const [row] = await tx
         .update(lockerItems)
-        .set(values)
+        .set(specChanged ? { ...values, specChangedAt } : values)
         .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)))
         .returning();
       if (!row) throw new NotFoundException(itemNotFoundMessage);

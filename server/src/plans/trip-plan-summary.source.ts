@@ -50,13 +50,13 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
   }
 
   /**
-   * When the trip, one of its devices or a device's locker item last changed (ms), as the plan tab and the packing list
+   * When the trip, one of its devices or a device's locker spec last changed (ms), as the plan tab and the packing list
    * read it (a removed device bumps the trip's own time).
    */
   private async changedAt(tripId: string): Promise<number> {
     const [trip] = await this.db.select({ at: trips.updatedAt }).from(trips).where(eq(trips.id, tripId));
     const [devices] = await this.db
-      .select({ at: max(tripDevices.updatedAt), itemAt: max(lockerItems.updatedAt) })
+      .select({ at: max(tripDevices.updatedAt), itemAt: max(lockerItems.specChangedAt) })
       .from(tripDevices)
       .innerJoin(lockerItems, eq(lockerItems.id, tripDevices.itemId))
       .where(eq(tripDevices.tripId, tripId));

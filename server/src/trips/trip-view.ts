@@ -79,9 +79,9 @@ export function toTripDeviceDetail(
           message: issue.message,
         })),
     createdAt: device.createdAt.toISOString(),
-    // The device's part of the trip changed when its override or carrier did, or when its locker item (battery, charge
-    // power, default use) was edited: either may turn a chosen kit's verdict stale.
-    updatedAt: new Date(Math.max(device.updatedAt.getTime(), item.updatedAt.getTime())).toISOString(),
+    // The device's part of the trip changed when its override or carrier did, or when its locker item's spec (battery,
+    // charge power, default use) was edited: either may turn a chosen kit's verdict stale.
+    updatedAt: new Date(Math.max(device.updatedAt.getTime(), item.specChangedAt.getTime())).toISOString(),
   };
 }
 

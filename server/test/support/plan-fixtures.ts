@@ -290,6 +290,7 @@ export async function insertLockerItems(
         massG: Math.round(item.spec.massG ?? 0),
         createdAt: fixtureWrittenAt,
         updatedAt: fixtureWrittenAt,
+        specChangedAt: fixtureWrittenAt,
       })
       .returning();
     if (!row) throw new Error('insert returned no row');

@@ -79,6 +79,7 @@ export async function insertLockerItem(
       massG: Math.round(spec.massG ?? 0),
       createdAt: fixtureWrittenAt,
       updatedAt: fixtureWrittenAt,
+      specChangedAt: fixtureWrittenAt,
     })
     .returning();
   if (!row) throw new Error('insert returned no row');

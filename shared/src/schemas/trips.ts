@@ -197,7 +197,7 @@ export const tripDeviceDetailSchema = z.object({
   overriddenFields: z.array(z.string()),
   overrideIssues: z.array(apiFieldErrorSchema),
   createdAt: z.iso.datetime(),
-  /** When the device's part of the trip last changed: its override or carrier, or its locker item's spec. */
+  /** When the device's part of the trip last changed: its override or carrier, or its locker item's spec (not its name or notes). */
   updatedAt: z.iso.datetime(),
 });
 export type TripDeviceDetail = z.infer<typeof tripDeviceDetailSchema>;

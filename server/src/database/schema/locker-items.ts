@@ -1,5 +1,5 @@
 import type { ItemSpec } from '@gramwatt/shared';
-import { index, integer, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { timestamps } from './_helpers';
 import { accounts } from './accounts';
 
@@ -24,6 +24,11 @@ export const lockerItems = pgTable(
     /** Grams of one item, copied from `spec.massG`. */
     massG: integer('mass_g').notNull().default(0),
     ...timestamps,
+    /**
+     * When `spec` last changed (set on insert, and on an update only when the spec differs): a device's spec feeds the
+     * verdict of every trip it comes on, its name and notes do not.
+     */
+    specChangedAt: timestamp('spec_changed_at', { withTimezone: true, mode: 'date' }).notNull().defaultNow(),
   },
   (t) => [
     index('locker_items_owner_kind_idx').on(t.ownerId, t.kind),

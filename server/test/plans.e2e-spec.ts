@@ -306,6 +306,22 @@ describe('plans', () => {
     const takeOff = () =>
       t.http().delete(`/api/trips/${route.trip.id}/devices/${deviceId}`).set(leader.auth).expect(204);
     expect(await staleAfter(takeOff)).toBe(true);
+    // The kit's own gear edited in the locker (a bank or panel that is not a device): stale, and `GET kit` says when.
+    const gearId = swap.kit.lines[0]?.itemId as string;
+    const editGear = async () => {
+      const item = (await t.http().get(`/api/locker/items/${gearId}`).set(leader.auth).expect(200)).body.item;
+      const { name, notes, countOwned } = item;
+      const spec = { ...item.spec, massG: item.spec.massG + 1 };
+      await t
+        .http()
+        .put(`/api/locker/items/${gearId}`)
+        .set(leader.auth)
+        .send({ name, notes, countOwned, spec })
+        .expect(200);
+    };
+    expect(await staleAfter(editGear)).toBe(true);
+    const afterGear = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
+    expect(afterGear.body.kit.gearChangedAt).toBe(t.clock.now().toISOString());
     const kitRead = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });

@@ -233,7 +233,7 @@ describe('share link with the plans feature present', () => {
       const { plan, mailText } = await sendHome('Ash Elder', 'Rowan Elder');
       expect(plan).toMatchObject({ earlierPlanner: true, tripChanged: true });
       expect(mailText).toContain('An earlier version of the planner judged this kit');
-      expect(mailText).toContain('The trip changed after this kit was chosen');
+      expect(mailText).toContain('The trip or its gear changed after this kit was chosen');
     } finally {
       summary.earlierPlanner = false;
       summary.tripChanged = false;

@@ -1,9 +1,9 @@
 import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import { type ChooseKitRequest, type ChosenKit, PlanningInputError, planModelVersion } from '@gramwatt/shared';
-import { eq } from 'drizzle-orm';
+import { eq, inArray, max } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type TripMemberRow, tripKits } from '../database/schema';
+import { type TripMemberRow, lockerItems, tripKits } from '../database/schema';
 import { assertKitSelection } from './kit-selection';
 import { PlanSolver } from './plan-solver';
 import { optimumAsChosenKit, toChosenKit, withDeviceNames } from './plan-view';
@@ -64,14 +64,26 @@ export class ChosenKitService {
       .onConflictDoUpdate({ target: tripKits.tripId, set: values })
       .returning();
     if (!row) throw new Error('upsert returned no row');
-    return toChosenKit(row);
+    return this.withGearChangedAt(toChosenKit(row));
   }
 
   /** The kit the leader chose, else the latest plan's optimum, else null. */
   async current(tripId: string): Promise<ChosenKit | null> {
     const [row] = await this.db.select().from(tripKits).where(eq(tripKits.tripId, tripId));
-    if (row) return toChosenKit(row);
+    if (row) return this.withGearChangedAt(toChosenKit(row));
     const latest = await this.plans.latest(tripId);
-    return latest ? optimumAsChosenKit(latest) : null;
+    const optimum = latest ? optimumAsChosenKit(latest) : null;
+    return optimum ? this.withGearChangedAt(optimum) : null;
+  }
+
+  /** The kit with the latest locker spec change of its gear (a bank's capacity edited after the choice, say). */
+  private async withGearChangedAt(chosen: ChosenKit): Promise<ChosenKit> {
+    const itemIds = chosen.kit.lines.map((line) => line.itemId);
+    if (itemIds.length === 0) return chosen;
+    const [latest] = await this.db
+      .select({ at: max(lockerItems.specChangedAt) })
+      .from(lockerItems)
+      .where(inArray(lockerItems.id, itemIds));
+    return { ...chosen, gearChangedAt: latest?.at ? latest.at.toISOString() : null };
   }
 }

@@ -35,6 +35,7 @@ export function toChosenKit(row: TripKitRow): ChosenKit {
     updatedAt: row.chosenAt.toISOString(),
     evaluation: row.evaluation,
     modelVersion: row.modelVersion,
+    gearChangedAt: null,
   };
 }
 
@@ -49,6 +50,7 @@ export function optimumAsChosenKit(row: TripPlanRow): ChosenKit | null {
     updatedAt: row.createdAt.toISOString(),
     evaluation,
     modelVersion: row.modelVersion,
+    gearChangedAt: null,
   };
 }
 

@@ -45,7 +45,9 @@ export class TripPlanSummaryFromChosenKit implements TripPlanSummarySource {
       carriers,
       cautions: chosen.evaluation.cautions.map((caution) => caution.text),
       earlierPlanner: chosen.modelVersion !== planModelVersion,
-      tripChanged: (await this.changedAt(tripId)) > Date.parse(chosen.updatedAt),
+      tripChanged:
+        Math.max(await this.changedAt(tripId), chosen.gearChangedAt ? Date.parse(chosen.gearChangedAt) : 0) >
+        Date.parse(chosen.updatedAt),
     };
   }
 

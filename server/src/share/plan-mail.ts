@@ -48,7 +48,7 @@ export function planMail({ trip, leaderName, link, note }: PlanMailInput): Rende
     if (trip.plan.tripChanged)
       blocks.push({
         type: 'paragraph',
-        text: 'The trip changed after this kit was chosen: the verdict is for the devices and use it had then. Ask the leader to choose the kit again.',
+        text: 'The trip or its gear changed after this kit was chosen: the verdict is for the devices, use and gear it had then. Ask the leader to choose the kit again.',
       });
     if (trip.plan.earlierPlanner)
       blocks.push({

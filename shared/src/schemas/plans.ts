@@ -312,6 +312,11 @@ export const chosenKitSchema = z.object({
    * before versions were kept): an earlier one may judge the kit differently.
    */
   modelVersion: z.string().nullable(),
+  /**
+   * When the locker spec of the kit's gear last changed (the latest over its items; null when none is in a locker any
+   * more, or for a kit not read from the server): after `updatedAt`, the verdict is for gear as it was.
+   */
+  gearChangedAt: z.string().nullable().default(null),
 });
 export type ChosenKit = z.infer<typeof chosenKitSchema>;
 

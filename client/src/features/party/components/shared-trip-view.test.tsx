@@ -67,7 +67,7 @@ describe('the shared trip page', () => {
   });
 
   it.each([
-    { flag: 'tripChanged', title: 'The trip changed after this kit was chosen' },
+    { flag: 'tripChanged', title: 'The trip or its gear changed after this kit was chosen' },
     { flag: 'earlierPlanner', title: 'An earlier version of the planner judged this kit' },
   ] as const)('says "$title" when the summary says so, and only that', async ({ flag, title }) => {
     const plan = sharedTrip.plan && { ...sharedTrip.plan, [flag]: true };

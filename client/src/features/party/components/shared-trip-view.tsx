@@ -47,8 +47,8 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
 const staleNotes = [
   {
     when: 'tripChanged',
-    title: 'The trip changed after this kit was chosen',
-    text: 'Its verdict is for the devices and use the trip had then.',
+    title: 'The trip or its gear changed after this kit was chosen',
+    text: 'Its verdict is for the devices, use and gear the trip had then.',
   },
   {
     when: 'earlierPlanner',

@@ -68,7 +68,7 @@ describe('PackingListTab', () => {
     renderPackingList();
     expect(await screen.findByRole('heading', { name: 'Packing list: Test high route' })).toBeInTheDocument();
     expect(screen.queryByText(/earlier version of the planner/)).toBeNull();
-    expect(screen.queryByText('The trip changed after this kit was chosen')).toBeNull();
+    expect(screen.queryByText('The trip or its gear changed after this kit was chosen')).toBeNull();
   });
 
   it('says when the trip changed after the kit was chosen', async () => {
@@ -79,8 +79,14 @@ describe('PackingListTab', () => {
     };
     installPlanApi({ trip: changed, chosen: buildChosenKit() });
     renderPackingList();
-    expect(await screen.findByText('The trip changed after this kit was chosen')).toBeInTheDocument();
-    expect(screen.getByText(/for the devices and use the trip had then/)).toBeInTheDocument();
+    expect(await screen.findByText('The trip or its gear changed after this kit was chosen')).toBeInTheDocument();
+    expect(screen.getByText(/for the devices, use and gear the trip had then/)).toBeInTheDocument();
+  });
+
+  it("says when the kit's gear was edited in the locker after the kit was chosen", async () => {
+    installPlanApi({ chosen: buildChosenKit(optimumLines(), { gearChangedAt: '2027-02-21T09:00:00.000Z' }) });
+    renderPackingList();
+    expect(await screen.findByText('The trip or its gear changed after this kit was chosen')).toBeInTheDocument();
   });
 
   it('prints from the Print button', async () => {

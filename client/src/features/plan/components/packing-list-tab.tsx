@@ -26,7 +26,10 @@ export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
       </EmptyState>
     );
 
-  const isOutdated = changedAt !== undefined && Date.parse(changedAt) > Date.parse(chosen.data.updatedAt);
+  // The trip (its fields, devices and their locker specs) or the kit's own gear changed after the choice.
+  const gearChangedMs = chosen.data.gearChangedAt ? Date.parse(chosen.data.gearChangedAt) : 0;
+  const isOutdated =
+    changedAt !== undefined && Math.max(Date.parse(changedAt), gearChangedMs) > Date.parse(chosen.data.updatedAt);
   const again = canChooseKit
     ? 'Choose the kit again (on the Plan or the Try a kit tab) to have it judged afresh.'
     : 'The leader or a partner can choose it again to have it judged afresh.';
@@ -48,8 +51,8 @@ export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
         </Button>
       </div>
       {isOutdated && (
-        <Alert tone="caution" title="The trip changed after this kit was chosen">
-          Its verdict and schedule are for the devices and use the trip had then. {again}
+        <Alert tone="caution" title="The trip or its gear changed after this kit was chosen">
+          Its verdict and schedule are for the devices, use and gear the trip had then. {again}
         </Alert>
       )}
       {chosen.data.modelVersion !== planModelVersion && (

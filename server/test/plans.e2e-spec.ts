@@ -326,6 +326,28 @@ describe('plans', () => {
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });
 
+  it("deleting gear in a chosen kit from the locker marks the trip as changed; other gear's deletion does not", async () => {
+    const other = await signedInHiker(t);
+    const own = await highRoute(t, other);
+    const [inKit, notInKit] = own.gear;
+    if (!inKit || !notInKit) throw new Error('the high route has gear');
+    await t
+      .http()
+      .put(`/api/trips/${own.trip.id}/kit`)
+      .set(other.auth)
+      .send({ kit: [{ itemId: inKit.id, count: 1 }], source: 'hand' })
+      .expect(200);
+    const tripTime = async () =>
+      (await t.http().get(`/api/trips/${own.trip.id}`).set(other.auth).expect(200)).body.trip.updatedAt;
+    const before = await tripTime();
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${notInKit.id}`).set(other.auth).expect(204);
+    expect(await tripTime()).toBe(before);
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${inKit.id}`).set(other.auth).expect(204);
+    expect(await tripTime()).toBe(t.clock.now().toISOString());
+  });
+
   it('answers 422 for a trip with no devices', async () => {
     const empty = await createTrip(t, leader);
     const res = await t.http().post(`/api/trips/${empty.id}/plans`).set(leader.auth).send({}).expect(422);

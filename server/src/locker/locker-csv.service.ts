@@ -6,10 +6,10 @@ import {
   readLockerCsv,
   writeLockerCsv,
 } from '@gramwatt/shared';
-import { eq, inArray } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { lockerItems, tripDevices } from '../database/schema';
+import { lockerItems } from '../database/schema';
 import { markTripsOfItemsChanged } from '../trips/trips-changed';
 import { LockerService, lockerItemValues } from './locker.service';
 
@@ -56,9 +56,9 @@ export class LockerCsvService {
     const values = read.rows.map(({ item }) => lockerItemValues(ownerId, item, now));
     await this.db.transaction(async (tx) => {
       if (mode === 'replace') {
-        // The devices among the replaced items leave their trips by cascade: those trips count as changed.
+        // The replaced items leave their trips (devices, by cascade) and chosen kits: those trips count as changed.
         const owned = tx.select({ id: lockerItems.id }).from(lockerItems).where(eq(lockerItems.ownerId, ownerId));
-        await markTripsOfItemsChanged(tx, inArray(tripDevices.itemId, owned), now);
+        await markTripsOfItemsChanged(tx, owned.$dynamic(), now);
         await tx.delete(lockerItems).where(eq(lockerItems.ownerId, ownerId));
       }
       for (let i = 0; i < values.length; i += insertChunkRows) {

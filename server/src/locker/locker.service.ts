@@ -8,10 +8,10 @@ import {
   lockerItemKinds,
   lockerItemMassG,
 } from '@gramwatt/shared';
-import { type SQL, and, asc, desc, eq, ilike, inArray, sql } from 'drizzle-orm';
+import { type SQL, and, asc, desc, eq, ilike, sql } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type LockerItemRow, type NewLockerItemRow, lockerItems, tripDevices } from '../database/schema';
+import { type LockerItemRow, type NewLockerItemRow, lockerItems } from '../database/schema';
 import { markTripsOfItemsChanged } from '../trips/trips-changed';
 import { listFilesByItem } from '../locker-files/files-by-item';
 
@@ -150,9 +150,9 @@ export class LockerService {
         .select({ id: lockerItems.id })
         .from(lockerItems)
         .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)));
-      // A device deleted from the locker leaves its trips by cascade: they count as changed (marked first, while the
-      // cascade has not yet removed the rows that tell which trips; a 404 below rolls it back).
-      await markTripsOfItemsChanged(tx, inArray(tripDevices.itemId, owned), this.clock.now());
+      // A device deleted from the locker leaves its trips by cascade, and gear leaves the kits chosen with it: those trips
+      // count as changed (marked first, while the rows still tell which trips; a 404 below rolls it back).
+      await markTripsOfItemsChanged(tx, owned.$dynamic(), this.clock.now());
       const deleted = await tx
         .delete(lockerItems)
         .where(and(eq(lockerItems.id, id), eq(lockerItems.ownerId, ownerId)))

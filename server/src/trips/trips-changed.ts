@@ -1,15 +1,25 @@
-import { type SQL, inArray } from 'drizzle-orm';
+import { type SQL, inArray, or, sql } from 'drizzle-orm';
+import type { PgSelect } from 'drizzle-orm/pg-core';
 import type { Database } from '../database/database.types';
-import { tripDevices, trips } from '../database/schema';
+import { tripDevices, tripKits, trips } from '../database/schema';
 
 /** A database or an open transaction on it (both take the same query builder calls). */
 type Queryable = Pick<Database, 'select' | 'update'>;
 
 /**
- * Marks as changed (`updatedAt` = now) every trip with a device whose locker item matches `items` — called before those
- * items are deleted, which takes the devices off their trips by cascade, so a kit chosen with them shows as stale.
+ * Marks as changed (`updatedAt` = now) every trip that a deletion of the locker items `itemIds` (a subquery of one
+ * `id` column) touches: a trip with one of them as a device (the cascade takes it off the trip) or in its chosen kit
+ * (the kit then lists gear the member no longer has). Called before the delete, while the rows still tell which trips.
  */
-export async function markTripsOfItemsChanged(db: Queryable, items: SQL, now: Date): Promise<void> {
-  const affected = db.select({ id: tripDevices.tripId }).from(tripDevices).where(items);
-  await db.update(trips).set({ updatedAt: now }).where(inArray(trips.id, affected));
+export async function markTripsOfItemsChanged(db: Queryable, itemIds: PgSelect, now: Date): Promise<void> {
+  const withDevice = db
+    .select({ id: tripDevices.tripId })
+    .from(tripDevices)
+    .where(inArray(tripDevices.itemId, itemIds));
+  const inChosenKit: SQL = sql`exists (select 1 from jsonb_array_elements(${tripKits.lines}) as line where (line->>'itemId')::uuid in (${itemIds}))`;
+  const withKit = db.select({ id: tripKits.tripId }).from(tripKits).where(inChosenKit);
+  await db
+    .update(trips)
+    .set({ updatedAt: now })
+    .where(or(inArray(trips.id, withDevice), inArray(trips.id, withKit)));
 }

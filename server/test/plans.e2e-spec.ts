@@ -23,6 +23,7 @@ import { type TestApp, startTestApp } from './support/test-app';
 import {
   type Hiker,
   createTrip,
+  editLockerSpec,
   errorPaths,
   insertLockerItem,
   signedInHiker,
@@ -291,34 +292,15 @@ describe('plans', () => {
       return (await t.http().get(`/api${share.body.share.path}`).expect(200)).body.trip.plan.tripChanged;
     };
     const device = (tripRead.body.trip ?? tripRead.body).devices[0];
-    const editInLocker = async () => {
-      const item = (await t.http().get(`/api/locker/items/${device.itemId}`).set(leader.auth).expect(200)).body.item;
-      const { name, notes, countOwned } = item;
-      const spec = { ...item.spec, ownBatteryWh: item.spec.ownBatteryWh + 1 };
-      await t
-        .http()
-        .put(`/api/locker/items/${item.id}`)
-        .set(leader.auth)
-        .send({ name, notes, countOwned, spec })
-        .expect(200);
-    };
+    const editInLocker = () =>
+      editLockerSpec(t, leader, device.itemId, (spec) => ({ ...spec, ownBatteryWh: (spec.ownBatteryWh ?? 0) + 1 }));
     expect(await staleAfter(editInLocker)).toBe(true);
     const takeOff = () =>
       t.http().delete(`/api/trips/${route.trip.id}/devices/${deviceId}`).set(leader.auth).expect(204);
     expect(await staleAfter(takeOff)).toBe(true);
     // The kit's own gear edited in the locker (a bank or panel that is not a device): stale, and `GET kit` says when.
     const gearId = swap.kit.lines[0]?.itemId as string;
-    const editGear = async () => {
-      const item = (await t.http().get(`/api/locker/items/${gearId}`).set(leader.auth).expect(200)).body.item;
-      const { name, notes, countOwned } = item;
-      const spec = { ...item.spec, massG: item.spec.massG + 1 };
-      await t
-        .http()
-        .put(`/api/locker/items/${gearId}`)
-        .set(leader.auth)
-        .send({ name, notes, countOwned, spec })
-        .expect(200);
-    };
+    const editGear = () => editLockerSpec(t, leader, gearId, (spec) => ({ ...spec, massG: (spec.massG ?? 0) + 1 }));
     expect(await staleAfter(editGear)).toBe(true);
     const afterGear = await t.http().get(`/api/trips/${route.trip.id}/kit`).set(leader.auth).expect(200);
     expect(afterGear.body.kit.gearChangedAt).toBe(t.clock.now().toISOString());

@@ -5,6 +5,7 @@ import { type TestApp, startTestApp } from './support/test-app';
 import {
   type Hiker,
   createTrip,
+  editLockerSpec,
   errorPaths,
   insertLockerItem,
   signedInHiker,
@@ -26,16 +27,7 @@ describe('trip devices and use-profile overrides', () => {
   });
 
   /** Changes a locker item's spec through the locker API, as the member would. */
-  async function putLockerSpec(hiker: Hiker, itemId: string, spec: object) {
-    const current = await t.http().get(`/api/locker/items/${itemId}`).set(hiker.auth).expect(200);
-    const { name, notes, countOwned } = current.body.item;
-    await t
-      .http()
-      .put(`/api/locker/items/${itemId}`)
-      .set(hiker.auth)
-      .send({ name, notes, countOwned, spec })
-      .expect(200);
-  }
+  const putLockerSpec = (hiker: Hiker, itemId: string, spec: object) => editLockerSpec(t, hiker, itemId, () => spec);
 
   it('adds locker devices with and without an override; the effective profile falls back field by field', async () => {
     const trip = await createTrip(t, fern);

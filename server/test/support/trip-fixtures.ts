@@ -127,3 +127,20 @@ export async function createTrip(t: TestApp, hiker: Hiker, overrides: Record<str
 export function errorPaths(response: request.Response): string[] {
   return (response.body.errors as { path: string }[]).map((error) => error.path).sort();
 }
+
+/** Changes a locker item's spec through the locker API, as the member would (name, notes and count kept). */
+export async function editLockerSpec(
+  t: TestApp,
+  hiker: Hiker,
+  itemId: string,
+  change: (spec: Record<string, number>) => object,
+): Promise<void> {
+  const current = await t.http().get(`/api/locker/items/${itemId}`).set(hiker.auth).expect(200);
+  const { name, notes, countOwned, spec } = current.body.item;
+  await t
+    .http()
+    .put(`/api/locker/items/${itemId}`)
+    .set(hiker.auth)
+    .send({ name, notes, countOwned, spec: change(spec) })
+    .expect(200);
+}

@@ -103,7 +103,7 @@ describe.skipIf(browserMissing)('the plan in the built app', () => {
       await transmit.fill(String(minutes + 10));
       await radio.getByRole('button', { name: 'Save for this trip' }).click();
       await radio.getByText('Saved for this trip.').waitFor();
-      await page.getByText('The trip changed after this plan was made').waitFor();
+      await page.getByText('The trip or its gear changed after this plan was made').waitFor();
       const second = await solve(page);
       console.info(`second solve → verdict on screen: ${second.elapsedMs} ms`);
       console.info(

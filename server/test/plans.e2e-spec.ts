@@ -25,6 +25,7 @@ import {
   createTrip,
   editLockerSpec,
   errorPaths,
+  fixtureWrittenAt,
   insertLockerItem,
   signedInHiker,
   testPhoneSpec,
@@ -308,7 +309,7 @@ describe('plans', () => {
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });
 
-  it("deleting gear in a chosen kit from the locker marks the trip as changed; other gear's deletion does not", async () => {
+  it("a plan's gear edited in the locker shows on the plan; deleting gear in a chosen kit marks the trip as changed, other gear's deletion does not", async () => {
     const other = await signedInHiker(t);
     const own = await highRoute(t, other);
     const [inKit, notInKit] = own.gear;
@@ -319,6 +320,15 @@ describe('plans', () => {
       .set(other.auth)
       .send({ kit: [{ itemId: inKit.id, count: 1 }], source: 'hand' })
       .expect(200);
+    // A plan says when the gear it weighed last had its locker spec changed (the plan tab's caution reads it).
+    const solved = await t.http().post(`/api/trips/${own.trip.id}/plans`).set(other.auth).send({}).expect(201);
+    expect(solved.body.plan.gearChangedAt).toBe(fixtureWrittenAt.toISOString());
+    t.clock.advanceS(60);
+    await editLockerSpec(t, other, notInKit.id, (spec) => ({ ...spec, massG: (spec.massG ?? 0) + 1 }));
+    const planUrl = `/api/trips/${own.trip.id}/plans/${solved.body.plan.id}`;
+    const read = await t.http().get(planUrl).set(other.auth).expect(200);
+    expect(read.body.plan.gearChangedAt).toBe(t.clock.now().toISOString());
+
     const tripTime = async () =>
       (await t.http().get(`/api/trips/${own.trip.id}`).set(other.auth).expect(200)).body.trip.updatedAt;
     const before = await tripTime();

@@ -5,8 +5,8 @@ import type { TripKitRow, TripPlanRow } from '../database/schema';
 export type TripPlanSummaryRow = Omit<TripPlanRow, 'input' | 'result'>;
 
 /** A stored plan as the API shows it (the input snapshot stays on the server). */
-export function toPlanRecord(row: TripPlanRow): PlanRecord {
-  return { ...recordFields(row), result: row.result };
+export function toPlanRecord(row: TripPlanRow, gearChangedAt: Date | null): PlanRecord {
+  return { ...recordFields(row), result: row.result, gearChangedAt: gearChangedAt?.toISOString() ?? null };
 }
 
 /** A line of the plan list. */

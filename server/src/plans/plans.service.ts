@@ -7,11 +7,11 @@ import {
   type PlanSummary,
   PlanningInputError,
 } from '@gramwatt/shared';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, inArray, max } from 'drizzle-orm';
 import { z } from 'zod';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type TripMemberRow, type TripPlanRow, tripPlans } from '../database/schema';
+import { type TripMemberRow, type TripPlanRow, lockerItems, tripPlans } from '../database/schema';
 import { assertKitSelection } from './kit-selection';
 import { PlanSolver } from './plan-solver';
 import { toPlanRecord, toPlanSummary, withDeviceNames } from './plan-view';
@@ -60,7 +60,7 @@ export class PlansService {
       })
       .returning();
     if (!row) throw new Error('insert returned no row');
-    return toPlanRecord(row);
+    return this.record(row);
   }
 
   /** The trip's plans, newest first, without their answers. */
@@ -85,7 +85,18 @@ export class PlansService {
 
   /** One plan of the trip. @throws NotFoundException (404) for another trip's plan or an unknown id. */
   async get(tripId: string, planId: string): Promise<PlanRecord> {
-    return toPlanRecord(await this.row(tripId, planId));
+    return this.record(await this.row(tripId, planId));
+  }
+
+  /** The plan as the API gives it, with the latest locker spec change of the gear it weighed. */
+  private async record(row: TripPlanRow): Promise<PlanRecord> {
+    const itemIds = row.input.gear.map((g) => g.itemId);
+    if (itemIds.length === 0) return toPlanRecord(row, null);
+    const [latest] = await this.db
+      .select({ at: max(lockerItems.specChangedAt) })
+      .from(lockerItems)
+      .where(inArray(lockerItems.id, itemIds));
+    return toPlanRecord(row, latest?.at ?? null);
   }
 
   /** The stored plan row of this trip. @throws NotFoundException (404) otherwise. */

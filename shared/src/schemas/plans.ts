@@ -289,11 +289,16 @@ export const planRecordSchema = z.object({
   modelVersion: z.string(),
   durationMs: z.number(),
   result: planResultSchema,
+  /**
+   * When the locker spec of the gear the plan weighed last changed (the latest over its input's items; null when none
+   * is in a locker any more): after `createdAt`, the plan's figures are for gear as it was.
+   */
+  gearChangedAt: z.string().nullable().default(null),
 });
 export type PlanRecord = z.infer<typeof planRecordSchema>;
 
 /** A plan in a list (no heavy fields). */
-export const planSummarySchema = planRecordSchema.omit({ result: true }).extend({
+export const planSummarySchema = planRecordSchema.omit({ result: true, gearChangedAt: true }).extend({
   status: z.enum(planStatuses),
   headline: z.string(),
   massG: z.number().nullable(),

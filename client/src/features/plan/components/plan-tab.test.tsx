@@ -42,7 +42,7 @@ describe('PlanTab', () => {
     expect(within(strip).getAllByRole('listitem')).toHaveLength(6);
     expect(within(strip).getByText(/^Day 3, Fri 12 Mar: 69 % stored at the day's end \(103 Wh\)$/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Find the lightest kit again' })).toBeEnabled();
-    expect(screen.queryByText('The trip changed after this plan was made')).toBeNull();
+    expect(screen.queryByText('The trip or its gear changed after this plan was made')).toBeNull();
     expect(screen.queryByText('An earlier version of the planner made this plan')).toBeNull();
   });
 
@@ -79,7 +79,13 @@ describe('PlanTab', () => {
     };
     installPlanApi({ trip: changed, plans: [plan] });
     renderPlanTab();
-    expect(await screen.findByText('The trip changed after this plan was made')).toBeInTheDocument();
+    expect(await screen.findByText('The trip or its gear changed after this plan was made')).toBeInTheDocument();
+  });
+
+  it('says when the gear the plan weighed was edited in the locker after the plan was made', async () => {
+    installPlanApi({ plans: [buildPlanRecord(buildPlanResult(), { gearChangedAt: '2027-02-21T09:00:00.000Z' })] });
+    renderPlanTab();
+    expect(await screen.findByText('The trip or its gear changed after this plan was made')).toBeInTheDocument();
   });
 
   it('says when an earlier version of the planner made the plan, and not for the current one', async () => {

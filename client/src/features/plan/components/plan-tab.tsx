@@ -18,8 +18,12 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const latestId = plans.data?.[0]?.id;
   const plan = usePlan(tripId, latestId);
   const changedAt = useTripChangedAt(tripId).data;
+  // The trip (its fields, devices and their locker specs) or the gear the plan weighed changed after the plan.
+  const gearChangedMs = plan.data?.gearChangedAt ? Date.parse(plan.data.gearChangedAt) : 0;
   const isOutdated =
-    plan.data !== undefined && changedAt !== undefined && Date.parse(changedAt) > Date.parse(plan.data.createdAt);
+    plan.data !== undefined &&
+    changedAt !== undefined &&
+    Math.max(Date.parse(changedAt), gearChangedMs) > Date.parse(plan.data.createdAt);
   const isEarlierPlanner = plan.data !== undefined && plan.data.modelVersion !== planModelVersion;
 
   const solve = canSolve && (
@@ -54,8 +58,8 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   return (
     <div className="flex flex-col gap-6">
       {isOutdated && (
-        <Alert tone="caution" title="The trip changed after this plan was made">
-          Its devices or their use are not what the planner weighed.{' '}
+        <Alert tone="caution" title="The trip or its gear changed after this plan was made">
+          Its devices, their use or the gear are not what the planner weighed.{' '}
           {canSolve
             ? 'Find the lightest kit again for the trip as it is now.'
             : 'The leader or a partner can solve it again.'}

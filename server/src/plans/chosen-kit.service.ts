@@ -1,9 +1,10 @@
 import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import { type ChooseKitRequest, type ChosenKit, PlanningInputError, planModelVersion } from '@gramwatt/shared';
-import { eq, inArray, max } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type TripMemberRow, lockerItems, tripKits } from '../database/schema';
+import { type TripMemberRow, tripKits } from '../database/schema';
+import { gearSpecChangedAt } from './gear-spec-changed';
 import { assertKitSelection } from './kit-selection';
 import { PlanSolver } from './plan-solver';
 import { optimumAsChosenKit, toChosenKit, withDeviceNames } from './plan-view';
@@ -78,12 +79,10 @@ export class ChosenKitService {
 
   /** The kit with the latest locker spec change of its gear (a bank's capacity edited after the choice, say). */
   private async withGearChangedAt(chosen: ChosenKit): Promise<ChosenKit> {
-    const itemIds = chosen.kit.lines.map((line) => line.itemId);
-    if (itemIds.length === 0) return chosen;
-    const [latest] = await this.db
-      .select({ at: max(lockerItems.specChangedAt) })
-      .from(lockerItems)
-      .where(inArray(lockerItems.id, itemIds));
-    return { ...chosen, gearChangedAt: latest?.at ? latest.at.toISOString() : null };
+    const at = await gearSpecChangedAt(
+      this.db,
+      chosen.kit.lines.map((line) => line.itemId),
+    );
+    return { ...chosen, gearChangedAt: at?.toISOString() ?? null };
   }
 }

@@ -7,11 +7,12 @@ import {
   type PlanSummary,
   PlanningInputError,
 } from '@gramwatt/shared';
-import { and, desc, eq, inArray, max } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { CLOCK, type Clock } from '../common/clock';
 import { DRIZZLE, type Database } from '../database/database.types';
-import { type TripMemberRow, type TripPlanRow, lockerItems, tripPlans } from '../database/schema';
+import { type TripMemberRow, type TripPlanRow, tripPlans } from '../database/schema';
+import { gearSpecChangedAt } from './gear-spec-changed';
 import { assertKitSelection } from './kit-selection';
 import { PlanSolver } from './plan-solver';
 import { toPlanRecord, toPlanSummary, withDeviceNames } from './plan-view';
@@ -90,13 +91,13 @@ export class PlansService {
 
   /** The plan as the API gives it, with the latest locker spec change of the gear it weighed. */
   private async record(row: TripPlanRow): Promise<PlanRecord> {
-    const itemIds = row.input.gear.map((g) => g.itemId);
-    if (itemIds.length === 0) return toPlanRecord(row, null);
-    const [latest] = await this.db
-      .select({ at: max(lockerItems.specChangedAt) })
-      .from(lockerItems)
-      .where(inArray(lockerItems.id, itemIds));
-    return toPlanRecord(row, latest?.at ?? null);
+    return toPlanRecord(
+      row,
+      await gearSpecChangedAt(
+        this.db,
+        row.input.gear.map((g) => g.itemId),
+      ),
+    );
   }
 
   /** The stored plan row of this trip. @throws NotFoundException (404) otherwise. */

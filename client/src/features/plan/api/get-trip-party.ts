@@ -34,3 +34,15 @@ export const useTripChangedAt = (tripId: string) =>
         Date.parse(at) > Date.parse(latest) ? at : latest,
       ),
   });
+
+/**
+ * Whether a plan or a chosen kit made at `madeAt` is out of date: the trip (its fields, devices and their locker
+ * specs; `tripChangedAt`, undefined while it loads) or the gear it weighed (`gearChangedAt`) changed after it.
+ */
+export const changedAfter = (
+  madeAt: string,
+  tripChangedAt: string | undefined,
+  gearChangedAt: string | null,
+): boolean =>
+  tripChangedAt !== undefined &&
+  Math.max(Date.parse(tripChangedAt), gearChangedAt ? Date.parse(gearChangedAt) : 0) > Date.parse(madeAt);

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { formatDate } from '@/lib/format';
 import { useChosenKit } from '../api/get-chosen-kit';
-import { useTripChangedAt, useTripParty } from '../api/get-trip-party';
+import { changedAfter, useTripChangedAt, useTripParty } from '../api/get-trip-party';
 import type { PlanTabProps } from '../types';
 import { PackingList } from './packing-list';
 import './packing-list-print.css';
@@ -26,10 +26,7 @@ export function PackingListTab({ tripId, canChooseKit }: PlanTabProps) {
       </EmptyState>
     );
 
-  // The trip (its fields, devices and their locker specs) or the kit's own gear changed after the choice.
-  const gearChangedMs = chosen.data.gearChangedAt ? Date.parse(chosen.data.gearChangedAt) : 0;
-  const isOutdated =
-    changedAt !== undefined && Math.max(Date.parse(changedAt), gearChangedMs) > Date.parse(chosen.data.updatedAt);
+  const isOutdated = changedAfter(chosen.data.updatedAt, changedAt, chosen.data.gearChangedAt);
   const again = canChooseKit
     ? 'Choose the kit again (on the Plan or the Try a kit tab) to have it judged afresh.'
     : 'The leader or a partner can choose it again to have it judged afresh.';

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { usePlan } from '../api/get-plan';
 import { usePlans } from '../api/get-plans';
-import { useTripChangedAt } from '../api/get-trip-party';
+import { changedAfter, useTripChangedAt } from '../api/get-trip-party';
 import type { PlanTabProps } from '../types';
 import { PlanView } from './plan-view';
 import { SolveAction } from './solve-action';
@@ -18,12 +18,7 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const latestId = plans.data?.[0]?.id;
   const plan = usePlan(tripId, latestId);
   const changedAt = useTripChangedAt(tripId).data;
-  // The trip (its fields, devices and their locker specs) or the gear the plan weighed changed after the plan.
-  const gearChangedMs = plan.data?.gearChangedAt ? Date.parse(plan.data.gearChangedAt) : 0;
-  const isOutdated =
-    plan.data !== undefined &&
-    changedAt !== undefined &&
-    Math.max(Date.parse(changedAt), gearChangedMs) > Date.parse(plan.data.createdAt);
+  const isOutdated = plan.data !== undefined && changedAfter(plan.data.createdAt, changedAt, plan.data.gearChangedAt);
   const isEarlierPlanner = plan.data !== undefined && plan.data.modelVersion !== planModelVersion;
 
   const solve = canSolve && (

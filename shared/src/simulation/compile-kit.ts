@@ -47,6 +47,13 @@ export interface CompiledKit {
   storeInputMaxW: Float64Array;
   storeChargeEff: Float64Array;
   storeOutputEff: Float64Array;
+  /**
+   * Per store: at the first unit of an item, how many units of it the kit has (adjacent in the order: they share every
+   * sort key but the unit); 0 at the others. The units of one item are drawn together, in proportion to what each can
+   * give, so they stay alike (they start full and take the same harvest), and how two devices share them never hangs
+   * on which unit each happened to draw first (the README's known gap (8)).
+   */
+  storeGroupSize: Int32Array;
   /** panel × store: 1 where the panel's port reaches the store's input. */
   panelReach: Uint8Array;
   /** panel × store: the leads of the hop (a 12 V panel's: into and out of its controller). */
@@ -292,6 +299,11 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
   const storeInputMaxW = Float64Array.from(storeEntries, (s) => s.inputMaxW);
   const storeChargeEff = Float64Array.from(storeEntries, (s) => s.chargeEff);
   const storeOutputEff = Float64Array.from(storeEntries, (s) => s.outputEff);
+  const storeGroupSize = new Int32Array(storeCount);
+  for (let si = 0, start = 0; si < storeCount; si++) {
+    if (storeEntries[si]?.itemId !== storeEntries[start]?.itemId) start = si;
+    storeGroupSize[start] = (storeGroupSize[start] ?? 0) + 1;
+  }
 
   const panelCount = panels.length + stationPanels.length;
   const panelReach = new Uint8Array(panelCount * storeCount);
@@ -457,6 +469,7 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     storeInputMaxW,
     storeChargeEff,
     storeOutputEff,
+    storeGroupSize,
     panelReach,
     panelReachLeads,
     panelReachController,

@@ -76,6 +76,8 @@ export interface SkyScratch {
   harvestFillSet: Uint8Array;
   /** Per store: the charge rate (W of battery gain) it gives the device being topped up, in this round of the step. */
   topUpRateW: Float64Array;
+  /** Per store: what it can give the device being topped up in the current pass (W of battery gain). */
+  topUpUnitCapW: Float64Array;
   /** Per store × device: the rate (W of battery gain) already given in this step's earlier rounds. */
   topUpGivenW: Float64Array;
   /** Per device: its target in this step (full, or its use left; 0 for a device that is not topped up), Wh. */
@@ -118,6 +120,7 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     ...harvestTiers(k),
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
+    topUpUnitCapW: new Float64Array(k.storeCount),
     topUpGivenW: new Float64Array(k.storeCount * k.deviceCount),
     topUpFullWh: new Float64Array(k.deviceCount),
     topUpPowerLeftWh: new Float64Array(k.deviceCount),
@@ -398,6 +401,7 @@ export function runSky(
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
       const givenW = scratch.topUpGivenW;
+      const unitCapW = scratch.topUpUnitCapW;
       const powerLeftWh = scratch.topUpPowerLeftWh;
       const fullWh = scratch.topUpFullWh;
       givenW.fill(0);
@@ -436,23 +440,39 @@ export function runSky(
             let powerWh = powerLeftWh[d] ?? 0;
             if (powerWh <= tiny) continue;
             rateW.fill(0);
+            // The units of one item as one: what they give together, split in proportion to what each can give.
             for (let group = 0; group < 2; group++) {
-              for (let s = 0; s < S && wantWh > tiny && powerWh > tiny; s++) {
+              for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
+                m = Math.max(1, k.storeGroupSize[s] ?? 1);
                 if ((k.storeShared[s] ?? 0) !== group) continue;
-                const x = efficientRateW(d, s, givenW[s * D + d] ?? 0, wantWh, powerWh);
-                rateW[s] = x;
+                let capW = 0;
+                for (let u = s; u < s + m; u++) {
+                  const c = efficientCapW(d, u, givenW[u * D + d] ?? 0);
+                  unitCapW[u] = c;
+                  capW += c;
+                }
+                const x = Math.min(capW, wantWh / dt, powerWh / dt);
+                if (!(x > 0)) continue;
+                for (let u = s; u < s + m; u++) rateW[u] = (x * (unitCapW[u] ?? 0)) / capW;
                 wantWh -= x * dt;
                 powerWh -= x * dt;
               }
             }
             let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
             for (let group = 0; group < 2; group++) {
-              for (let s = 0; s < S && shortWh > tiny && powerWh > tiny; s++) {
+              for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
+                m = Math.max(1, k.storeGroupSize[s] ?? 1);
                 if ((k.storeShared[s] ?? 0) !== group) continue;
-                const fromW = (givenW[s * D + d] ?? 0) + (rateW[s] ?? 0);
-                const extraW = fasterRateW(d, s, givenW[s * D + d] ?? 0, fromW, Math.min(shortWh, powerWh)) - fromW;
+                let roomW = 0;
+                for (let u = s; u < s + m; u++) {
+                  const fromW = (givenW[u * D + d] ?? 0) + (rateW[u] ?? 0);
+                  const c = Math.max(0, fastestRateW(d, u, givenW[u * D + d] ?? 0, fromW) - fromW);
+                  unitCapW[u] = c;
+                  roomW += c;
+                }
+                const extraW = Math.min(roomW, Math.min(shortWh, powerWh) / dt);
                 if (!(extraW > 0)) continue;
-                rateW[s] = (rateW[s] ?? 0) + extraW;
+                for (let u = s; u < s + m; u++) rateW[u] = (rateW[u] ?? 0) + (extraW * (unitCapW[u] ?? 0)) / roomW;
                 shortWh -= extraW * dt;
                 powerWh -= extraW * dt;
               }
@@ -488,11 +508,11 @@ export function runSky(
   return finish();
 
   /**
-   * First pass of a top-up: the further rate (W of battery gain) store s gives device d in this round along its most
-   * efficient path (the hull's first point, of which earlier rounds gave `fromW`), within `wantWh` and `powerLeftWh`
-   * (battery gain) and what it holds above its reserve.
+   * First pass of a top-up: the further rate (W of battery gain) store s can give device d in this round along its most
+   * efficient path (the hull's first point, of which earlier rounds gave `fromW`), within what it holds above its
+   * reserve.
    */
-  function efficientRateW(d: number, s: number, fromW: number, wantWh: number, powerLeftWh: number): number {
+  function efficientCapW(d: number, s: number, fromW: number): number {
     const idx = s * D + d;
     if ((k.hullCount[idx] ?? 0) === 0) return 0;
     const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -500,23 +520,23 @@ export function runSky(
     const off = k.hullOffset[idx] ?? 0;
     const g0 = k.hullGainW[off] ?? 0;
     const c0 = k.hullDrawW[off] ?? 0;
-    const x = Math.min(g0 - fromW, wantWh / dt, powerLeftWh / dt, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
+    const x = Math.min(g0 - fromW, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
     return x > 0 ? x : 0;
   }
 
   /**
-   * Second pass: the rate store s gives device d once sped up from `fromW` by at most `extraWh` of battery gain in this
-   * step, along its hull and within what it holds above its reserve (the step's draw at the new rate above what the
-   * rate `givenW` of earlier rounds already drew, never more).
+   * Second pass: the fastest rate store s can give device d once sped up from `fromW`, along its hull and within what
+   * it holds above its reserve (the step's draw at the new rate above what the rate `givenW` of earlier rounds already
+   * drew, never more).
    */
-  function fasterRateW(d: number, s: number, givenW: number, fromW: number, extraWh: number): number {
+  function fastestRateW(d: number, s: number, givenW: number, fromW: number): number {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
     if (n < 2) return fromW;
     const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
     if (avail <= tiny) return fromW;
     const off = k.hullOffset[idx] ?? 0;
-    let x = Math.min(k.hullGainW[off + n - 1] ?? 0, fromW + extraWh / dt);
+    let x = k.hullGainW[off + n - 1] ?? 0;
     // What the rate already given in this step drew is gone from the store: the step's draw above it must fit.
     const drawnW = hullDrawAt(k, off, n, givenW);
     if ((hullDrawAt(k, off, n, x) - drawnW) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt + drawnW);
@@ -580,19 +600,26 @@ export function runSky(
   /** Device d runs live from its packs for `lackWh` of use in step i; returns the Wh delivered. */
   function runLive(d: number, lackWh: number): number {
     let got = 0;
-    for (let s = 0; s < S && lackWh - got > tiny; s++) {
+    // The units of one item together, each in proportion to what it holds above its reserve.
+    for (let s = 0, m = 1; s < S && lackWh - got > tiny; s += m) {
+      m = Math.max(1, k.storeGroupSize[s] ?? 1);
       const eff = k.liveEff[s * D + d] ?? 0;
       if (!(eff > 0)) continue;
-      const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
-      if (avail <= tiny) continue;
-      const draw = Math.min(avail, (lackWh - got) / eff);
-      E[s] = (E[s] ?? 0) - draw;
-      got += draw * eff;
-      if (ledger) {
-        const row = dayIndexNow * columnCount;
-        ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw * (1 - eff);
+      let availWh = 0;
+      for (let u = s; u < s + m; u++) availWh += Math.max(0, (E[u] ?? 0) - (k.storeFloorWh[u] ?? 0));
+      if (availWh <= tiny) continue;
+      const drawWh = Math.min(availWh, (lackWh - got) / eff);
+      for (let u = s; u < s + m; u++) {
+        const draw = (drawWh * Math.max(0, (E[u] ?? 0) - (k.storeFloorWh[u] ?? 0))) / availWh;
+        if (!(draw > 0)) continue;
+        E[u] = (E[u] ?? 0) - draw;
+        if (ledger) {
+          const row = dayIndexNow * columnCount;
+          ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + draw * (1 - eff);
+        }
+        if (record?.onFlow) record.onFlow('live', stepIndex, u, d, draw * eff);
       }
-      if (record?.onFlow) record.onFlow('live', stepIndex, s, d, draw * eff);
+      got += drawWh * eff;
     }
     return got;
   }

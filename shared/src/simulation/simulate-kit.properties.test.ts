@@ -19,7 +19,7 @@ const scaledCase = [tripArb, kitArb(), devicesArb, reserveArb, share(1, 3)] as c
  * One fixed seed, as the both-path properties use: the runs (and the counts of meaningful cases) are the same on every
  * machine, and a failure reproduces. Wider soaks, many seeds and 50,000–100,000 runs each, are recorded in
  * shared/README.md, with the known gaps of the step-by-step properties ("more sun" and "more demand" per unit: (3) and
- * (8) there, a few failures per 100,000 runs). The verdict-level properties the solver's cuts rely on — adding an
+ * (8)–(9) there, a few failures per 100,000 runs). The verdict-level properties the solver's cuts rely on — adding an
  * item, more sun, more demand — have passed every soak.
  */
 const propertySeed = 20261203;

@@ -340,6 +340,28 @@ describe('plans', () => {
     expect(await tripTime()).toBe(t.clock.now().toISOString());
   });
 
+  it("with no kit chosen, deleting gear in the latest plan's optimum (the kit that stands) marks the trip as changed", async () => {
+    const other = await signedInHiker(t);
+    const own = await highRoute(t, other);
+    const solved = await t.http().post(`/api/trips/${own.trip.id}/plans`).set(other.auth).send({}).expect(201);
+    const inOptimum = new Set<string>(solved.body.plan.result.kit.lines.map((l: { itemId: string }) => l.itemId));
+    const outside = own.gear.find((g) => !inOptimum.has(g.id));
+    const inside = own.gear.find((g) => inOptimum.has(g.id));
+    if (!outside || !inside) throw new Error('the high route has gear in and outside its optimum');
+    const standing = await t.http().get(`/api/trips/${own.trip.id}/kit`).set(other.auth).expect(200);
+    expect(standing.body.kit.source).toBe('optimum');
+
+    const tripTime = async () =>
+      (await t.http().get(`/api/trips/${own.trip.id}`).set(other.auth).expect(200)).body.trip.updatedAt;
+    const before = await tripTime();
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${outside.id}`).set(other.auth).expect(204);
+    expect(await tripTime()).toBe(before);
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${inside.id}`).set(other.auth).expect(204);
+    expect(await tripTime()).toBe(t.clock.now().toISOString());
+  });
+
   it('answers 422 for a trip with no devices', async () => {
     const empty = await createTrip(t, leader);
     const res = await t.http().post(`/api/trips/${empty.id}/plans`).set(leader.auth).send({}).expect(422);

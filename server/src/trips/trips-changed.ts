@@ -1,15 +1,16 @@
 import { type SQL, inArray, or, sql } from 'drizzle-orm';
 import type { PgSelect } from 'drizzle-orm/pg-core';
 import type { Database } from '../database/database.types';
-import { tripDevices, tripKits, trips } from '../database/schema';
+import { tripDevices, tripKits, tripPlans, trips } from '../database/schema';
 
 /** A database or an open transaction on it (both take the same query builder calls). */
 type Queryable = Pick<Database, 'select' | 'update'>;
 
 /**
  * Marks as changed (`updatedAt` = now) every trip that a deletion of the locker items `itemIds` (a subquery of one
- * `id` column) touches: a trip with one of them as a device (the cascade takes it off the trip) or in its chosen kit
- * (the kit then lists gear the member no longer has). Called before the delete, while the rows still tell which trips.
+ * `id` column) touches: a trip with one of them as a device (the cascade takes it off the trip), in its chosen kit, or
+ * — when no kit was chosen — in its latest plan's optimum, which then stands as the kit (either lists gear the member no
+ * longer has). Called before the delete, while the rows still tell which trips.
  */
 export async function markTripsOfItemsChanged(db: Queryable, itemIds: PgSelect, now: Date): Promise<void> {
   const withDevice = db
@@ -18,8 +19,12 @@ export async function markTripsOfItemsChanged(db: Queryable, itemIds: PgSelect, 
     .where(inArray(tripDevices.itemId, itemIds));
   const inChosenKit: SQL = sql`exists (select 1 from jsonb_array_elements(${tripKits.lines}) as line where (line->>'itemId')::uuid in (${itemIds}))`;
   const withKit = db.select({ id: tripKits.tripId }).from(tripKits).where(inChosenKit);
+  const inStandingOptimum: SQL = sql`not exists (select 1 from ${tripKits} where ${tripKits.tripId} = ${tripPlans.tripId})
+    and ${tripPlans.createdAt} = (select max(latest.created_at) from ${tripPlans} as latest where latest.trip_id = ${tripPlans.tripId})
+    and exists (select 1 from jsonb_array_elements(${tripPlans.result}->'kit'->'lines') as line where (line->>'itemId')::uuid in (${itemIds}))`;
+  const withOptimum = db.select({ id: tripPlans.tripId }).from(tripPlans).where(inStandingOptimum);
   await db
     .update(trips)
     .set({ updatedAt: now })
-    .where(or(inArray(trips.id, withDevice), inArray(trips.id, withKit)));
+    .where(or(inArray(trips.id, withDevice), inArray(trips.id, withKit), inArray(trips.id, withOptimum)));
 }

@@ -1,5 +1,5 @@
 import { lithiumMinChargeTemperatureC } from '../constants/electrical.js';
-import { deviceChargePowerW, deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
+import { deviceDemandWhPerDay, needsChargingPath } from '../demand/device-demand.js';
 import { panelPowerSeries } from '../harvest/panel-series.js';
 import type { BankSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { BatterySpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
@@ -64,7 +64,13 @@ export interface CompiledKit {
   devices: DeviceUnit[];
   deviceCapWh: Float64Array;
   deviceDemandWhPerH: Float64Array;
-  deviceChargeInW: Float64Array;
+  /**
+   * Per device: the most battery gain it can take in a step's hour, W — the fastest path of any one store (the top of
+   * its hull). A device has one charge socket and one cable at a time: moved from store to store within a step it
+   * never charges faster than the fastest of them, where adding the stores' rates let a camera that one bank port caps
+   * at 5.3 W take 7 W from two banks at once.
+   */
+  deviceGainMaxW: Float64Array;
   deviceChargeEff: Float64Array;
   /** store × device: best path efficiency (0 = no path). */
   pathEff: Float64Array;
@@ -477,7 +483,14 @@ export function compileKit(input: KitSimulationInput): CompiledKit {
     devices: deviceUnits,
     deviceCapWh: Float64Array.from(devices, (d) => d.spec.ownBatteryWh),
     deviceDemandWhPerH: Float64Array.from(deviceUnits, (d) => d.demandWhPerDay / 24),
-    deviceChargeInW: Float64Array.from(devices, (d) => deviceChargePowerW(d.spec)),
+    deviceGainMaxW: Float64Array.from(devices, (_, di) => {
+      let fastestW = 0;
+      for (let si = 0; si < storeCount; si++) {
+        const n = hullCount[si * deviceCount + di] ?? 0;
+        if (n > 0) fastestW = Math.max(fastestW, hullGain[(hullOffset[si * deviceCount + di] ?? 0) + n - 1] ?? 0);
+      }
+      return fastestW;
+    }),
     deviceChargeEff: Float64Array.from(devices, (d) => d.spec.chargeEfficiency),
     pathEff,
     liveEff,

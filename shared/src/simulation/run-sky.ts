@@ -144,7 +144,7 @@ function leastLevelsWh(k: CompiledKit): Float64Array {
     for (let s = 0; s < S; s++) {
       if ((k.hullCount[s * D + d] ?? 0) > 0) efficientW += k.hullGainW[k.hullOffset[s * D + d] ?? 0] ?? 0;
     }
-    efficientW = Math.min(efficientW, (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1));
+    efficientW = Math.min(efficientW, k.deviceGainMaxW[d] ?? 0);
     const useW = k.deviceDemandWhPerH[d] ?? 0;
     let after = 0;
     for (let j = N - 1; j >= 0; j--) {
@@ -410,7 +410,7 @@ export function runSky(
       let fewestH = Infinity;
       let anyWants = false;
       for (let d = 0; d < D; d++) {
-        powerLeftWh[d] = (k.deviceChargeInW[d] ?? 0) * (k.deviceChargeEff[d] ?? 1) * dt;
+        powerLeftWh[d] = (k.deviceGainMaxW[d] ?? 0) * dt;
         fullWh[d] = 0;
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;

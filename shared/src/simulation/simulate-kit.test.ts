@@ -325,3 +325,44 @@ describe('the charging schedule', () => {
     }
   });
 });
+
+describe('charge rate: one socket, one cable at a time', () => {
+  // A camera that takes 15 W, on two banks whose only port gives 5 V 1 A: through either port it takes 5 W, of which
+  // 80 % reaches its battery, 4 W — and no more from both banks at once (it has one socket). Drawn from both within a
+  // step it may be, but its battery never gains more than 4 Wh in a camp hour. Hand calculation.
+  const onePort = testBank({
+    capacityMah: 20000,
+    outputPorts: [{ connector: 'usb-c', captiveCable: false, volts: 5, maxA: 1, usbPdVolts: [] }],
+  });
+  const camera: TripDevice = {
+    deviceId: 'camera',
+    spec: testPhone(1, { deviceKind: 'camera', ownBatteryWh: 60, chargePowerW: 15, chargeEfficiency: 0.8 }),
+  };
+  const lead: KitEntry = { itemId: 'lead-c-c', count: 1, spec: testLead('usb-c', 'usb-c') };
+
+  it.each([
+    ['two units of one bank', [{ itemId: 'bank', count: 2, spec: onePort }]],
+    [
+      'two bank items',
+      [
+        { itemId: 'bank-1', count: 1, spec: onePort },
+        { itemId: 'bank-2', count: 1, spec: { ...onePort, massG: 191 } },
+      ],
+    ],
+  ] as [string, KitEntry[]][])('%s: at most 4 Wh of battery gain in a camp hour', (_, banks) => {
+    const solar = syntheticTripSolar({ nights: 2, peakWm2: 0 });
+    const result = simulateKit({ solar, kit: [...banks, lead], devices: [camera], reserveShare: 0 });
+    const sky = result.skies[0];
+    if (!sky) throw new Error('the expected sky runs');
+    const units = result.stores.length + 1;
+    const useWh = 60 / 24;
+    let fastestWh = 0;
+    for (let i = 1; i < solar.steps.length; i++) {
+      if (solar.steps[i]?.window !== 'camp') continue;
+      const rise =
+        (sky.unitWhByStep[i * units + units - 1] ?? 0) - (sky.unitWhByStep[(i - 1) * units + units - 1] ?? 0);
+      fastestWh = Math.max(fastestWh, rise + useWh);
+    }
+    expect(fastestWh).toBeCloseTo(4, 9);
+  });
+});

@@ -362,6 +362,24 @@ describe('plans', () => {
     expect(await tripTime()).toBe(t.clock.now().toISOString());
   });
 
+  it('a plan counts the gear that joined the trip after it, which it never weighed; a new device does not count', async () => {
+    const other = await signedInHiker(t);
+    const own = await highRoute(t, other);
+    const solved = await t.http().post(`/api/trips/${own.trip.id}/plans`).set(other.auth).send({}).expect(201);
+    const addedCount = async () =>
+      (await t.http().get(`/api/trips/${own.trip.id}/plans/${solved.body.plan.id}`).set(other.auth).expect(200)).body
+        .plan.gearAddedCount;
+    expect(solved.body.plan.gearAddedCount).toBe(0);
+    t.clock.advanceS(60);
+    await t.http().post('/api/locker/items').set(other.auth).send(planGear[0]).expect(201);
+    expect(await addedCount()).toBe(1);
+    await t.http().post('/api/locker/items').set(other.auth).send(planDevices[0]?.item).expect(201);
+    expect(await addedCount()).toBe(1);
+    // The list stays light: no per-plan counts.
+    const list = await t.http().get(`/api/trips/${own.trip.id}/plans`).set(other.auth).expect(200);
+    expect(list.body.plans[0]).not.toHaveProperty('gearAddedCount');
+  });
+
   it('answers 422 for a trip with no devices', async () => {
     const empty = await createTrip(t, leader);
     const res = await t.http().post(`/api/trips/${empty.id}/plans`).set(leader.auth).send({}).expect(422);

@@ -5,8 +5,16 @@ import type { TripKitRow, TripPlanRow } from '../database/schema';
 export type TripPlanSummaryRow = Omit<TripPlanRow, 'input' | 'result'>;
 
 /** A stored plan as the API shows it (the input snapshot stays on the server). */
-export function toPlanRecord(row: TripPlanRow, gearChangedAt: Date | null): PlanRecord {
-  return { ...recordFields(row), result: row.result, gearChangedAt: gearChangedAt?.toISOString() ?? null };
+export function toPlanRecord(
+  row: TripPlanRow,
+  gear: { gearChangedAt: Date | null; gearAddedCount: number },
+): PlanRecord {
+  return {
+    ...recordFields(row),
+    result: row.result,
+    gearChangedAt: gear.gearChangedAt?.toISOString() ?? null,
+    gearAddedCount: gear.gearAddedCount,
+  };
 }
 
 /** A line of the plan list. */

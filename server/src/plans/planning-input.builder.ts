@@ -100,14 +100,33 @@ export class PlanningInputBuilder {
     return leader;
   }
 
-  /** The pooled gear and, with partners on the trip, the party that carries it. */
+  /**
+   * How many items of the gear the trip would plan with now joined it after `since` (an item added to the leader's
+   * locker, or shared into the pool) and are not among `weighedItemIds`: a plan made at `since` never weighed them,
+   * and a lighter kit may now exist.
+   */
+  async gearAddedSince(tripId: string, since: Date, weighedItemIds: ReadonlySet<string>): Promise<number> {
+    const { gear, joinedAtByItemId } = await this.poolFor(tripId, await this.leaderOf(tripId));
+    return gear.filter((g) => !weighedItemIds.has(g.itemId) && (joinedAtByItemId.get(g.itemId) ?? since) > since)
+      .length;
+  }
+
+  /**
+   * The pooled gear and, with partners on the trip, the party that carries it; and when each item joined the trip's
+   * gear (a locker item's creation, or its pool entry's).
+   */
   private async poolFor(
     tripId: string,
     leader: KitCarrier,
-  ): Promise<{ gear: PlanningGear[]; party: PartyPlanning | null }> {
+  ): Promise<{ gear: PlanningGear[]; party: PartyPlanning | null; joinedAtByItemId: Map<string, Date> }> {
     const carrierRoles = ['leader', 'partner'] as const;
     const entries = await this.db
-      .select({ item: lockerItems, count: tripPoolItems.count, ownerId: tripPoolItems.accountId })
+      .select({
+        item: lockerItems,
+        count: tripPoolItems.count,
+        ownerId: tripPoolItems.accountId,
+        pooledAt: tripPoolItems.createdAt,
+      })
       .from(tripPoolItems)
       .innerJoin(lockerItems, eq(lockerItems.id, tripPoolItems.itemId))
       .innerJoin(
@@ -117,13 +136,15 @@ export class PlanningInputBuilder {
       .where(and(eq(tripPoolItems.tripId, tripId), inArray(tripMembers.role, carrierRoles)))
       .orderBy(asc(lockerItems.name), asc(lockerItems.id));
     const leaderPooled = entries.some((entry) => entry.ownerId === leader.accountId);
-    const gear: PlanningGear[] = leaderPooled ? [] : await this.gearFor(leader);
+    const joinedAtByItemId = new Map<string, Date>();
+    const gear: PlanningGear[] = leaderPooled ? [] : await this.gearFor(leader, joinedAtByItemId);
     const ownerByItemId: Record<string, string> = Object.fromEntries(gear.map((g) => [g.itemId, leader.accountId]));
-    for (const { item, count, ownerId } of entries) {
+    for (const { item, count, ownerId, pooledAt } of entries) {
       const units = Math.min(count, item.countOwned);
       if (!isKitItemSpec(item.spec) || units <= 0 || ownerByItemId[item.id] !== undefined) continue;
       gear.push({ itemId: item.id, name: item.name, countOwned: units, massG: item.massG, spec: item.spec });
       ownerByItemId[item.id] = ownerId;
+      joinedAtByItemId.set(item.id, pooledAt);
     }
     const members = await this.db
       .select({
@@ -136,7 +157,7 @@ export class PlanningInputBuilder {
       .innerJoin(accounts, eq(accounts.id, tripMembers.accountId))
       .where(and(eq(tripMembers.tripId, tripId), inArray(tripMembers.role, carrierRoles)))
       .orderBy(asc(tripMembers.joinedAt), asc(tripMembers.accountId));
-    if (!members.some((m) => m.role === 'partner')) return { gear, party: null };
+    if (!members.some((m) => m.role === 'partner')) return { gear, party: null, joinedAtByItemId };
     // The leader first, then the partners in the order they joined.
     const carriers = [...members].sort((a, b) => Number(b.role === 'leader') - Number(a.role === 'leader'));
     return {
@@ -145,11 +166,12 @@ export class PlanningInputBuilder {
         members: carriers.map(({ memberId, name, gramLimitG }) => ({ memberId, name, gramLimitG })),
         ownerByItemId,
       },
+      joinedAtByItemId,
     };
   }
 
-  /** The candidate gear: the carrier's power gear with the units owned, by name. */
-  private async gearFor(carrier: KitCarrier): Promise<PlanningGear[]> {
+  /** The candidate gear: the carrier's power gear with the units owned, by name; notes when each was added. */
+  private async gearFor(carrier: KitCarrier, joinedAtByItemId: Map<string, Date>): Promise<PlanningGear[]> {
     const rows = await this.db
       .select()
       .from(lockerItems)
@@ -157,6 +179,7 @@ export class PlanningInputBuilder {
         and(eq(lockerItems.ownerId, carrier.accountId), ne(lockerItems.kind, 'device'), gt(lockerItems.countOwned, 0)),
       )
       .orderBy(asc(lockerItems.name), asc(lockerItems.id));
+    for (const row of rows) joinedAtByItemId.set(row.id, row.createdAt);
     return rows.flatMap((row) =>
       isKitItemSpec(row.spec)
         ? [{ itemId: row.id, name: row.name, countOwned: row.countOwned, massG: row.massG, spec: row.spec }]

@@ -89,15 +89,16 @@ export class PlansService {
     return this.record(await this.row(tripId, planId));
   }
 
-  /** The plan as the API gives it, with the latest locker spec change of the gear it weighed. */
+  /**
+   * The plan as the API gives it, with the latest locker spec change of the gear it weighed and how many items of gear
+   * joined the trip after it.
+   */
   private async record(row: TripPlanRow): Promise<PlanRecord> {
-    return toPlanRecord(
-      row,
-      await gearSpecChangedAt(
-        this.db,
-        row.input.gear.map((g) => g.itemId),
-      ),
-    );
+    const weighedItemIds = row.input.gear.map((g) => g.itemId);
+    return toPlanRecord(row, {
+      gearChangedAt: await gearSpecChangedAt(this.db, weighedItemIds),
+      gearAddedCount: await this.inputs.gearAddedSince(row.tripId, row.createdAt, new Set(weighedItemIds)),
+    });
   }
 
   /** The stored plan row of this trip. @throws NotFoundException (404) otherwise. */

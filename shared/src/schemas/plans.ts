@@ -294,15 +294,22 @@ export const planRecordSchema = z.object({
    * is in a locker any more): after `createdAt`, the plan's figures are for gear as it was.
    */
   gearChangedAt: z.string().nullable().default(null),
+  /**
+   * How many items of gear joined the trip after the plan (added to the leader's locker, or shared into the pool) that
+   * it never weighed: a lighter kit may now exist.
+   */
+  gearAddedCount: z.number().int().nonnegative().default(0),
 });
 export type PlanRecord = z.infer<typeof planRecordSchema>;
 
 /** A plan in a list (no heavy fields). */
-export const planSummarySchema = planRecordSchema.omit({ result: true, gearChangedAt: true }).extend({
-  status: z.enum(planStatuses),
-  headline: z.string(),
-  massG: z.number().nullable(),
-});
+export const planSummarySchema = planRecordSchema
+  .omit({ result: true, gearChangedAt: true, gearAddedCount: true })
+  .extend({
+    status: z.enum(planStatuses),
+    headline: z.string(),
+    massG: z.number().nullable(),
+  });
 export type PlanSummary = z.infer<typeof planSummarySchema>;
 
 /** The trip's chosen kit, which the packing list and e-mails use. */

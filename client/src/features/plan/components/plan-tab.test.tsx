@@ -44,6 +44,7 @@ describe('PlanTab', () => {
     expect(screen.getByRole('button', { name: 'Find the lightest kit again' })).toBeEnabled();
     expect(screen.queryByText('The trip or its gear changed after this plan was made')).toBeNull();
     expect(screen.queryByText('An earlier version of the planner made this plan')).toBeNull();
+    expect(screen.queryByText('Gear joined the trip after this plan was made')).toBeNull();
   });
 
   it('shows the newest stored plan on load, with gram prices, swaps, the ledger and the cautions', async () => {
@@ -86,6 +87,13 @@ describe('PlanTab', () => {
     installPlanApi({ plans: [buildPlanRecord(buildPlanResult(), { gearChangedAt: '2027-02-21T09:00:00.000Z' })] });
     renderPlanTab();
     expect(await screen.findByText('The trip or its gear changed after this plan was made')).toBeInTheDocument();
+  });
+
+  it('says when gear joined the trip after the plan, which the plan never weighed', async () => {
+    installPlanApi({ plans: [buildPlanRecord(buildPlanResult(), { gearAddedCount: 2 })] });
+    renderPlanTab();
+    expect(await screen.findByText('Gear joined the trip after this plan was made')).toBeInTheDocument();
+    expect(screen.getByText(/2 items of power gear/)).toBeInTheDocument();
   });
 
   it('says when an earlier version of the planner made the plan, and not for the current one', async () => {

@@ -19,6 +19,7 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
   const plan = usePlan(tripId, latestId);
   const changedAt = useTripChangedAt(tripId).data;
   const isOutdated = plan.data !== undefined && changedAfter(plan.data.createdAt, changedAt, plan.data.gearChangedAt);
+  const gearAddedCount = plan.data?.gearAddedCount ?? 0;
   const isEarlierPlanner = plan.data !== undefined && plan.data.modelVersion !== planModelVersion;
 
   const solve = canSolve && (
@@ -58,6 +59,15 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
           {canSolve
             ? 'Find the lightest kit again for the trip as it is now.'
             : 'The leader or a partner can solve it again.'}
+        </Alert>
+      )}
+      {!isOutdated && gearAddedCount > 0 && (
+        <Alert tone="info" title="Gear joined the trip after this plan was made">
+          {gearAddedCount === 1 ? 'One item' : `${gearAddedCount} items`} of power gear added to the locker or shared
+          into the pool since then {gearAddedCount === 1 ? 'was' : 'were'} not weighed, and may make a lighter kit.{' '}
+          {canSolve
+            ? 'Find the lightest kit again to weigh them.'
+            : 'The leader or a partner can solve it again to weigh them.'}
         </Alert>
       )}
       {isEarlierPlanner && (

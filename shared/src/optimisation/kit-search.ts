@@ -179,8 +179,9 @@ export function createKitSearch(
     stats.judgedKits++;
     if (!verdict.feasible) judgeRejections++;
     if (verdict.feasible) {
-      const massG = kitMassG(counts, problem.candidates);
-      if (!lightestAccepted || massG < lightestAccepted.massG) lightestAccepted = { counts: new Map(counts), massG };
+      const works = verdict.works ?? counts;
+      const massG = kitMassG(works, problem.candidates);
+      if (!lightestAccepted || massG < lightestAccepted.massG) lightestAccepted = { counts: new Map(works), massG };
     }
     return verdict;
   };
@@ -441,6 +442,8 @@ export function createKitSearch(
         reject(tied, tiedVerdict, deadlineMs);
         continue;
       }
+      // Works only with an item left home: not a kit to offer (a lighter one works).
+      if (tiedVerdict.works) continue;
       if ((tiedVerdict.margin ?? -Infinity) > (best.verdict.margin ?? -Infinity))
         best = { counts: tied, verdict: tiedVerdict };
     }
@@ -518,6 +521,12 @@ export function createKitSearch(
         keepProposal(counts);
         continue;
       }
+      // A kit that works only with a converter left home gives way to the lighter kit without it (the model, a relaxation,
+      // would have proposed that one first had it proven its grams the least).
+      if (verdict.works) {
+        const works = new Map(verdict.works);
+        return { kind: 'found', counts: works, massG: kitMassG(works, problem.candidates), verdict, proven: false };
+      }
       const chosen = tieBreak ? tieBreakAmong(counts, massG, verdict, deadlineMs) : { counts, verdict };
       return { kind: 'found', counts: chosen.counts, massG, verdict: chosen.verdict, proven };
     }
@@ -548,7 +557,8 @@ export function createKitSearch(
     lastProposals,
     shavedKits,
     noteShaved: (counts) => {
-      if (judge(counts).feasible && !shavedKits.some((k) => kitKey(k) === kitKey(counts)))
+      const verdict = judge(counts);
+      if (verdict.feasible && !verdict.works && !shavedKits.some((k) => kitKey(k) === kitKey(counts)))
         shavedKits.push(new Map(counts));
     },
   };

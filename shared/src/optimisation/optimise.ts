@@ -50,8 +50,10 @@ export function greedyShave(
   deadlineMs: number,
   keepLast: KitCounts = new Map(),
 ): JudgedKit {
-  const counts = new Map(start);
-  let verdict = search.judge(counts);
+  let verdict = search.judge(start);
+  // A start that works only with a converter left home starts as the kit without it.
+  const counts = new Map(verdict.works ?? start);
+  if (verdict.works) verdict = search.judge(counts);
   const late = (c: KitCandidate): number => ((keepLast.get(c.itemId) ?? 0) > 0 ? 1 : 0);
   const order = [...search.problem.candidates]
     .filter((c) => (counts.get(c.itemId) ?? 0) > 0)
@@ -69,8 +71,9 @@ export function greedyShave(
     const v = search.judge(trial);
     if (!v.feasible) return false;
     counts.clear();
-    for (const [k, n] of trial) counts.set(k, n);
-    verdict = v;
+    // A kit that works only with a converter left home shaves down to the kit without it.
+    for (const [k, n] of v.works ?? trial) counts.set(k, n);
+    verdict = v.works ? search.judge(v.works) : v;
     return true;
   };
   const outOfTime = (): boolean => search.now() >= deadlineMs;
@@ -454,7 +457,7 @@ export function findSwaps(
       if (taken.some((kit) => kitNoLarger(kit, counts))) continue;
       if (!shaved.has(counts) && search.now() >= deadlineMs) continue;
       const verdict = search.judge(counts);
-      if (!verdict.feasible) continue;
+      if (!verdict.feasible || verdict.works) continue;
       swaps.push(swapOf(counts, verdict));
       taken.push(counts);
     }

@@ -15,7 +15,8 @@ export function shaveGrams(candidates: readonly KitCandidate[], judge: KitJudge,
     const massG = kitMassG(counts, candidates);
     if (massG >= baseG) return;
     const verdict = judge(counts);
-    if (verdict.feasible)
+    // A kit that works only with an item left home is offered as that lighter kit's own change, never as this one.
+    if (verdict.feasible && !verdict.works)
       shaves.push({ change, kit: { lines: kitLines(counts), massG, verdict }, savedG: baseG - massG });
   };
   const lines = kitLines(kit);

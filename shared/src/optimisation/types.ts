@@ -213,6 +213,11 @@ export interface JudgeVerdict {
   /** Worst-case headroom, in whatever unit the judge reports (share or Wh), for swaps' "more margin". */
   margin?: number;
   runsDry?: RunsDry;
+  /**
+   * Set when the kit works only with some of its items left unused (a converter left home): the lighter kit that works
+   * as packed. The judge stays monotone; whatever the search offers is this kit, never the one asked.
+   */
+  works?: KitCounts;
 }
 
 /** The hourly simulation, supplied by the caller. Must be monotone in every item count and deterministic. */

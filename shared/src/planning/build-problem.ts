@@ -6,6 +6,7 @@ import type {
   HarvestGroup,
   KitCandidate,
   KitCounts,
+  JudgeVerdict,
   KitJudge,
   OptimisationProblem,
   PanelCoefficients,
@@ -16,6 +17,7 @@ import type {
 import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { KitEntry } from '../schemas/kit.js';
 import type { BatterySpec, ControllerSpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
+import { kitKey } from '../optimisation/kit.js';
 import { chargePaths, joinPorts, type ChargePath, type KitConverter, type KitLead } from '../simulation/connections.js';
 import {
   packChargePaths,
@@ -491,14 +493,63 @@ export function planningContext(
   const simulate = (counts: KitCounts): KitSimulation => simulateKit(simulationInput(counts));
   /** The sky the last rejected kit ran dry in: the next kit is run there first (the search's kits fail alike). */
   let lastDrySkyIndex = 0;
-  const judge: KitJudge = (counts) => {
+  const converterSpecs = new Map(
+    input.gear.flatMap((g) => (g.spec.kind === 'converter' ? [[g.itemId, g.spec] as const] : [])),
+  );
+  /**
+   * Whether converter `id` may be left home when `counts` runs dry as packed: another held converter of the same type is
+   * faster and less efficient — the one pair the top-ups can use worse than either alone (below).
+   */
+  const spareConverter = (id: string, counts: KitCounts): boolean => {
+    const c = converterSpecs.get(id);
+    if (!c) return false;
+    for (const [other, n] of counts) {
+      const d = other !== id && n > 0 ? converterSpecs.get(other) : undefined;
+      if (
+        d &&
+        d.converterType === c.converterType &&
+        d.efficiency < c.efficiency &&
+        d.maxOutputA * d.outputVolts > c.maxOutputA * c.outputVolts
+      )
+        return true;
+    }
+    return false;
+  };
+  /**
+   * A kit works when it works as packed, or with a converter left home (and so on down): a hiker can always leave one
+   * in the bag. The simulation's top-ups take the most efficient path first, so a slow, efficient converter added beside
+   * a fast, lossy one of the same type can leave a tiny bank full when the sun comes and spill what the fast path would
+   * have passed on (shared README, known gap (4)) — the kit with both runs dry where the fast one alone lasts, and the
+   * search, taking the judge as monotone, could cut off the working kit or call a locker that holds it hopeless. Judged
+   * this way, adding such a converter never turns a kit that works into one that runs dry. Only kits that run dry as
+   * packed and hold such a pair pay for the extra runs; the verdict names the lighter kit that works (`works`), which
+   * the search offers instead.
+   */
+  const judgeKit = (counts: KitCounts, tried: Map<string, JudgeVerdict>): JudgeVerdict => {
+    const key = kitKey(counts);
+    const known = tried.get(key);
+    if (known) return known;
     const answer = kitFeasibility(simulationInput(counts), lastDrySkyIndex);
+    let verdict: JudgeVerdict = answer.feasible
+      ? { feasible: true, margin: answer.worstMarginShare }
+      : { feasible: false };
     if (!answer.feasible) {
       lastDrySkyIndex = answer.drySkyIndex ?? 0;
-      return { feasible: false };
+      for (const [id, n] of counts) {
+        if (n <= 0 || !spareConverter(id, counts)) continue;
+        const without = new Map(counts);
+        without.delete(id);
+        const left = judgeKit(without, tried);
+        if (left.feasible) {
+          verdict = { ...left, works: left.works ?? without };
+          break;
+        }
+      }
     }
-    return { feasible: true, margin: answer.worstMarginShare };
+    tried.set(key, verdict);
+    return verdict;
   };
+  const judge: KitJudge = (counts) => judgeKit(counts, new Map());
   return { input, solarOptions, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
 }
 

@@ -3,6 +3,7 @@
  * told apart (the Plan tab says so and offers to plan again). Raised whenever the same trip and gear can get a
  * different answer: 2 — camp top-ups in rounds by hours held and harvest tiers in the simulation's dispatch, and a
  * core of the locker searched first on large lockers; 3 — the units of one item drawn together, and a device charged no
- * faster than the fastest path of any one store (one socket, one cable at a time), not the stores' rates added up.
+ * faster than the fastest path of any one store (one socket, one cable at a time), not the stores' rates added up; and
+ * a kit judged as working when it works with a shadowed converter left home.
  */
 export const planModelVersion = 'gramwatt-plan-3';

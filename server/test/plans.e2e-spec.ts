@@ -309,6 +309,24 @@ describe('plans', () => {
     expect(kitRead.body.kit.modelVersion).toBe('gramwatt-plan-1');
   });
 
+  /** Deleting `outsideId` from the locker leaves the trip's change time alone; deleting `insideId` (kit gear) moves it. */
+  const expectOnlyKitGearDeletionMarksTrip = async (
+    hiker: Hiker,
+    tripId: string,
+    outsideId: string,
+    insideId: string,
+  ): Promise<void> => {
+    const tripTime = async () =>
+      (await t.http().get(`/api/trips/${tripId}`).set(hiker.auth).expect(200)).body.trip.updatedAt;
+    const before = await tripTime();
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${outsideId}`).set(hiker.auth).expect(204);
+    expect(await tripTime()).toBe(before);
+    t.clock.advanceS(60);
+    await t.http().delete(`/api/locker/items/${insideId}`).set(hiker.auth).expect(204);
+    expect(await tripTime()).toBe(t.clock.now().toISOString());
+  };
+
   it("a plan's gear edited in the locker shows on the plan; deleting gear in a chosen kit marks the trip as changed, other gear's deletion does not", async () => {
     const other = await signedInHiker(t);
     const own = await highRoute(t, other);
@@ -329,15 +347,7 @@ describe('plans', () => {
     const read = await t.http().get(planUrl).set(other.auth).expect(200);
     expect(read.body.plan.gearChangedAt).toBe(t.clock.now().toISOString());
 
-    const tripTime = async () =>
-      (await t.http().get(`/api/trips/${own.trip.id}`).set(other.auth).expect(200)).body.trip.updatedAt;
-    const before = await tripTime();
-    t.clock.advanceS(60);
-    await t.http().delete(`/api/locker/items/${notInKit.id}`).set(other.auth).expect(204);
-    expect(await tripTime()).toBe(before);
-    t.clock.advanceS(60);
-    await t.http().delete(`/api/locker/items/${inKit.id}`).set(other.auth).expect(204);
-    expect(await tripTime()).toBe(t.clock.now().toISOString());
+    await expectOnlyKitGearDeletionMarksTrip(other, own.trip.id, notInKit.id, inKit.id);
   });
 
   it("with no kit chosen, deleting gear in the latest plan's optimum (the kit that stands) marks the trip as changed", async () => {
@@ -351,15 +361,7 @@ describe('plans', () => {
     const standing = await t.http().get(`/api/trips/${own.trip.id}/kit`).set(other.auth).expect(200);
     expect(standing.body.kit.source).toBe('optimum');
 
-    const tripTime = async () =>
-      (await t.http().get(`/api/trips/${own.trip.id}`).set(other.auth).expect(200)).body.trip.updatedAt;
-    const before = await tripTime();
-    t.clock.advanceS(60);
-    await t.http().delete(`/api/locker/items/${outside.id}`).set(other.auth).expect(204);
-    expect(await tripTime()).toBe(before);
-    t.clock.advanceS(60);
-    await t.http().delete(`/api/locker/items/${inside.id}`).set(other.auth).expect(204);
-    expect(await tripTime()).toBe(t.clock.now().toISOString());
+    await expectOnlyKitGearDeletionMarksTrip(other, own.trip.id, outside.id, inside.id);
   });
 
   it('a plan counts the gear that joined the trip after it, which it never weighed; a new device does not count', async () => {

@@ -73,6 +73,28 @@ describe('scheduleRows', () => {
   });
 });
 
+describe('scheduleRows with two units of one bank', () => {
+  it('makes one row of the sessions that draw on both units over the same hours, and names a lone unit', () => {
+    const evaluation = buildEvaluation();
+    const lines = kitLines({ panel: 1, bigBank: 2, boost: 1, dcLead: 1, usbLead: 1 });
+    const bank = fixtureGear.bigBank;
+    const topUp = evaluation.schedule.find((s) => s.kind === 'top-up')!;
+    const unit = (n: number, energyWh: number, hours = 0) => ({
+      ...topUp,
+      fromId: `${bank.itemId}#${n}`,
+      fromName: bank.name,
+      start: new Date(Date.parse(topUp.start) + hours * 3_600_000).toISOString(),
+      end: new Date(Date.parse(topUp.end) + hours * 3_600_000).toISOString(),
+      energyWh,
+    });
+    const rows = scheduleRows({ ...evaluation, schedule: [unit(1, 2), unit(2, 1.5), unit(2, 0.5, 1)] }, lines);
+    expect(rows.map((r) => [r.from, r.energyWh])).toEqual([
+      [`${bank.name} (both)`, 3.5],
+      [`${bank.name} (2nd)`, 0.5],
+    ]);
+  });
+});
+
 describe('hopsOf with the 12 V path', () => {
   it('orders sun into stores, then top-ups, then a radio run live from its pack', () => {
     const session = (kind: 'harvest' | 'top-up' | 'live', fromId: string, toId: string) => ({

@@ -6,12 +6,19 @@ import { localEnd, minutesOfDay, type LocalClock } from './local-time';
 const itemIdOf = (id: string): string => id.split('#')[0] ?? id;
 const unitOf = (id: string): number => Number(id.split('#')[1] ?? '1') || 1;
 
-/** A name with its unit when the kit carries more than one: "Cairn bank (2nd)". */
-const unitName = (name: string, id: string, countByItem: ReadonlyMap<string, number>): string => {
-  if ((countByItem.get(itemIdOf(id)) ?? 1) < 2) return name;
-  const unit = unitOf(id);
-  const suffix = unit === 1 ? 'st' : unit === 2 ? 'nd' : unit === 3 ? 'rd' : 'th';
-  return `${name} (${unit}${suffix})`;
+const ordinal = (unit: number): string => `${unit}${unit === 1 ? 'st' : unit === 2 ? 'nd' : unit === 3 ? 'rd' : 'th'}`;
+
+/**
+ * A name with its units when the kit carries more than one: "Cairn bank (2nd)", "Cairn bank (1st and 2nd)", or
+ * "Cairn bank (both)" / "(all 3)" when a session draws on every unit (the units of one item are drawn together).
+ */
+const unitsName = (name: string, ids: readonly string[], countByItem: ReadonlyMap<string, number>): string => {
+  const count = countByItem.get(itemIdOf(ids[0] ?? '')) ?? 1;
+  if (count < 2) return name;
+  const units = [...new Set(ids.map(unitOf))].sort((a, b) => a - b);
+  if (units.length === count) return `${name} (${count === 2 ? 'both' : `all ${count}`})`;
+  const listed = units.map(ordinal);
+  return `${name} (${listed.length > 1 ? `${listed.slice(0, -1).join(', ')} and ${listed.at(-1)}` : listed[0]})`;
 };
 
 /** One hop energy takes, from a panel or store to a store or device, with what joins the two. */
@@ -54,8 +61,8 @@ export const hopsOf = (evaluation: Pick<KitEvaluation, 'schedule'>, lines: reado
     const known = hops.get(key);
     if (known && hopOrder[known.kind] <= hopOrder[s.kind]) continue;
     hops.set(key, {
-      from: unitName(s.fromName, s.fromId, counts),
-      to: unitName(s.toName, s.toId, counts),
+      from: unitsName(s.fromName, [s.fromId], counts),
+      to: unitsName(s.toName, [s.toId], counts),
       via: s.converterItemId ? name(s.converterItemId) : null,
       leads: s.leadItemIds.map(name),
       kind: s.kind,
@@ -97,18 +104,34 @@ export const scheduleRows = (
   const firstPoint = evaluation.sunPaths[0]?.points[0]?.localTime;
   const dayStartMin = firstPoint ? minutesOfDay(firstPoint) : 0;
   const counts = new Map(lines.map((line) => [line.itemId, line.count]));
-  return [...evaluation.schedule]
-    .sort((a, b) => a.dayIndex - b.dayIndex || Date.parse(a.start) - Date.parse(b.start))
-    .map((s) => ({
+  // Sessions that differ only in which unit of one item they draw on or fill, over the same hours, are one row.
+  const merged = new Map<
+    string,
+    { session: ChargeSessionJson; fromIds: string[]; toIds: string[]; energyWh: number }
+  >();
+  for (const s of evaluation.schedule) {
+    const key = [s.dayIndex, s.kind, s.start, s.end, itemIdOf(s.fromId), itemIdOf(s.toId), s.converterItemId].join('|');
+    const row = merged.get(key);
+    if (row) {
+      row.fromIds.push(s.fromId);
+      row.toIds.push(s.toId);
+      row.energyWh += s.energyWh;
+    } else merged.set(key, { session: s, fromIds: [s.fromId], toIds: [s.toId], energyWh: s.energyWh });
+  }
+  return [...merged.values()]
+    .sort(
+      (a, b) => a.session.dayIndex - b.session.dayIndex || Date.parse(a.session.start) - Date.parse(b.session.start),
+    )
+    .map(({ session: s, fromIds, toIds, energyWh }) => ({
       dayIndex: s.dayIndex,
       kind: s.kind,
       start: s.startLocalTime,
       startsNextMorning: minutesOfDay(s.startLocalTime) < dayStartMin,
       end: localEnd(s.startLocalTime, s.start, s.end),
-      from: unitName(s.fromName, s.fromId, counts),
-      to: unitName(s.toName, s.toId, counts),
+      from: unitsName(s.fromName, fromIds, counts),
+      to: unitsName(s.toName, toIds, counts),
       via: s.converterItemId ? name(s.converterItemId) : null,
-      energyWh: s.energyWh,
+      energyWh,
     }));
 };
 

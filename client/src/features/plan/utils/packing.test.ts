@@ -93,6 +93,18 @@ describe('scheduleRows with two units of one bank', () => {
       [`${bank.name} (2nd)`, 0.5],
     ]);
   });
+
+  it('lists the hop from both units as one line (one lead, moved from unit to unit)', () => {
+    const evaluation = buildEvaluation();
+    const lines = kitLines({ panel: 1, bigBank: 2, boost: 1, dcLead: 1, usbLead: 1 });
+    const bank = fixtureGear.bigBank;
+    const topUp = evaluation.schedule.find((s) => s.kind === 'top-up')!;
+    const hops = hopsOf(
+      { schedule: [1, 2].map((n) => ({ ...topUp, fromId: `${bank.itemId}#${n}`, fromName: bank.name })) },
+      lines,
+    );
+    expect(hops.map((h) => h.from)).toEqual([`${bank.name} (both)`]);
+  });
 });
 
 describe('hopsOf with the 12 V path', () => {

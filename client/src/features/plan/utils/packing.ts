@@ -54,21 +54,28 @@ const nameIn = (lines: readonly PlanKitLine[]) => {
 export const hopsOf = (evaluation: Pick<KitEvaluation, 'schedule'>, lines: readonly PlanKitLine[]): PackingHop[] => {
   const name = nameIn(lines);
   const counts = new Map(lines.map((line) => [line.itemId, line.count]));
-  const hops = new Map<string, PackingHop>();
+  const hops = new Map<string, PackingHop & { fromIds: Set<string>; toIds: Set<string> }>();
   for (const s of evaluation.schedule) {
-    // A radio topped up from a pack and run live from it takes the same hop: one line, the earlier in the flow.
-    const key = [s.fromId, s.toId, s.converterItemId ?? '', ...s.leadItemIds].join('|');
+    // A radio topped up from a pack and run live from it takes the same hop: one line, the earlier in the flow. The
+    // units of one item take the same hop too (one lead, moved from unit to unit): one line naming the units.
+    const key = [itemIdOf(s.fromId), itemIdOf(s.toId), s.converterItemId ?? '', ...s.leadItemIds].join('|');
     const known = hops.get(key);
-    if (known && hopOrder[known.kind] <= hopOrder[s.kind]) continue;
+    const fromIds = new Set([...(known?.fromIds ?? []), s.fromId]);
+    const toIds = new Set([...(known?.toIds ?? []), s.toId]);
+    const kind = known && hopOrder[known.kind] <= hopOrder[s.kind] ? known.kind : s.kind;
     hops.set(key, {
-      from: unitsName(s.fromName, [s.fromId], counts),
-      to: unitsName(s.toName, [s.toId], counts),
+      from: unitsName(s.fromName, [...fromIds], counts),
+      to: unitsName(s.toName, [...toIds], counts),
       via: s.converterItemId ? name(s.converterItemId) : null,
       leads: s.leadItemIds.map(name),
-      kind: s.kind,
+      kind,
+      fromIds,
+      toIds,
     });
   }
-  return [...hops.values()].sort((a, b) => hopOrder[a.kind] - hopOrder[b.kind]);
+  return [...hops.values()]
+    .map(({ fromIds: _from, toIds: _to, ...hop }) => hop)
+    .sort((a, b) => hopOrder[a.kind] - hopOrder[b.kind]);
 };
 
 /** Leads in the kit that no hop of the schedule uses (spares, or a path the expected sky never needed). */

@@ -377,6 +377,17 @@ describe('plans', () => {
     expect(await addedCount()).toBe(1);
     await t.http().post('/api/locker/items').set(other.auth).send(planDevices[0]?.item).expect(201);
     expect(await addedCount()).toBe(1);
+    // One more unit of an item the plan weighed: the plan never weighed that unit.
+    const weighed = own.gear[0];
+    if (!weighed) throw new Error('the high route has gear');
+    const current = (await t.http().get(`/api/locker/items/${weighed.id}`).set(other.auth).expect(200)).body.item;
+    await t
+      .http()
+      .put(`/api/locker/items/${weighed.id}`)
+      .set(other.auth)
+      .send({ name: current.name, notes: current.notes, countOwned: current.countOwned + 1, spec: current.spec })
+      .expect(200);
+    expect(await addedCount()).toBe(2);
     // The list stays light: no per-plan counts.
     const list = await t.http().get(`/api/trips/${own.trip.id}/plans`).set(other.auth).expect(200);
     expect(list.body.plans[0]).not.toHaveProperty('gearAddedCount');

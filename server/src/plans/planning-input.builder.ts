@@ -101,14 +101,16 @@ export class PlanningInputBuilder {
   }
 
   /**
-   * How many items of the gear the trip would plan with now joined it after `since` (an item added to the leader's
-   * locker, or shared into the pool) and are not among `weighedItemIds`: a plan made at `since` never weighed them,
-   * and a lighter kit may now exist.
+   * How many items of the gear the trip would plan with now a plan made at `since` never weighed: items that joined it
+   * after `since` (added to the leader's locker, or shared into the pool) and are not among the plan's, and items of
+   * the plan's with more units now than `weighedUnits` gives them. A lighter kit may now exist.
    */
-  async gearAddedSince(tripId: string, since: Date, weighedItemIds: ReadonlySet<string>): Promise<number> {
+  async gearAddedSince(tripId: string, since: Date, weighedUnits: ReadonlyMap<string, number>): Promise<number> {
     const { gear, joinedAtByItemId } = await this.poolFor(tripId, await this.leaderOf(tripId));
-    return gear.filter((g) => !weighedItemIds.has(g.itemId) && (joinedAtByItemId.get(g.itemId) ?? since) > since)
-      .length;
+    return gear.filter((g) => {
+      const weighed = weighedUnits.get(g.itemId);
+      return weighed === undefined ? (joinedAtByItemId.get(g.itemId) ?? since) > since : g.countOwned > weighed;
+    }).length;
   }
 
   /**

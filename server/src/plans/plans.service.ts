@@ -97,7 +97,11 @@ export class PlansService {
     const weighedItemIds = row.input.gear.map((g) => g.itemId);
     return toPlanRecord(row, {
       gearChangedAt: await gearSpecChangedAt(this.db, weighedItemIds),
-      gearAddedCount: await this.inputs.gearAddedSince(row.tripId, row.createdAt, new Set(weighedItemIds)),
+      gearAddedCount: await this.inputs.gearAddedSince(
+        row.tripId,
+        row.createdAt,
+        new Map(row.input.gear.map((g) => [g.itemId, g.countOwned])),
+      ),
     });
   }
 

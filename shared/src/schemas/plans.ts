@@ -295,8 +295,8 @@ export const planRecordSchema = z.object({
    */
   gearChangedAt: z.string().nullable().default(null),
   /**
-   * How many items of gear joined the trip after the plan (added to the leader's locker, or shared into the pool) that
-   * it never weighed: a lighter kit may now exist.
+   * How many items of gear the plan never weighed: added to the leader's locker or shared into the pool after it, or
+   * weighed with fewer units than are now owned or shared. A lighter kit may now exist.
    */
   gearAddedCount: z.number().int().nonnegative().default(0),
 });

@@ -95,7 +95,7 @@ describe('PlanTab', () => {
     expect(await screen.findByText('Gear joined the trip after this plan was made')).toBeInTheDocument();
     expect(
       screen.getByText(
-        /2 items of power gear were added .* This plan did not weigh them; they may make a lighter kit\. Find the lightest kit again to weigh them\./,
+        /Since then, 2 items of power gear were added .* This plan did not weigh them; they may make a lighter kit\. Find the lightest kit again to weigh them\./,
       ),
     ).toBeInTheDocument();
   });

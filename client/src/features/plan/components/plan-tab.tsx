@@ -64,8 +64,8 @@ export function PlanTab({ tripId, canSolve, canChooseKit }: PlanTabProps) {
       {!isOutdated && gearAddedCount > 0 && (
         <Alert tone="info" title="Gear joined the trip after this plan was made">
           {gearAddedCount === 1
-            ? 'One item of power gear was added to the locker or shared into the pool since then. This plan did not weigh it; it may make a lighter kit.'
-            : `${gearAddedCount} items of power gear were added to the locker or shared into the pool since then. This plan did not weigh them; they may make a lighter kit.`}{' '}
+            ? 'Since then, one item of power gear was added to the locker or the pool, or more of it is now owned. This plan did not weigh it; it may make a lighter kit.'
+            : `Since then, ${gearAddedCount} items of power gear were added to the locker or the pool, or more of them are now owned. This plan did not weigh them; they may make a lighter kit.`}{' '}
           {canSolve
             ? `Find the lightest kit again to weigh ${gearAddedCount === 1 ? 'it' : 'them'}.`
             : 'The leader or a partner can solve it again.'}

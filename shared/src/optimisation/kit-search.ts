@@ -525,7 +525,15 @@ export function createKitSearch(
       // would have proposed that one first had it proven its grams the least).
       if (verdict.works) {
         const works = new Map(verdict.works);
-        return { kind: 'found', counts: works, massG: kitMassG(works, problem.candidates), verdict, proven: false };
+        // The verdict of the lighter kit, which works as packed (its margin is the one the judge found for it).
+        const { works: _asked, ...asPacked } = verdict;
+        return {
+          kind: 'found',
+          counts: works,
+          massG: kitMassG(works, problem.candidates),
+          verdict: asPacked,
+          proven: false,
+        };
       }
       const chosen = tieBreak ? tieBreakAmong(counts, massG, verdict, deadlineMs) : { counts, verdict };
       return { kind: 'found', counts: chosen.counts, massG, verdict: chosen.verdict, proven };

@@ -401,7 +401,6 @@ export function runSky(
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
       const givenW = scratch.topUpGivenW;
-      const unitCapW = scratch.topUpUnitCapW;
       const powerLeftWh = scratch.topUpPowerLeftWh;
       const fullWh = scratch.topUpFullWh;
       givenW.fill(0);
@@ -440,20 +439,11 @@ export function runSky(
             let powerWh = powerLeftWh[d] ?? 0;
             if (powerWh <= tiny) continue;
             rateW.fill(0);
-            // The units of one item as one: what they give together, split in proportion to what each can give.
             for (let group = 0; group < 2; group++) {
               for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
                 m = Math.max(1, k.storeGroupSize[s] ?? 1);
                 if ((k.storeShared[s] ?? 0) !== group) continue;
-                let capW = 0;
-                for (let u = s; u < s + m; u++) {
-                  const c = efficientCapW(d, u, givenW[u * D + d] ?? 0);
-                  unitCapW[u] = c;
-                  capW += c;
-                }
-                const x = Math.min(capW, wantWh / dt, powerWh / dt);
-                if (!(x > 0)) continue;
-                for (let u = s; u < s + m; u++) rateW[u] = (x * (unitCapW[u] ?? 0)) / capW;
+                const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
                 wantWh -= x * dt;
                 powerWh -= x * dt;
               }
@@ -463,16 +453,7 @@ export function runSky(
               for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
                 m = Math.max(1, k.storeGroupSize[s] ?? 1);
                 if ((k.storeShared[s] ?? 0) !== group) continue;
-                let roomW = 0;
-                for (let u = s; u < s + m; u++) {
-                  const fromW = (givenW[u * D + d] ?? 0) + (rateW[u] ?? 0);
-                  const c = Math.max(0, fastestRateW(d, u, givenW[u * D + d] ?? 0, fromW) - fromW);
-                  unitCapW[u] = c;
-                  roomW += c;
-                }
-                const extraW = Math.min(roomW, Math.min(shortWh, powerWh) / dt);
-                if (!(extraW > 0)) continue;
-                for (let u = s; u < s + m; u++) rateW[u] = (rateW[u] ?? 0) + (extraW * (unitCapW[u] ?? 0)) / roomW;
+                const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
                 shortWh -= extraW * dt;
                 powerWh -= extraW * dt;
               }
@@ -506,6 +487,30 @@ export function runSky(
     }
   }
   return finish();
+
+  /**
+   * Gives device d at most `limitW` more (W of battery gain) in this round from the units s … s + m − 1 of one item,
+   * taken as one: what they can give together in the pass — along their most efficient paths (`efficient`), else sped
+   * up along their hulls above the rates they give already — split in proportion to what each can give, and added to
+   * `topUpRateW`. Returns the rate given.
+   */
+  function giveFromUnits(d: number, s: number, m: number, efficient: boolean, limitW: number): number {
+    const rateW = scratch.topUpRateW;
+    const givenW = scratch.topUpGivenW;
+    const unitCapW = scratch.topUpUnitCapW;
+    let capW = 0;
+    for (let u = s; u < s + m; u++) {
+      const given = givenW[u * D + d] ?? 0;
+      const fromW = given + (rateW[u] ?? 0);
+      const c = efficient ? efficientCapW(d, u, given) : Math.max(0, fastestRateW(d, u, given, fromW) - fromW);
+      unitCapW[u] = c;
+      capW += c;
+    }
+    const x = Math.min(capW, limitW);
+    if (!(x > 0)) return 0;
+    for (let u = s; u < s + m; u++) rateW[u] = (rateW[u] ?? 0) + (x * (unitCapW[u] ?? 0)) / capW;
+    return x;
+  }
 
   /**
    * First pass of a top-up: the further rate (W of battery gain) store s can give device d in this round along its most

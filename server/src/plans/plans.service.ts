@@ -91,17 +91,13 @@ export class PlansService {
 
   /**
    * The plan as the API gives it, with the latest locker spec change of the gear it weighed and how many items of gear
-   * joined the trip after it.
+   * it never weighed (`gearAddedSince`).
    */
   private async record(row: TripPlanRow): Promise<PlanRecord> {
-    const weighedItemIds = row.input.gear.map((g) => g.itemId);
+    const weighedUnits = new Map(row.input.gear.map((g) => [g.itemId, g.countOwned]));
     return toPlanRecord(row, {
-      gearChangedAt: await gearSpecChangedAt(this.db, weighedItemIds),
-      gearAddedCount: await this.inputs.gearAddedSince(
-        row.tripId,
-        row.createdAt,
-        new Map(row.input.gear.map((g) => [g.itemId, g.countOwned])),
-      ),
+      gearChangedAt: await gearSpecChangedAt(this.db, [...weighedUnits.keys()]),
+      gearAddedCount: await this.inputs.gearAddedSince(row.tripId, row.createdAt, weighedUnits),
     });
   }
 

@@ -17,11 +17,16 @@ export async function markTripsOfItemsChanged(db: Queryable, itemIds: PgSelect, 
     .select({ id: tripDevices.tripId })
     .from(tripDevices)
     .where(inArray(tripDevices.itemId, itemIds));
-  const inChosenKit: SQL = sql`exists (select 1 from jsonb_array_elements(${tripKits.lines}) as line where (line->>'itemId')::uuid in (${itemIds}))`;
-  const withKit = db.select({ id: tripKits.tripId }).from(tripKits).where(inChosenKit);
+  /** Whether a kit's jsonb `lines` (each with an `itemId`) hold one of the items. */
+  const linesHold = (lines: SQL): SQL =>
+    sql`exists (select 1 from jsonb_array_elements(${lines}) as line where (line->>'itemId')::uuid in (${itemIds}))`;
+  const withKit = db
+    .select({ id: tripKits.tripId })
+    .from(tripKits)
+    .where(linesHold(sql`${tripKits.lines}`));
   const inStandingOptimum: SQL = sql`not exists (select 1 from ${tripKits} where ${tripKits.tripId} = ${tripPlans.tripId})
     and ${tripPlans.createdAt} = (select max(latest.created_at) from ${tripPlans} as latest where latest.trip_id = ${tripPlans.tripId})
-    and exists (select 1 from jsonb_array_elements(${tripPlans.result}->'kit'->'lines') as line where (line->>'itemId')::uuid in (${itemIds}))`;
+    and ${linesHold(sql`${tripPlans.result}->'kit'->'lines'`)}`;
   const withOptimum = db.select({ id: tripPlans.tripId }).from(tripPlans).where(inStandingOptimum);
   await db
     .update(trips)

@@ -54,27 +54,28 @@ const nameIn = (lines: readonly PlanKitLine[]) => {
 export const hopsOf = (evaluation: Pick<KitEvaluation, 'schedule'>, lines: readonly PlanKitLine[]): PackingHop[] => {
   const name = nameIn(lines);
   const counts = new Map(lines.map((line) => [line.itemId, line.count]));
-  const hops = new Map<string, PackingHop & { fromIds: Set<string>; toIds: Set<string> }>();
+  const hops = new Map<
+    string,
+    { session: ChargeSessionJson; kind: PackingHop['kind']; fromIds: Set<string>; toIds: Set<string> }
+  >();
   for (const s of evaluation.schedule) {
     // A radio topped up from a pack and run live from it takes the same hop: one line, the earlier in the flow. The
     // units of one item take the same hop too (one lead, moved from unit to unit): one line naming the units.
     const key = [itemIdOf(s.fromId), itemIdOf(s.toId), s.converterItemId ?? '', ...s.leadItemIds].join('|');
-    const known = hops.get(key);
-    const fromIds = new Set([...(known?.fromIds ?? []), s.fromId]);
-    const toIds = new Set([...(known?.toIds ?? []), s.toId]);
-    const kind = known && hopOrder[known.kind] <= hopOrder[s.kind] ? known.kind : s.kind;
-    hops.set(key, {
+    const hop = hops.get(key) ?? { session: s, kind: s.kind, fromIds: new Set<string>(), toIds: new Set<string>() };
+    if (hopOrder[s.kind] < hopOrder[hop.kind]) hop.kind = s.kind;
+    hop.fromIds.add(s.fromId);
+    hop.toIds.add(s.toId);
+    hops.set(key, hop);
+  }
+  return [...hops.values()]
+    .map(({ session: s, kind, fromIds, toIds }) => ({
       from: unitsName(s.fromName, [...fromIds], counts),
       to: unitsName(s.toName, [...toIds], counts),
       via: s.converterItemId ? name(s.converterItemId) : null,
       leads: s.leadItemIds.map(name),
       kind,
-      fromIds,
-      toIds,
-    });
-  }
-  return [...hops.values()]
-    .map(({ fromIds: _from, toIds: _to, ...hop }) => hop)
+    }))
     .sort((a, b) => hopOrder[a.kind] - hopOrder[b.kind]);
 };
 

@@ -7,7 +7,7 @@
  * The case is the first of a sweep (3–10 nights, 0–1,000 W/m², 5–20 W panels, 15–60 Wh radios, 6–20 Wh a day,
  * 0.03–0.3 A slow boosts): the simulation alone broke 46 of its 4,605 kits, all with the 0.03 A boost.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import type { KitEntry, TripDevice } from '../schemas/kit.js';
 import { tripSolarInputSchema } from '../schemas/trip-solar.js';
 import { isKitFeasible } from '../simulation/simulate-kit.js';
@@ -16,6 +16,19 @@ import { syntheticTripSolar } from '../testing/synthetic-solar.js';
 import { optimiseKit } from '../optimisation/optimise.js';
 import { planningContext, type PlanningContext } from './build-problem.js';
 import type { PlanningGear, PlanningInput } from './planning-input.js';
+
+/** Simulations the judge runs (the module's own, counted). */
+const simulations = vi.hoisted(() => ({ count: 0 }));
+vi.mock('../simulation/simulate-kit.js', async (importOriginal) => {
+  const original = await importOriginal<typeof import('../simulation/simulate-kit.js')>();
+  return {
+    ...original,
+    kitFeasibility: (...args: Parameters<typeof original.kitFeasibility>) => {
+      simulations.count++;
+      return original.kitFeasibility(...args);
+    },
+  };
+});
 
 const solar = syntheticTripSolar({ nights: 3, peakWm2: 1000, cloudyShare: 0.3 });
 const devices: TripDevice[] = [
@@ -101,5 +114,45 @@ describe('a converter left home (known gap (4))', () => {
     const counts = new Map(answer.kit.lines.map((l) => [l.itemId, l.count]));
     expect(counts.has('slow')).toBe(false);
     expect(context.simulate(counts).verdict.status).not.toBe('runs-dry');
+  });
+
+  it('two slow boosts held: the judge still finds the kit with the fast one alone', () => {
+    const slower = testBoostConverter({ maxOutputA: 0.05, efficiency: 0.93 });
+    const withTwo = new Map([...withSlow, ['slower', 1]]);
+    const twoContext = planningContext(
+      { ...input, gear: [...gear, { itemId: 'slower', name: 'Slower boost', countOwned: 1, massG: 30, spec: slower }] },
+      {},
+      sameSun as unknown as PlanningContext,
+    );
+    expect(twoContext.simulate(withTwo).verdict.status).toBe('runs-dry');
+    const verdict = twoContext.judge(withTwo);
+    expect(verdict.feasible).toBe(true);
+    expect(twoContext.simulate(verdict.works ?? withTwo).verdict.status).not.toBe('runs-dry');
+  });
+
+  it('a kit that runs dry for want of energy, holding a dozen spare boosts, costs the judge three simulations', () => {
+    // Twelve boosts, each slower and more efficient than the last: eleven are spare. Trying every set of them left home
+    // took 2^11 simulations; the judge tries the kit as packed, without the most efficient one, and without all.
+    const boosts = Array.from({ length: 12 }, (_, i) => ({
+      itemId: `boost-${i}`,
+      name: `Boost ${i}`,
+      countOwned: 1,
+      massG: 30,
+      spec: testBoostConverter({ maxOutputA: 1 - i * 0.08, efficiency: 0.7 + i * 0.02 }),
+    }));
+    const dozen = planningContext(
+      { ...input, gear: [...gear.filter((g) => g.itemId !== 'fast' && g.itemId !== 'slow'), ...boosts] },
+      {},
+      sameSun as unknown as PlanningContext,
+    );
+    // No panel: the bank alone cannot carry the radio for three nights, whatever converter charges it.
+    const kit = new Map<string, number>([
+      ['bank', 1],
+      ['lead', 1],
+      ...boosts.map((b) => [b.itemId, 1] as [string, number]),
+    ]);
+    simulations.count = 0;
+    expect(dozen.judge(kit).feasible).toBe(false);
+    expect(simulations.count).toBe(3);
   });
 });

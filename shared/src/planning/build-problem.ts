@@ -517,11 +517,11 @@ export function planningContext(
   /**
    * The kits a kit that runs dry as packed is tried as next, lightest change first: with its most efficient spare
    * converter left home (the slow one that shadows a fast path), then with every spare converter left home. So a kit
-   * that works as packed still works with a spare added that is more efficient than its own spares (the gap's slow boost), and
-   * one that works with every spare home, with any spare added (a converter that makes another spare is itself beaten
-   * by a faster, lossier one, which makes the other spare already). Two tries at most, where trying every set of spares left home took 2^s simulations
-   * of a kit with s of them: a 200-item locker's grown repairs, with a dozen spare converters and 0.5 s a simulation,
-   * held a search for minutes.
+   * that works as packed still works with a spare added that is more efficient than its own spares (the gap's slow
+   * boost), and one that works with every spare home, with any spare added (a converter that makes another spare is
+   * itself beaten by a faster, lossier one, which makes the other spare already). Two tries at most, where trying every
+   * set of spares left home took 2^s simulations of a kit with s of them: a 200-item locker's grown repairs, with a
+   * dozen spare converters and 0.5 s a simulation, held a search for minutes.
    */
   const leaveHomeTries = (counts: KitCounts): KitCounts[] => {
     const spares = [...counts.keys()].filter((id) => (counts.get(id) ?? 0) > 0 && spareConverter(id, counts));

@@ -436,6 +436,26 @@ describe('plans', () => {
     }
   });
 
+  it('checks a kit with a tiny time limit: the verdict, and the shaves left untried counted (not a 422)', async () => {
+    const { input } = await t.app.get(PlanningInputBuilder).forTrip(route.trip.id);
+    const whole = input.gear.map((g) => ({ itemId: g.itemId, count: g.countOwned }));
+    const solver = solverWith({ PLAN_TIME_LIMIT_MS: '1' }, defaultPlanWorkerFile);
+    const roomy = solverWith({}, defaultPlanWorkerFile);
+    try {
+      const { value: rushed } = await solver.check(input, whole);
+      const { value: full } = await roomy.check(input, whole);
+      expect(rushed.evaluation.verdict).toEqual(full.evaluation.verdict);
+      expect(full.untriedChanges).toBe(0);
+      expect(full.shaves.length).toBeGreaterThan(0);
+      // The simulation of the whole locker alone outlasts 1 ms, so no change was tried in time.
+      expect(rushed.shaves).toEqual([]);
+      expect(rushed.untriedChanges).toBeGreaterThanOrEqual(full.shaves.length);
+    } finally {
+      await solver.onModuleDestroy();
+      await roomy.onModuleDestroy();
+    }
+  });
+
   it('refuses a solve with 503 and Retry-After when every thread and queue place is taken, and serves other requests meanwhile', async () => {
     // An app of its own with one thread and one queue place, whose worker holds each task 2 s before solving: two
     // whole plans fill them however fast the engine is (the real worker now solves this trip in well under a second).

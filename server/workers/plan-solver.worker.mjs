@@ -39,7 +39,8 @@ function run(task) {
     }
     case 'check':
       // A party's check carries who carries what (checkKit splits the kit with the context it already built).
-      return checkKit(task.input, task.selection);
+      // The shaves are judged, biggest saving first, until the request's deadline; the rest are counted as untried.
+      return checkKit(task.input, task.selection, { deadlineMs: task.deadlineMs, now: Date.now });
     case 'evaluate': {
       const context = planningContext(task.input);
       const counts = new Map(task.selection.map((line) => [line.itemId, line.count]));

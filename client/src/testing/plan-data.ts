@@ -367,7 +367,11 @@ export const buildPlanRecord = (
   });
 
 /** What the check route answers for these lines; without a panel the fixture runs dry on day 3. */
-export const buildCheckResult = (lines: PlanKitLine[], shaves: CheckResult['shaves'] = []): CheckResult => {
+export const buildCheckResult = (
+  lines: PlanKitLine[],
+  shaves: CheckResult['shaves'] = [],
+  untriedChanges = 0,
+): CheckResult => {
   const hasPanel = lines.some((line) => line.kind === 'panel');
   const evaluation = hasPanel
     ? buildEvaluation({ lines })
@@ -377,7 +381,7 @@ export const buildCheckResult = (lines: PlanKitLine[], shaves: CheckResult['shav
         dryFromDayIndex: 2,
         bindingSkyId: 'expected',
       });
-  return checkResultSchema.parse({ kit: buildPlanKit(lines), evaluation, shaves });
+  return checkResultSchema.parse({ kit: buildPlanKit(lines), evaluation, shaves, untriedChanges });
 };
 
 export const buildChosenKit = (lines: PlanKitLine[] = optimumLines(), overrides: Partial<ChosenKit> = {}): ChosenKit =>

@@ -73,7 +73,9 @@ export class PlanSolver implements OnModuleDestroy {
 
   /** Simulates a hand-picked kit and finds the changes that shave grams. */
   check(input: PlanningInput, selection: KitSelection): Promise<SolverRun<PlanSolverValues['check']>> {
-    return this.run<PlanSolverValues['check']>({ kind: 'check', input, selection });
+    // The shaves are looked for within a plan's time limit, so a large kit answers with those found, not a 422.
+    const deadlineMs = Date.now() + this.config.timeLimitMs;
+    return this.run<PlanSolverValues['check']>({ kind: 'check', input, selection, deadlineMs });
   }
 
   /** Simulates a kit (the chosen kit): its lines with grams and its evaluation. */

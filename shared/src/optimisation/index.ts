@@ -41,6 +41,6 @@ export {
   type SearchStep,
 } from './kit-search.js';
 export { optimiseKit, findSwaps, defaultSwapCount } from './optimise.js';
-export { shaveGrams } from './shave-grams.js';
+export { shaveGrams, type ShaveAnswer, type ShaveLimits } from './shave-grams.js';
 export { gramPrice, freeSteps } from './gram-price.js';
 export { exhaustiveLightestKit, type ExhaustiveAnswer, type ExhaustiveOptions } from './oracle.js';

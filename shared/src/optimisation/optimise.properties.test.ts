@@ -228,7 +228,8 @@ describe('answers', () => {
         const judge = syntheticJudge(world);
         const locker = new Map(problem.candidates.map((c) => [c.itemId, c.ownedCount]));
         const baseG = kitMassG(locker, problem.candidates);
-        const shaves = shaveGrams(problem.candidates, judge, locker);
+        const { shaves, untriedChanges } = shaveGrams(problem.candidates, judge, locker);
+        expect(untriedChanges).toBe(0);
         shavesSeen += shaves.length;
         let lastG = -Infinity;
         for (const s of shaves) {

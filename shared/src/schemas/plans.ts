@@ -277,6 +277,8 @@ export const checkResultSchema = z.object({
   kit: planKitSchema,
   evaluation: kitEvaluationSchema,
   shaves: z.array(kitShaveSchema),
+  /** Changes left untried when the check ran out of time (the biggest savings are tried first); 0 when all were. */
+  untriedChanges: z.number().int().min(0),
 });
 export type CheckResult = z.infer<typeof checkResultSchema>;
 

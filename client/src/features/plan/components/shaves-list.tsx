@@ -5,35 +5,57 @@ type Shave = CheckResult['shaves'][number];
 
 export interface ShavesListProps {
   shaves: readonly Shave[];
+  /** Changes the check had no time to try (the biggest savings are tried first). */
+  untriedChanges?: number;
   /** Applies a shave to the kit being tried. */
   onApply: (change: Shave['change']) => void;
 }
 
 /** Changes that shave grams from a hand-picked kit and still keep every device charged, lightest first. */
-export function ShavesList({ shaves, onApply }: ShavesListProps) {
+export function ShavesList({ shaves, untriedChanges = 0, onApply }: ShavesListProps) {
+  const untried =
+    untriedChanges > 0 ? (
+      <p className="text-sm text-scree-700">
+        The planner ran out of time after trying the changes that save the most:{' '}
+        {untriedChanges.toLocaleString('en-GB')} smaller {untriedChanges === 1 ? 'change was' : 'changes were'} not
+        tried. Try a smaller kit to see them.
+      </p>
+    ) : null;
   if (shaves.length === 0)
-    return <p className="text-scree-700">Nothing can come out of this kit without a device going short.</p>;
+    return (
+      <div className="flex flex-col gap-2">
+        <p className="text-scree-700">
+          {untriedChanges > 0
+            ? 'None of the changes tried keeps every device charged.'
+            : 'Nothing can come out of this kit without a device going short.'}
+        </p>
+        {untried}
+      </div>
+    );
   return (
-    <ul className="flex flex-col gap-2">
-      {shaves.map((shave) => (
-        <li
-          key={JSON.stringify(shave.change)}
-          className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-white px-3 py-2 shadow-card"
-        >
-          <p className="min-w-0 flex-1 text-scree-900">
-            {shave.text}{' '}
-            <span className="text-sm whitespace-nowrap text-scree-600">({formatGrams(shave.massG)} in all)</span>
-          </p>
-          <button
-            type="button"
-            onClick={() => onApply(shave.change)}
-            aria-label={`Try it: ${shave.text}`}
-            className="min-h-9 rounded-lg border-2 border-scree-300 px-3 text-sm font-medium hover:border-scree-500"
+    <div className="flex flex-col gap-2">
+      <ul className="flex flex-col gap-2">
+        {shaves.map((shave) => (
+          <li
+            key={JSON.stringify(shave.change)}
+            className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-white px-3 py-2 shadow-card"
           >
-            Try it
-          </button>
-        </li>
-      ))}
-    </ul>
+            <p className="min-w-0 flex-1 text-scree-900">
+              {shave.text}{' '}
+              <span className="text-sm whitespace-nowrap text-scree-600">({formatGrams(shave.massG)} in all)</span>
+            </p>
+            <button
+              type="button"
+              onClick={() => onApply(shave.change)}
+              aria-label={`Try it: ${shave.text}`}
+              className="min-h-9 rounded-lg border-2 border-scree-300 px-3 text-sm font-medium hover:border-scree-500"
+            >
+              Try it
+            </button>
+          </li>
+        ))}
+      </ul>
+      {untried}
+    </div>
   );
 }

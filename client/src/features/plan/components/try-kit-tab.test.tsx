@@ -73,6 +73,27 @@ describe('TryKitTab', () => {
     expect(await screen.findByText(/Nothing can come out of this kit/)).toBeInTheDocument();
   });
 
+  it('says how many changes went untried when the check ran out of time', async () => {
+    const shave = {
+      change: { kind: 'remove' as const, itemId: fixtureGear.smallBank.itemId },
+      text: `Leave one ${fixtureGear.smallBank.name} at home: saves 105 g and still keeps every device charged.`,
+      savedG: 105,
+      massG: 788,
+    };
+    installPlanApi({
+      chosen: buildChosenKit(),
+      check: (kit) =>
+        kit.some((l) => l.itemId === shave.change.itemId)
+          ? buildCheckResult(linesFor(kit), [shave], 1_240)
+          : buildCheckResult(linesFor(kit), [], 1),
+    });
+    const { user } = renderTryKit();
+    expect(await screen.findByText(/1,240 smaller changes were not tried/, {}, { timeout: 4000 })).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: `Try it: ${shave.text}` }));
+    expect(await screen.findByText('None of the changes tried keeps every device charged.')).toBeInTheDocument();
+    expect(screen.getByText(/1 smaller change was not tried/)).toBeInTheDocument();
+  });
+
   it('stores a hand-picked kit as the chosen kit', async () => {
     const api = installPlanApi({ chosen: buildChosenKit() });
     const { user } = renderTryKit();

@@ -73,7 +73,7 @@ function CheckAnswer({
       </section>
       <DayStripSection evaluation={result.evaluation} />
       <PlanSection title="Shave grams" intro="Changes that make this kit lighter and still keep every device charged.">
-        <ShavesList shaves={result.shaves} onApply={onShave} />
+        <ShavesList shaves={result.shaves} untriedChanges={result.untriedChanges} onApply={onShave} />
       </PlanSection>
       <PlanSection title="Ledger" intro="Each day's energy, in Wh.">
         <LedgerTable ledgers={result.evaluation.ledgers} bindingSkyId={result.evaluation.bindingSkyId} />

@@ -16,9 +16,9 @@ export function ShavesList({ shaves, untriedChanges = 0, onApply }: ShavesListPr
   const untried =
     untriedChanges > 0 ? (
       <p className="text-sm text-scree-700">
-        The planner ran out of time after trying the changes that save the most:{' '}
-        {untriedChanges.toLocaleString('en-GB')} smaller {untriedChanges === 1 ? 'change was' : 'changes were'} not
-        tried. Try a smaller kit to see them.
+        The planner ran out of time: {untriedChanges.toLocaleString('en-GB')}{' '}
+        {untriedChanges === 1 ? 'change was' : 'changes were'} not tried (it tries the biggest savings first). Pick
+        fewer items to see them all.
       </p>
     ) : null;
   if (shaves.length === 0)
@@ -26,7 +26,7 @@ export function ShavesList({ shaves, untriedChanges = 0, onApply }: ShavesListPr
       <div className="flex flex-col gap-2">
         <p className="text-scree-700">
           {untriedChanges > 0
-            ? 'None of the changes tried keeps every device charged.'
+            ? 'No change tried in time keeps every device charged.'
             : 'Nothing can come out of this kit without a device going short.'}
         </p>
         {untried}

@@ -13,6 +13,14 @@ const renderTryKit = (props: { canSolve?: boolean; canChooseKit?: boolean } = {}
 
 const countOf = (name: string) => screen.getByRole('spinbutton', { name });
 
+/** The check's one shave while the small bank is in the kit: leave it home. */
+const smallBankShave = {
+  change: { kind: 'remove' as const, itemId: fixtureGear.smallBank.itemId },
+  text: `Leave one ${fixtureGear.smallBank.name} at home: saves 105 g and still keeps every device charged.`,
+  savedG: 105,
+  massG: 788,
+};
+
 describe('TryKitTab', () => {
   it('starts from the chosen kit and checks it once the steppers rest', async () => {
     const api = installPlanApi({ chosen: buildChosenKit() });
@@ -57,12 +65,7 @@ describe('TryKitTab', () => {
   });
 
   it('lists the changes that shave grams and tries one on click', async () => {
-    const shave = {
-      change: { kind: 'remove' as const, itemId: fixtureGear.smallBank.itemId },
-      text: `Leave one ${fixtureGear.smallBank.name} at home: saves 105 g and still keeps every device charged.`,
-      savedG: 105,
-      massG: 788,
-    };
+    const shave = smallBankShave;
     installPlanApi({
       chosen: buildChosenKit(),
       check: (kit) => buildCheckResult(linesFor(kit), kit.some((l) => l.itemId === shave.change.itemId) ? [shave] : []),
@@ -74,12 +77,7 @@ describe('TryKitTab', () => {
   });
 
   it('says how many changes went untried when the check ran out of time', async () => {
-    const shave = {
-      change: { kind: 'remove' as const, itemId: fixtureGear.smallBank.itemId },
-      text: `Leave one ${fixtureGear.smallBank.name} at home: saves 105 g and still keeps every device charged.`,
-      savedG: 105,
-      massG: 788,
-    };
+    const shave = smallBankShave;
     installPlanApi({
       chosen: buildChosenKit(),
       check: (kit) =>

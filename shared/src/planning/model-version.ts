@@ -4,6 +4,7 @@
  * different answer: 2 — camp top-ups in rounds by hours held and harvest tiers in the simulation's dispatch, and a
  * core of the locker searched first on large lockers; 3 — the units of one item drawn together, and a device charged no
  * faster than the fastest path of any one store (one socket, one cable at a time), not the stores' rates added up; and
- * a kit judged as working when it works with a shadowed converter left home.
+ * a kit judged as working when it works with a shadowed converter left home; 4 — a kit that runs dry as packed tried
+ * without its most efficient spare converter and without every spare, not with every set of spares left home.
  */
-export const planModelVersion = 'gramwatt-plan-3';
+export const planModelVersion = 'gramwatt-plan-4';

@@ -7,7 +7,7 @@ import type { CheckResult, KitEvaluation, KitSelection, PlanKit, PlanningInput, 
 export type PlanSolverTask =
   /** A whole plan; the worker's budget is `deadlineMs` (epoch ms, this process's clock) minus its start. */
   | { kind: 'plan'; input: PlanningInput; deadlineMs: number; withExtras: boolean }
-  /** A hand-picked kit: verdict, ledger and the changes that shave grams, looked for until `deadlineMs` (as a plan's). */
+  /** A hand-picked kit: verdict, ledger and the changes that shave grams, looked for until `deadlineMs` (epoch ms). */
   | { kind: 'check'; input: PlanningInput; selection: KitSelection; deadlineMs: number }
   /** A kit's lines and simulation only (the chosen kit). */
   | { kind: 'evaluate'; input: PlanningInput; selection: KitSelection };

@@ -73,8 +73,8 @@ export class PlanSolver implements OnModuleDestroy {
 
   /** Simulates a hand-picked kit and finds the changes that shave grams. */
   check(input: PlanningInput, selection: KitSelection): Promise<SolverRun<PlanSolverValues['check']>> {
-    // The shaves are looked for within a plan's time limit, so a large kit answers with those found, not a 422.
-    const deadlineMs = Date.now() + this.config.timeLimitMs;
+    // The shaves are looked for within the check's own limit, so a large kit answers with those found, not a 422.
+    const deadlineMs = Date.now() + this.config.checkTimeLimitMs;
     return this.run<PlanSolverValues['check']>({ kind: 'check', input, selection, deadlineMs });
   }
 

@@ -4,11 +4,12 @@ import { defaultPlanWorkerFile } from './plan-solver';
 import { defaultPlanWorkerThreads, readPlansConfig } from './plans.config';
 
 describe('plans config', () => {
-  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 10 s grace, retry after 5 s', () => {
+  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 5 s of shaves per check, 10 s grace, retry after 5 s', () => {
     expect(readPlansConfig({})).toEqual({
       workerThreads: defaultPlanWorkerThreads,
       queueMax: 8,
       timeLimitMs: 20_000,
+      checkTimeLimitMs: 5_000,
       stopGraceMs: 10_000,
       retryAfterS: 5,
     });
@@ -21,11 +22,21 @@ describe('plans config', () => {
         PLAN_WORKER_THREADS: '3',
         PLAN_QUEUE_MAX: '0',
         PLAN_TIME_LIMIT_MS: '500',
+        PLAN_CHECK_TIME_LIMIT_MS: '300',
         PLAN_STOP_GRACE_MS: '0',
         PLAN_RETRY_AFTER_S: '30',
       }),
-    ).toEqual({ workerThreads: 3, queueMax: 0, timeLimitMs: 500, stopGraceMs: 0, retryAfterS: 30 });
+    ).toEqual({
+      workerThreads: 3,
+      queueMax: 0,
+      timeLimitMs: 500,
+      checkTimeLimitMs: 300,
+      stopGraceMs: 0,
+      retryAfterS: 30,
+    });
     expect(readPlansConfig({ PLAN_QUEUE_MAX: ' ' }).queueMax).toBe(8);
+    // A check never looks for shaves longer than a plan may take.
+    expect(readPlansConfig({ PLAN_TIME_LIMIT_MS: '2000' }).checkTimeLimitMs).toBe(2_000);
   });
 
   it.each([
@@ -34,6 +45,7 @@ describe('plans config', () => {
     ['PLAN_QUEUE_MAX', '-1'],
     ['PLAN_TIME_LIMIT_MS', '0'],
     ['PLAN_TIME_LIMIT_MS', '1.5'],
+    ['PLAN_CHECK_TIME_LIMIT_MS', '0'],
     ['PLAN_RETRY_AFTER_S', '0'],
   ])('refuses %s=%s at boot, naming the variable', (name, value) => {
     expect(() => readPlansConfig({ [name]: value })).toThrow(

@@ -13,6 +13,12 @@ export const defaultPlanQueueMax = 8;
 /** Default time for one whole plan (optimum, swaps, gram prices), ms, counted from the request's arrival in the queue. */
 export const defaultPlanTimeLimitMs = 20_000;
 /**
+ * Default time a hand check looks for changes that shave grams, ms, from its arrival (at most the plan limit): the
+ * Try a kit tab checks on each pause of its steppers, so a large kit answers with the biggest savings in a few seconds
+ * rather than hold a thread for the whole plan limit (a kit of 200 items has 200 removals at about 0.4 s each).
+ */
+export const defaultPlanCheckTimeLimitMs = 5_000;
+/**
  * Default extra time past the limit before a solve is stopped outright, ms: the optimiser stops itself at the
  * limit, but judging the whole locker and shaving it to a kit happen before the first time check.
  */
@@ -36,6 +42,9 @@ const plansEnvSchema = z.object({
   PLAN_TIME_LIMIT_MS: count('PLAN_TIME_LIMIT_MS', 1)
     .max(600_000, { error: 'PLAN_TIME_LIMIT_MS may be at most 600000' })
     .default(defaultPlanTimeLimitMs),
+  PLAN_CHECK_TIME_LIMIT_MS: count('PLAN_CHECK_TIME_LIMIT_MS', 1)
+    .max(600_000, { error: 'PLAN_CHECK_TIME_LIMIT_MS may be at most 600000' })
+    .default(defaultPlanCheckTimeLimitMs),
   PLAN_STOP_GRACE_MS: count('PLAN_STOP_GRACE_MS', 0)
     .max(600_000, { error: 'PLAN_STOP_GRACE_MS may be at most 600000' })
     .default(defaultPlanStopGraceMs),
@@ -52,6 +61,8 @@ export interface PlansConfig {
   queueMax: number;
   /** Time for one plan, from queueing to answer, ms (PLAN_TIME_LIMIT_MS, default 20000). */
   timeLimitMs: number;
+  /** Time a hand check looks for shaves, from queueing, ms; at most `timeLimitMs` (PLAN_CHECK_TIME_LIMIT_MS, default 5000). */
+  checkTimeLimitMs: number;
   /** Extra time before a solve past its limit is stopped and answered 422, ms (PLAN_STOP_GRACE_MS, default 10000). */
   stopGraceMs: number;
   /** `Retry-After` of the 503 when the solver is full, s (PLAN_RETRY_AFTER_S, default 5). */
@@ -67,6 +78,7 @@ export function readPlansConfig(env: Env): PlansConfig {
     workerThreads: parsed.PLAN_WORKER_THREADS,
     queueMax: parsed.PLAN_QUEUE_MAX,
     timeLimitMs: parsed.PLAN_TIME_LIMIT_MS,
+    checkTimeLimitMs: Math.min(parsed.PLAN_CHECK_TIME_LIMIT_MS, parsed.PLAN_TIME_LIMIT_MS),
     stopGraceMs: parsed.PLAN_STOP_GRACE_MS,
     retryAfterS: parsed.PLAN_RETRY_AFTER_S,
   };

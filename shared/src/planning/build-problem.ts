@@ -6,7 +6,6 @@ import type {
   HarvestGroup,
   KitCandidate,
   KitCounts,
-  JudgeVerdict,
   KitJudge,
   OptimisationProblem,
   PanelCoefficients,
@@ -515,7 +514,7 @@ export function planningContext(
     return false;
   };
   /**
-   * The kits a kit that runs dry as packed is tried as next, lightest change first: with its most efficient spare
+   * The kits a kit that runs dry as packed is tried as next, the smaller change first: with its most efficient spare
    * converter left home (the slow one that shadows a fast path), then with every spare converter left home. So a kit
    * that works as packed still works with a spare added that is more efficient than its own spares (the gap's slow
    * boost), and one that works with every spare home, with any spare added (a converter that makes another spare is
@@ -546,7 +545,7 @@ export function planningContext(
    * hopeless. Only kits that run dry as packed and hold such a pair pay for the extra runs; the verdict names the
    * lighter kit that works (`works`), which the search offers instead.
    */
-  const judgeKit = (counts: KitCounts): JudgeVerdict => {
+  const judge: KitJudge = (counts) => {
     /** The kit's margin when it lasts, else undefined (and its dry sky is run first next time). */
     const marginIfItLasts = (kit: KitCounts): number | undefined => {
       const answer = kitFeasibility(simulationInput(kit), lastDrySkyIndex);
@@ -562,7 +561,6 @@ export function planningContext(
     }
     return { feasible: false };
   };
-  const judge: KitJudge = judgeKit;
   return { input, solarOptions, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
 }
 

@@ -479,8 +479,21 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
      * hundreds).
      */
     const split = (id: number, ways: readonly Raise[]): void => {
-      const unmet = ways.map((way) => way.filter(([i, k]) => (lb[i] ?? 0) < k)).filter((way) => way.length > 0);
-      const raises: readonly Raise[] = unmet.some((way) => way.length > 1) ? [[mostRaised(unmet, massG)]] : unmet;
+      // Each way's part the floor does not meet yet. Most ways raise one item: kept as they are, not copied (copying
+      // every way of every split was the largest share of what a plan allocated).
+      const unmet: Raise[] = [];
+      let severalItems = false;
+      for (const way of ways) {
+        if (way.length === 1) {
+          const [i, k] = way[0] as readonly [number, number];
+          if ((lb[i] as number) < k) unmet.push(way);
+          continue;
+        }
+        const part = way.filter(([i, k]) => (lb[i] as number) < k);
+        if (part.length > 1) severalItems = true;
+        if (part.length > 0) unmet.push(part);
+      }
+      const raises: readonly Raise[] = severalItems ? [[mostRaised(unmet, massG)]] : unmet;
       siblingsUb.set(ub);
       const floorG = store.floorG[id] as number;
       const units = store.units[id] as number;

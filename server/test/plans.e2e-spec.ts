@@ -456,6 +456,27 @@ describe('plans', () => {
     }
   });
 
+  it('keeps a solver thread warm across a pause shorter than PLAN_THREAD_IDLE_MS, and ends it after a longer one', async () => {
+    const { input } = await t.app
+      .get(PlanningInputBuilder)
+      .forTrip(route.trip.id, { itemIds: [route.gear[0]?.id ?? ''] });
+    const pauseMs = 1_500;
+    const shortIdle = solverWith({ PLAN_WORKER_THREADS: '1', PLAN_THREAD_IDLE_MS: '1000' }, defaultPlanWorkerFile);
+    const longIdle = solverWith({ PLAN_WORKER_THREADS: '1' }, defaultPlanWorkerFile);
+    const pause = () => new Promise((done) => setTimeout(done, pauseMs));
+    try {
+      const [shortFirst, longFirst] = await Promise.all([shortIdle.plan(input, false), longIdle.plan(input, false)]);
+      await pause();
+      const [shortAfter, longAfter] = await Promise.all([shortIdle.plan(input, false), longIdle.plan(input, false)]);
+      // The default keeps the thread (and what it compiled); an idle time shorter than the pause started a new one.
+      expect(longAfter.threadId).toBe(longFirst.threadId);
+      expect(shortAfter.threadId).not.toBe(shortFirst.threadId);
+    } finally {
+      await shortIdle.onModuleDestroy();
+      await longIdle.onModuleDestroy();
+    }
+  });
+
   it('refuses a solve with 503 and Retry-After when every thread and queue place is taken, and serves other requests meanwhile', async () => {
     // An app of its own with one thread and one queue place, whose worker holds each task 2 s before solving: two
     // whole plans fill them however fast the engine is (the real worker now solves this trip in well under a second).

@@ -56,10 +56,10 @@ export class PlanSolver implements OnModuleDestroy {
       // parent's loader flags (`--conditions development` in tests, `-r @swc-node/register` in dev) would point it at
       // TypeScript sources or load a compiler it does not need.
       execArgv: [],
-      // Threads start on the first solve, and end after a minute idle: a server that never plans holds none.
+      // Threads start on the first solve and end after `threadIdleMs` idle: a server that never plans holds none.
       minThreads: 0,
       maxThreads: this.config.workerThreads,
-      idleTimeout: 60_000,
+      idleTimeout: this.config.threadIdleMs,
       // Admission is counted here (see `admit`), so the pool's own queue never refuses.
       maxQueue: Infinity,
     });

@@ -4,13 +4,14 @@ import { defaultPlanWorkerFile } from './plan-solver';
 import { defaultPlanWorkerThreads, readPlansConfig } from './plans.config';
 
 describe('plans config', () => {
-  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 5 s of shaves per check, 10 s grace, retry after 5 s', () => {
+  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 5 s of shaves per check, 10 s grace, threads kept 15 min idle, retry after 5 s', () => {
     expect(readPlansConfig({})).toEqual({
       workerThreads: defaultPlanWorkerThreads,
       queueMax: 8,
       timeLimitMs: 20_000,
       checkTimeLimitMs: 5_000,
       stopGraceMs: 10_000,
+      threadIdleMs: 900_000,
       retryAfterS: 5,
     });
     expect(defaultPlanWorkerThreads).toBeGreaterThanOrEqual(1);
@@ -24,6 +25,7 @@ describe('plans config', () => {
         PLAN_TIME_LIMIT_MS: '500',
         PLAN_CHECK_TIME_LIMIT_MS: '300',
         PLAN_STOP_GRACE_MS: '0',
+        PLAN_THREAD_IDLE_MS: '60000',
         PLAN_RETRY_AFTER_S: '30',
       }),
     ).toEqual({
@@ -32,6 +34,7 @@ describe('plans config', () => {
       timeLimitMs: 500,
       checkTimeLimitMs: 300,
       stopGraceMs: 0,
+      threadIdleMs: 60_000,
       retryAfterS: 30,
     });
     expect(readPlansConfig({ PLAN_QUEUE_MAX: ' ' }).queueMax).toBe(8);
@@ -46,6 +49,7 @@ describe('plans config', () => {
     ['PLAN_TIME_LIMIT_MS', '0'],
     ['PLAN_TIME_LIMIT_MS', '1.5'],
     ['PLAN_CHECK_TIME_LIMIT_MS', '0'],
+    ['PLAN_THREAD_IDLE_MS', '999'],
     ['PLAN_RETRY_AFTER_S', '0'],
   ])('refuses %s=%s at boot, naming the variable', (name, value) => {
     expect(() => readPlansConfig({ [name]: value })).toThrow(

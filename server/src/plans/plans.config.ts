@@ -23,6 +23,13 @@ export const defaultPlanCheckTimeLimitMs = 5_000;
  * limit, but judging the whole locker and shaving it to a kit happen before the first time check.
  */
 export const defaultPlanStopGraceMs = 10_000;
+/**
+ * Default time a solver thread idles before it is ended, ms. A new thread compiles the engine again: on the demo trip a
+ * plan over HTTP took 1.4–1.8 s on a fresh thread against 0.3–0.6 s on a warm one (measured 2026-12-04), so a thread
+ * ended after a minute idle, as first built, made every plan after a pause of thought a cold one. A planning session
+ * (plan, try a kit, plan again) stays on warm threads; a server that stops planning frees them.
+ */
+export const defaultPlanThreadIdleMs = 15 * 60_000;
 /** Default `Retry-After` of a 503 when every thread and queue place is taken, seconds (about one typical solve). */
 export const defaultPlanRetryAfterS = 5;
 
@@ -48,6 +55,9 @@ const plansEnvSchema = z.object({
   PLAN_STOP_GRACE_MS: count('PLAN_STOP_GRACE_MS', 0)
     .max(600_000, { error: 'PLAN_STOP_GRACE_MS may be at most 600000' })
     .default(defaultPlanStopGraceMs),
+  PLAN_THREAD_IDLE_MS: count('PLAN_THREAD_IDLE_MS', 1_000)
+    .max(86_400_000, { error: 'PLAN_THREAD_IDLE_MS may be at most 86400000' })
+    .default(defaultPlanThreadIdleMs),
   PLAN_RETRY_AFTER_S: count('PLAN_RETRY_AFTER_S', 1)
     .max(3600, { error: 'PLAN_RETRY_AFTER_S may be at most 3600' })
     .default(defaultPlanRetryAfterS),
@@ -65,6 +75,8 @@ export interface PlansConfig {
   checkTimeLimitMs: number;
   /** Extra time before a solve past its limit is stopped and answered 422, ms (PLAN_STOP_GRACE_MS, default 10000). */
   stopGraceMs: number;
+  /** Idle time after which a solver thread is ended, ms (PLAN_THREAD_IDLE_MS, default 900000: 15 minutes). */
+  threadIdleMs: number;
   /** `Retry-After` of the 503 when the solver is full, s (PLAN_RETRY_AFTER_S, default 5). */
   retryAfterS: number;
 }
@@ -80,6 +92,7 @@ export function readPlansConfig(env: Env): PlansConfig {
     timeLimitMs: parsed.PLAN_TIME_LIMIT_MS,
     checkTimeLimitMs: Math.min(parsed.PLAN_CHECK_TIME_LIMIT_MS, parsed.PLAN_TIME_LIMIT_MS),
     stopGraceMs: parsed.PLAN_STOP_GRACE_MS,
+    threadIdleMs: parsed.PLAN_THREAD_IDLE_MS,
     retryAfterS: parsed.PLAN_RETRY_AFTER_S,
   };
 }

@@ -26,8 +26,9 @@ export const defaultPlanStopGraceMs = 10_000;
 /**
  * Default time a solver thread idles before it is ended, ms. A new thread compiles the engine again: on the demo trip a
  * plan over HTTP took 1.4–1.8 s on a fresh thread against 0.3–0.6 s on a warm one (measured 2026-12-04), so a thread
- * ended after a minute idle, as first built, made every plan after a pause of thought a cold one. A planning session
- * (plan, try a kit, plan again) stays on warm threads; a server that stops planning frees them.
+ * ended after a minute idle, as first built, made every plan after a pause of thought a cold one (after 75 s idle:
+ * 1.4 s then, 0.6–0.85 s now). A planning session (plan, try a kit, plan again) stays on warm threads; a server that
+ * stops planning frees them.
  */
 export const defaultPlanThreadIdleMs = 15 * 60_000;
 /** Default `Retry-After` of a 503 when every thread and queue place is taken, seconds (about one typical solve). */

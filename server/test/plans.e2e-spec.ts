@@ -460,7 +460,8 @@ describe('plans', () => {
     const { input } = await t.app
       .get(PlanningInputBuilder)
       .forTrip(route.trip.id, { itemIds: [route.gear[0]?.id ?? ''] });
-    const pauseMs = 1_500;
+    // Well past the short idle time, so a thread end that the timer delays still lands before the next plan.
+    const pauseMs = 2_500;
     const shortIdle = solverWith({ PLAN_WORKER_THREADS: '1', PLAN_THREAD_IDLE_MS: '1000' }, defaultPlanWorkerFile);
     const longIdle = solverWith({ PLAN_WORKER_THREADS: '1' }, defaultPlanWorkerFile);
     const pause = () => new Promise((done) => setTimeout(done, pauseMs));

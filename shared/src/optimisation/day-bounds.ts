@@ -1,4 +1,5 @@
 import type { ActiveItem, PresolvedProblem } from './presolve.js';
+import { keepCompiled } from '../jit/keep-compiled.js';
 
 /**
  * One upper bound on a sky-day's stored harvest, linear in the item counts: Σ_i coefficientWh[i] · n_i (Wh, already
@@ -213,6 +214,7 @@ function buildDayBounds(pre: PresolvedProblem): (s: number, t: number) => DayBou
     return bounds;
   };
 
+  keepCompiled('day bounds', build);
   return (s, t) => {
     const key = s * (c.dayCount + 1) + t;
     let hit = memo.get(key);

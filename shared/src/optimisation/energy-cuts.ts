@@ -2,6 +2,7 @@ import { dayBoundsOf, dot, viewScalesOf, type BoundVector } from './day-bounds.j
 import { groupBigM } from './daily-model.js';
 import { alternativePresent, type ActiveGroup, type ActiveItem, type PresolvedProblem } from './presolve.js';
 import type { EnergyShortfall, KitCounts } from './types.js';
+import { keepCompiled } from '../jit/keep-compiled.js';
 
 /** Wh a reserve row may miss by and still count as met (float noise of the forward pass). */
 const reserveToleranceWh = 1e-9;
@@ -251,6 +252,7 @@ export function evaluateDailyModel(
     });
     return plus(base, items, groups);
   };
+  keepCompiled('daily-model pass', runSky, scaledValue, value, chain);
 
   if (options.anyShortfall) {
     const skyCount = c.skyIds.length;

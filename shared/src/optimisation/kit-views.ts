@@ -2,6 +2,7 @@ import { deriveDayBounds } from './day-bounds.js';
 import { dailyModelItems, evaluateDailyModel, type EnergyCut } from './energy-cuts.js';
 import { alternativePresent, type ActiveItem, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
 import type { KitCounts } from './types.js';
+import { keepCompiled } from '../jit/keep-compiled.js';
 
 /**
  * A kit's view of the daily model: the model with what the kit's own paths allow (its devices' draw through the
@@ -92,6 +93,7 @@ export function kitViews(pre: PresolvedProblem, kit: KitCounts): KitView[] {
     if (lacking) return [lacking[0]];
     return a.anyOf.length > 0 ? [...a.anyOf] : [];
   };
+  keepCompiled('kit views', blockerOf);
 
   /** Devices drawing through a worse alternative than the locker's best: their demand is raised in the pooled view. */
   const raised: { gainWh: readonly (readonly number[])[]; factor: number }[] = [];

@@ -1,6 +1,7 @@
 import type { KitCut } from './daily-model.js';
 import type { EnergyCut } from './energy-cuts.js';
 import { alternativePresent, type IndexedAlternative, type PresolvedProblem } from './presolve.js';
+import { keepCompiled, releaseCompiled } from '../jit/keep-compiled.js';
 
 /**
  * The master problem of the kit search solved by a branch-and-bound of our own, in item counts, without an LP.
@@ -57,6 +58,12 @@ export const defaultMasterNodeLimit = 2_000_000;
  * counts and no cap).
  */
 export const maxOpenNodes = 200_000;
+
+/**
+ * Node bytes above which a search's closures are not kept compiled between plans (ours: the 50-item bench search holds
+ * under 1 MB of nodes, a stopped 200-item one tens of MB).
+ */
+export const keptSearchBytes = 4_000_000;
 
 /** Relative slack on an energy cut: a kit short by less than this share of the right-hand side meets it. */
 const energySlack = 1e-9;
@@ -217,6 +224,12 @@ class NodeStore {
     this.pending[id] = null;
     this.broken[id] = null;
     this.free.push(id);
+  }
+
+  /** Bytes its node arrays take (the pending and broken lists' slots counted at a pointer each). */
+  get bytes(): number {
+    const typed = [this.counts, this.floorG, this.boundG, this.seen, this.units, this.checked, this.surrogateDue];
+    return typed.reduce((sum, a) => sum + a.byteLength, this.openedIn.byteLength) + 16 * this.capacity;
   }
 
   private grow(): void {
@@ -545,6 +558,7 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
 
     /** Puts node `id` back in line. */
     const putBack = (id: number): void => open.push(id, store.boundG[id] as number, store.units[id] as number);
+    keepCompiled('master solve', check, surrogateOf, openChild, split, putBack);
 
     for (;;) {
       const popped = open.pop();
@@ -629,11 +643,20 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
     }
   };
 
-  return {
+  /**
+   * The search's closures are kept compiled between plans (`keepCompiled`) only while the nodes they reach are few: a
+   * 200-item search holds tens of MB of nodes, and its seconds of search do not notice a recompile.
+   */
+  const keptUnlessLarge = (answer: MasterAnswer): MasterAnswer => {
+    if (store.bytes > keptSearchBytes) releaseCompiled('master search', 'master solve');
+    return answer;
+  };
+
+  const search: MasterSearch = {
     next(instance, limits = {}) {
       start();
       serial++;
-      return solve(instance, limits, heap, false);
+      return keptUnlessLarge(solve(instance, limits, heap, false));
     },
     peek(instance, limits = {}) {
       start();
@@ -642,9 +665,11 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       const answer = solve(instance, limits, copy, true);
       // The copy's own nodes (those it opened or copied) go with it; the kept heap's stay.
       for (const id of copy.ids()) if (store.openedIn[id] === serial) store.close(id);
-      return answer;
+      return keptUnlessLarge(answer);
     },
   };
+  keepCompiled('master search', search);
+  return search;
 }
 
 /**

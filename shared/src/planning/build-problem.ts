@@ -33,6 +33,7 @@ import { packVolts } from '../station/pack-volts.js';
 import { computeTripSolar, type TripSolarOptions } from '../sun/trip-solar.js';
 import type { TripSolarSeries } from '../sun/trip-solar-types.js';
 import type { PlanningGear, PlanningInput } from './planning-input.js';
+import { keepCompiled } from '../jit/keep-compiled.js';
 
 /** A planning input made ready for the optimiser and the simulation: sun series, problem, judge, kit builder. */
 export interface PlanningContext {
@@ -553,6 +554,7 @@ export function planningContext(
       lastDrySkyIndex = answer.drySkyIndex ?? 0;
       return undefined;
     };
+    keepCompiled('judge', marginIfItLasts);
     const margin = marginIfItLasts(counts);
     if (margin !== undefined) return { feasible: true, margin };
     for (const kit of leaveHomeTries(counts)) {
@@ -561,6 +563,7 @@ export function planningContext(
     }
     return { feasible: false };
   };
+  keepCompiled('planning context', judge, simulate, acceptGrids);
   return { input, solarOptions, solar, gearById, panelSeriesCache, problem, judge, kitEntries, simulate };
 }
 

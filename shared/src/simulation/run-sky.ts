@@ -1,6 +1,7 @@
 import { energyEpsilonWh, keepsUpToleranceShare } from '../constants/electrical.js';
 import type { CompiledKit } from './compile-kit.js';
 import type { DryReason } from './types.js';
+import { keepCompiled } from '../jit/keep-compiled.js';
 
 /** Ledger columns per day, in a flat `Float64Array` (day × column). */
 export const ledgerColumns = [
@@ -234,6 +235,7 @@ export function runSky(
   const eps = energyEpsilonWh;
   // Loop guards far below the 1e-9 Wh the checks resolve, so they add no visible steps to the state.
   const tiny = 1e-13;
+  keepCompiled('sky run', topUp);
 
   let capAboveFloor = 0;
   for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);

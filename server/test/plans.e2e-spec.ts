@@ -478,6 +478,38 @@ describe('plans', () => {
     }
   });
 
+  it('warms a solver thread as the server starts and when the plans are listed with none warm; the plan runs on it', async () => {
+    const warmApp = await startTestApp({
+      env: { PLAN_WORKER_THREADS: '1', PLAN_THREAD_IDLE_MS: '1000', PLAN_WARM_UP: 'true' },
+    });
+    try {
+      const solver = warmApp.app.get(PlanSolver);
+      // Started by the bootstrap: the call waits for it.
+      expect(solver.warmingUp).toBe(true);
+      const first = await solver.warmUp();
+      expect(first).toEqual(expect.any(Number));
+      // A thread used this instant is warm: no second warm-up.
+      expect(await solver.warmUp()).toBeUndefined();
+      const hiker = await signedInHiker(warmApp);
+      const warmRoute = await highRoute(warmApp, hiker);
+      // Well past the 1 s idle time: the warmed thread has ended, so listing the plans warms a new one.
+      await new Promise((done) => setTimeout(done, 2_500));
+      await warmApp.http().get(`/api/trips/${warmRoute.trip.id}/plans`).set(hiker.auth).expect(200);
+      expect(solver.warmingUp).toBe(true);
+      const second = await solver.warmUp();
+      expect(second).toEqual(expect.any(Number));
+      expect(second).not.toBe(first);
+      const { input } = await warmApp.app.get(PlanningInputBuilder).forTrip(warmRoute.trip.id);
+      const run = await solver.plan(input, false);
+      expect(run.threadId).toBe(second);
+      // With warm-up off (the tests' default), nothing is started.
+      expect(t.app.get(PlanSolver).warmingUp).toBe(false);
+      expect(await t.app.get(PlanSolver).warmUp()).toBeUndefined();
+    } finally {
+      await warmApp.close();
+    }
+  });
+
   it('refuses a solve with 503 and Retry-After when every thread and queue place is taken, and serves other requests meanwhile', async () => {
     // An app of its own with one thread and one queue place, whose worker holds each task 2 s before solving: two
     // whole plans fill them however fast the engine is (the real worker now solves this trip in well under a second).

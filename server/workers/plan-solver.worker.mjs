@@ -12,6 +12,7 @@ import {
   planParty,
   planTrip,
   PlanningInputError,
+  warmUpPlanner,
 } from '@gramwatt/shared';
 
 /** Runs one task; a selection the input does not hold comes back as an `input-error` (an Error loses its path between threads). */
@@ -51,6 +52,9 @@ function run(task) {
         evaluation: evaluateKit(context, counts),
       };
     }
+    case 'warm-up':
+      // A new thread's first task: the planner loaded and compiled before a hiker's first plan (see PlanSolver.warmUp).
+      return { massG: warmUpPlanner(Date.now) };
     default:
       throw new Error(`Unknown plan solver task ${String(task.kind)}`);
   }

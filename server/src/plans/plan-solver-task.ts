@@ -10,13 +10,16 @@ export type PlanSolverTask =
   /** A hand-picked kit: verdict, ledger and the changes that shave grams, looked for until `deadlineMs` (epoch ms). */
   | { kind: 'check'; input: PlanningInput; selection: KitSelection; deadlineMs: number }
   /** A kit's lines and simulation only (the chosen kit). */
-  | { kind: 'evaluate'; input: PlanningInput; selection: KitSelection };
+  | { kind: 'evaluate'; input: PlanningInput; selection: KitSelection }
+  /** An invented trip planned once, so the thread has compiled the planner before a hiker's first plan. */
+  | { kind: 'warm-up' };
 
 /** What each task kind answers. */
 export interface PlanSolverValues {
   plan: PlanResult;
   check: CheckResult;
   evaluate: { kit: PlanKit; evaluation: KitEvaluation };
+  'warm-up': { massG: number | null };
 }
 
 /** The worker's answer: the value with the thread that computed it, or a selection the input does not hold. */

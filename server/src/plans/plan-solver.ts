@@ -2,6 +2,8 @@ import { resolve } from 'node:path';
 import {
   Inject,
   Injectable,
+  Logger,
+  type OnApplicationBootstrap,
   type OnModuleDestroy,
   ServiceUnavailableException,
   UnprocessableEntityException,
@@ -43,10 +45,17 @@ export interface SolverRun<V> {
  * was verified in time.
  */
 @Injectable()
-export class PlanSolver implements OnModuleDestroy {
+export class PlanSolver implements OnApplicationBootstrap, OnModuleDestroy {
+  private readonly logger = new Logger(PlanSolver.name);
   private readonly config: PlansConfig;
   private readonly pool: Piscina<PlanSolverTask, PlanSolverAnswer>;
   private inFlight = 0;
+  /** When the last task ended (performance.now()): a thread used since less than its idle time ago is still warm. */
+  private lastUsedMs = -Infinity;
+  /** The warm-up running now, if any (a second call waits for it rather than start another). */
+  private warming: Promise<number | undefined> | undefined;
+  /** Set when the module is destroyed: a warm-up stopped by the pool's end is not a failure to log. */
+  private closing = false;
 
   constructor(config: ConfigService, @Inject(PLAN_WORKER_FILE) workerFile: string) {
     this.config = config.getOrThrow<PlansConfig>(plansConfigKey);
@@ -83,12 +92,56 @@ export class PlanSolver implements OnModuleDestroy {
     return this.run<PlanSolverValues['evaluate']>({ kind: 'evaluate', input, selection });
   }
 
+  /**
+   * Starts a solver thread and plans an invented trip on it (`warmUpPlanner`), so a hiker's first plan finds the
+   * planner loaded and compiled: unless warm-up is off (PLAN_WARM_UP), a task is running or waiting (its thread is
+   * warm by the time it ends), or a thread was used within half its idle time. Resolves to the warmed thread's id, or
+   * undefined when none was warmed. A failure is logged, never thrown: a plan then starts its thread as before.
+   */
+  warmUp(): Promise<number | undefined> {
+    if (this.warming) return this.warming;
+    const recentlyUsed = performance.now() - this.lastUsedMs < this.config.threadIdleMs / 2;
+    if (!this.config.warmUp || this.inFlight > 0 || recentlyUsed) return Promise.resolve(undefined);
+    const startedMs = performance.now();
+    this.warming = this.pool
+      .run({ kind: 'warm-up' })
+      .then(
+        (answer) => {
+          this.logger.log(
+            `Solver thread ${answer.threadId} warmed up in ${Math.round(performance.now() - startedMs)} ms`,
+          );
+          return answer.threadId;
+        },
+        (error: unknown) => {
+          if (this.closing) return undefined;
+          this.logger.warn(`Solver warm-up failed: ${error instanceof Error ? error.message : String(error)}`);
+          return undefined;
+        },
+      )
+      .finally(() => {
+        this.lastUsedMs = performance.now();
+        this.warming = undefined;
+      });
+    return this.warming;
+  }
+
+  /** Whether a warm-up is running now. */
+  get warmingUp(): boolean {
+    return this.warming !== undefined;
+  }
+
+  /** Warms a thread as the server starts (not awaited: the server answers meanwhile). */
+  onApplicationBootstrap(): void {
+    void this.warmUp();
+  }
+
   /** Tasks running or waiting now. */
   get load(): number {
     return this.inFlight;
   }
 
   async onModuleDestroy(): Promise<void> {
+    this.closing = true;
     await this.pool.destroy();
   }
 
@@ -113,6 +166,7 @@ export class PlanSolver implements OnModuleDestroy {
       };
     } finally {
       this.inFlight -= 1;
+      this.lastUsedMs = performance.now();
     }
   }
 

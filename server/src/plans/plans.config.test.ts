@@ -4,7 +4,7 @@ import { defaultPlanWorkerFile } from './plan-solver';
 import { defaultPlanWorkerThreads, readPlansConfig } from './plans.config';
 
 describe('plans config', () => {
-  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 5 s of shaves per check, 10 s grace, threads kept 15 min idle, retry after 5 s', () => {
+  it('defaults: cores − 1 threads (at least 1), 8 waiting, 20 s per plan, 5 s of shaves per check, 10 s grace, threads kept 15 min idle, a thread warmed up, retry after 5 s', () => {
     expect(readPlansConfig({})).toEqual({
       workerThreads: defaultPlanWorkerThreads,
       queueMax: 8,
@@ -12,6 +12,7 @@ describe('plans config', () => {
       checkTimeLimitMs: 5_000,
       stopGraceMs: 10_000,
       threadIdleMs: 900_000,
+      warmUp: true,
       retryAfterS: 5,
     });
     expect(defaultPlanWorkerThreads).toBeGreaterThanOrEqual(1);
@@ -26,6 +27,7 @@ describe('plans config', () => {
         PLAN_CHECK_TIME_LIMIT_MS: '300',
         PLAN_STOP_GRACE_MS: '0',
         PLAN_THREAD_IDLE_MS: '60000',
+        PLAN_WARM_UP: 'false',
         PLAN_RETRY_AFTER_S: '30',
       }),
     ).toEqual({
@@ -35,6 +37,7 @@ describe('plans config', () => {
       checkTimeLimitMs: 300,
       stopGraceMs: 0,
       threadIdleMs: 60_000,
+      warmUp: false,
       retryAfterS: 30,
     });
     expect(readPlansConfig({ PLAN_QUEUE_MAX: ' ' }).queueMax).toBe(8);
@@ -50,6 +53,7 @@ describe('plans config', () => {
     ['PLAN_TIME_LIMIT_MS', '1.5'],
     ['PLAN_CHECK_TIME_LIMIT_MS', '0'],
     ['PLAN_THREAD_IDLE_MS', '999'],
+    ['PLAN_WARM_UP', 'sometimes'],
     ['PLAN_RETRY_AFTER_S', '0'],
   ])('refuses %s=%s at boot, naming the variable', (name, value) => {
     expect(() => readPlansConfig({ [name]: value })).toThrow(

@@ -66,6 +66,8 @@ export class PlansService {
 
   /** The trip's plans, newest first, without their answers. */
   async list(tripId: string): Promise<PlanSummary[]> {
+    // The plan screen lists the trip's plans first: a hiker who may plan next finds a warm thread (not awaited).
+    void this.solver.warmUp();
     const rows = await this.db
       .select({
         id: tripPlans.id,

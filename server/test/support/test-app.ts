@@ -17,6 +17,8 @@ export const testEnv: Env = {
   JWT_SECRET: testJwtSecret,
   AUTH_RATE_LIMIT: '10000',
   DATA_DIR: '/nonexistent-gramwatt-test-data',
+  // Threads start on a test's first solve, as the thread tests count on; the warm-up has its own test.
+  PLAN_WARM_UP: 'false',
 };
 
 export interface TestApp {

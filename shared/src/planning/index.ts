@@ -5,4 +5,5 @@ export { evaluateKit, planKit } from './evaluate-kit.js';
 export { planModelVersion } from './model-version.js';
 export { planTrip, type PlanOptions } from './plan-trip.js';
 export { checkKit } from './check-kit.js';
+export { warmUpPlanner } from './warm-up.js';
 export { planParty, partyCarriers, partyProblemOf, walkingFeedsOf } from './plan-party.js';

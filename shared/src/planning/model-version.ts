@@ -5,6 +5,8 @@
  * core of the locker searched first on large lockers; 3 — the units of one item drawn together, and a device charged no
  * faster than the fastest path of any one store (one socket, one cable at a time), not the stores' rates added up; and
  * a kit judged as working when it works with a shadowed converter left home; 4 — a kit that runs dry as packed tried
- * without its most efficient spare converter and without every spare, not with every set of spares left home.
+ * without its most efficient spare converter and without every spare, not with every set of spares left home; 5 — the
+ * camp top-up rounds at shares of the kit's own hour unit (the fewest hours a full device battery holds), not at fixed
+ * hours, so a rise of every device's use moves no round's target.
  */
-export const planModelVersion = 'gramwatt-plan-4';
+export const planModelVersion = 'gramwatt-plan-5';

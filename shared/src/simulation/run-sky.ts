@@ -87,6 +87,8 @@ export interface SkyScratch {
   topUpPowerLeftWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
+  /** The hours of use the top-up rounds' shares scale (`topUpUnitH`; fixed by the kit and the devices' use). */
+  topUpUnitH: number;
 }
 
 /**
@@ -94,11 +96,15 @@ export interface SkyScratch {
  * the trip's order) up to that many hours, the last to its full target. The device that holds the fewest hours is
  * filled first, so when the stores run short the devices share what is left and every battery serves as a buffer,
  * instead of the first devices staying full while a later one — often the radio — runs dry (common practice: charge
- * whatever is lowest first). Hours of the device's mean hourly use (its day's use / 24), stepping by about a third up
- * to three days of use. Coarser rounds are cheaper (4, 8, 16, 24, 48 h: the simulation about 1.4× faster) but share a
- * camp less evenly, and the soak found a store higher with more demand on a kit that lasts (README, Dispatch).
+ * whatever is lowest first). The hours are these shares of the kit's hour unit (`topUpUnitH`: the fewest hours any
+ * topped-up device's full battery holds at its mean use), a tenth at a time up to that unit, then by about half: so a
+ * round's target in Wh (hours × the device's hourly use) stays the same when every device uses more by one factor, and
+ * more demand moves no device into an earlier round. Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved
+ * those targets with demand: a hungrier device crossed a round's line and was filled sooner, then drew less in later
+ * steps, and the soak found stores higher with more demand (README, Dispatch, known gap (3)). Coarser rounds are
+ * cheaper but share a camp less evenly (a geometric grid of 11 lost 19 g on a bench locker).
  */
-const topUpLevelsH = [2, 4, 6, 8, 12, 16, 24, 36, 48, 72, Infinity];
+const topUpLevelShares = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.5, 2, 3, 4, 6, Infinity];
 
 interface HullFlows {
   drawW: number;
@@ -126,7 +132,22 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     topUpFullWh: new Float64Array(k.deviceCount),
     topUpPowerLeftWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
+    topUpUnitH: topUpUnitH(k),
   };
+}
+
+/**
+ * The hour unit of the top-up rounds: the fewest hours any topped-up device's full battery holds at its mean hourly use
+ * (Infinity when none uses anything). It scales as 1 / demand when every device's use scales alike, so each round's
+ * target in Wh does not move.
+ */
+function topUpUnitH(k: CompiledKit): number {
+  let unitH = Infinity;
+  for (let d = 0; d < k.deviceCount; d++) {
+    const useWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+    if (k.deviceTopsUp[d] === 1 && useWhPerH > 0) unitH = Math.min(unitH, (k.deviceCapWh[d] ?? 0) / useWhPerH);
+  }
+  return unitH;
 }
 
 /**
@@ -396,7 +417,7 @@ export function runSky(
     //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
     //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
     //    step (not always in later steps: see the README's known gap (3)).
-    //    All of it in rounds (`topUpLevelsH`): each round raises every device, in the trip's order, only up to that many
+    //    All of it in rounds (`topUpLevelShares`): each round raises every device, in the trip's order, only up to that many
     //    hours of its use, within its target, so the device holding the fewest hours is filled first. A later round
     //    goes on from the rates earlier rounds gave (each store's draw costed from there on the hull) and the charge
     //    power they left.
@@ -427,7 +448,10 @@ export function runSky(
         if (demandWhPerH > 0) fewestH = Math.min(fewestH, heldWh / demandWhPerH);
       }
       if (anyWants)
-        for (const levelH of topUpLevelsH) {
+        for (const share of topUpLevelShares) {
+          const levelH = share === Infinity ? Infinity : share * scratch.topUpUnitH;
+          // With no unit (no device uses anything) every round but the last would be the last one again.
+          if (share !== Infinity && !(levelH < Infinity)) continue;
           if (levelH !== Infinity && levelH <= fewestH) continue;
           let storesWh = 0;
           for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));

@@ -15,6 +15,13 @@ import { scaleSolar } from '../testing/synthetic-solar.js';
 const reserveArb = share(0, 0.3);
 /** A trip, a kit, its devices, a reserve and a factor (1–3) that scales the sun or the demand. */
 const scaledCase = [tripArb, kitArb(), devicesArb, reserveArb, share(1, 3)] as const;
+type ScaledCase = [
+  solar: Parameters<typeof simulateKit>[0]['solar'],
+  kit: Parameters<typeof simulateKit>[0]['kit'],
+  devices: Parameters<typeof simulateKit>[0]['devices'],
+  reserveShare: number,
+  factor: number,
+];
 /**
  * One fixed seed, as the both-path properties use: the runs (and the counts of meaningful cases) are the same on every
  * machine, and a failure reproduces. Wider soaks, many seeds and 50,000–100,000 runs each, are recorded in
@@ -125,6 +132,59 @@ describe('simulation properties (fast-check)', () => {
           expect(worstStoreRiseWh(base, hungrier)).toBeLessThan(1e-9);
         }),
         runs,
+      );
+    },
+    propertyTimeoutMs,
+  );
+
+  it(
+    'more demand never raises a store, more sun never lowers a unit: the soak runs that top-up rounds in clock hours broke',
+    () => {
+      // Runs of the soaks above (seed, run), replayed by fast-check's path. With the top-up rounds at fixed hours of use
+      // (2, 4 … 72 h), a hungrier device crossed a round's line, was filled sooner and drew less later, and a store ended
+      // 0.002–3.9 Wh higher (five of the twelve with both kits lasting the trip); with more sun a fuller device skipped a
+      // round and a unit ended 0.027 Wh lower. The rounds are now shares of the kit's own hour unit, so scaling every
+      // device's use leaves each round's target in Wh where it was. Other runs of those soaks still fail "more demand"
+      // by other causes (README, known gaps (3) and (10)); they are not pinned here.
+      const demandRuns: [seed: number, run: number][] = [
+        [3, 34195],
+        [3, 36642],
+        [3, 47346],
+        [4, 16821],
+        [4, 26126],
+        [4, 58913],
+        [5, 32144],
+        [5, 59582],
+        [7, 29595],
+        [8, 5607],
+        [10, 75079],
+        [11, 19685],
+      ];
+      const sunRuns: [seed: number, run: number][] = [[9, 33472]];
+      const replay = (runsToReplay: [number, number][], check: (c: ScaledCase) => number): void => {
+        for (const [seed, run] of runsToReplay) {
+          let replayed = 0;
+          fc.assert(
+            fc.property(...scaledCase, (...c) => {
+              replayed++;
+              expect(check(c), `seed ${seed}, run ${run}`).toBeLessThan(1e-9);
+            }),
+            { seed, path: String(run - 1), numRuns: 1 },
+          );
+          expect(replayed).toBe(1);
+        }
+      };
+      replay(demandRuns, ([solar, kit, devices, reserveShare, factor]) =>
+        worstStoreRiseWh(
+          simulateKit({ solar, kit, devices, reserveShare }),
+          simulateKit({ solar, kit, devices: scaleDemand(devices, factor), reserveShare }),
+        ),
+      );
+      replay(sunRuns, ([solar, kit, devices, reserveShare, factor]) =>
+        worstUnitDropWh(
+          simulateKit({ solar, kit, devices, reserveShare }),
+          simulateKit({ solar: scaleSolar(solar, factor), kit, devices, reserveShare }),
+        ),
       );
     },
     propertyTimeoutMs,

@@ -9,7 +9,7 @@ import type { KitEntry, TripDevice } from '../src/schemas/kit.js';
 import { isKitFeasible, simulateKit } from '../src/simulation/simulate-kit.js';
 import { computeTripSolar } from '../src/sun/trip-solar.js';
 import { testBank, testBoostConverter, testLead, testPhone, testRadio, testUsbPanel } from '../src/testing/fixtures.js';
-import { summerTripSolarInput } from '../src/testing/random-planning.js';
+import { summerTripSolarInput } from '../src/planning/invented-trips.js';
 import { measure } from './measure.js';
 
 function tenItemKit(): KitEntry[] {

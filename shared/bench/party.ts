@@ -1,5 +1,5 @@
 /**
- * Party plan timings on seeded real trips (invented gear, testing/random-planning.ts; the judge is the hourly
+ * Party plan timings on seeded real trips (invented gear, planning/invented-trips.ts; the judge is the hourly
  * simulation): the optimum of a three-person party with limits that force the kit to be shared, against the solo
  * optimum on the same pool, so the cost of the split and its cut rounds reads directly.
  */
@@ -7,7 +7,7 @@ import { seededRandom } from '../src/optimisation/synthetic-problem.js';
 import { planParty } from '../src/planning/plan-party.js';
 import { planTrip } from '../src/planning/plan-trip.js';
 import type { PartyPlanning, PlanningInput } from '../src/planning/planning-input.js';
-import { randomPlanningInput } from '../src/testing/random-planning.js';
+import { randomPlanningInput } from '../src/planning/invented-trips.js';
 import { measure } from './measure.js';
 
 const clock = (): number => performance.now();

@@ -10,7 +10,7 @@ import { optimiseKit } from '../src/optimisation/optimise.js';
 import { seededRandom } from '../src/optimisation/synthetic-problem.js';
 import { planningContext } from '../src/planning/build-problem.js';
 import { planTrip } from '../src/planning/plan-trip.js';
-import { summerTripInput } from '../src/testing/random-planning.js';
+import { summerTripInput } from '../src/planning/invented-trips.js';
 import { measure } from './measure.js';
 
 const clock = (): number => performance.now();

@@ -2,11 +2,11 @@
  * The core of a large locker (`coreLocker`) and the search that solves it first (`optimiseKit`): the core keeps what
  * it says it keeps, its kits are kits of the whole locker, and solving it first never changes a proven optimum and
  * never leaves a stopped search with a heavier kit than the core's own. Real sun, invented gear
- * (testing/random-planning.ts); no outside check values.
+ * (planning/invented-trips.ts); no outside check values.
  */
 import { describe, expect, it } from 'vitest';
 import { planningContext } from '../planning/build-problem.js';
-import { summerTripInput } from '../testing/random-planning.js';
+import { summerTripInput } from '../planning/invented-trips.js';
 import { coreDensestPerRole, coreLightestPerRole, coreLocker, corePathsPerNeed, restrictedTo } from './core-locker.js';
 import { kitCounts } from './kit.js';
 import { optimiseKit } from './optimise.js';

@@ -4,11 +4,11 @@
  * over the whole locker and over its core (the first search of a large locker, whose views raise the demand from the
  * whole locker's best share). Checked where it is tightest — kits shaved to the edge of feasibility (no unit can go
  * without the simulation rejecting the kit) — on summer trips of the bench's kind. The real sun, the real simulation
- * and invented gear (testing/random-planning.ts); the check values are the simulation's own verdicts.
+ * and invented gear (planning/invented-trips.ts); the check values are the simulation's own verdicts.
  */
 import { describe, expect, it } from 'vitest';
 import { planningContext } from '../planning/build-problem.js';
-import { summerTripInput } from '../testing/random-planning.js';
+import { summerTripInput } from '../planning/invented-trips.js';
 import { coreLocker, restrictedTo } from './core-locker.js';
 import { evaluateDailyModel } from './energy-cuts.js';
 import { kitViews, kitViewsShort } from './kit-views.js';

@@ -1,11 +1,11 @@
 /**
  * A kit view's quick check (`withCuts: false`) reads its base problem's day bounds with the view's factors folded into
  * the counts instead of building the view's own bound vectors; it must give the same answer, to float noise, as the
- * pass over the view's derived vectors, on real trips (the real sun and the invented gear of testing/random-planning.ts).
+ * pass over the view's derived vectors, on real trips (the real sun and the invented gear of planning/invented-trips.ts).
  */
 import { describe, expect, it } from 'vitest';
 import { planningContext } from '../planning/build-problem.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from '../planning/invented-trips.js';
 import { evaluateDailyModel } from './energy-cuts.js';
 import { kitViews } from './kit-views.js';
 import { presolve } from './presolve.js';

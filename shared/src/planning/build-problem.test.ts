@@ -6,7 +6,7 @@ import { testBank, testLead, testPhone, testUsbPanel } from '../testing/fixtures
 import { planningContext } from './build-problem.js';
 import { planTrip } from './plan-trip.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import type { PlanningInput } from './planning-input.js';
 
 /**

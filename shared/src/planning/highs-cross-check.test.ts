@@ -1,7 +1,7 @@
 /**
  * Cross-check of the daily model built from REAL trips against an independent solver. The optimiser's own cross-check
  * (optimisation/highs-cross-check.test.ts) runs on 50 synthetic worlds; this one runs on 50 random planning inputs
- * (real sun, sky and temperatures; invented gear, testing/random-planning.ts), whose coefficients carry the step detail
+ * (real sun, sky and temperatures; invented gear, planning/invented-trips.ts), whose coefficients carry the step detail
  * (hourly input limits, the morning before the first top-up) and the split charging needs that planningContext builds.
  * The lightest kit the daily model accepts — found by the decomposed search (javascript-lp-solver master with the
  * forward pass's Benders cuts) — must weigh exactly what HiGHS finds for the whole monolithic daily model written as
@@ -17,7 +17,7 @@ import { toLpText } from '../optimisation/lp-text.js';
 import { lpTextColumnsValid } from '../optimisation/lp-text.test-support.js';
 import { presolve } from '../optimisation/presolve.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 
 // The package's typings describe a CommonJS default export, which NodeNext reads as the module object.

@@ -1,6 +1,6 @@
 /**
  * planParty against exhaustive search on real trips: seeded random trips and pools of at most 6 units (invented gear,
- * testing/random-planning.ts), shared among 2–3 carriers with random limits and owners. Every kit is judged by the
+ * planning/invented-trips.ts), shared among 2–3 carriers with random limits and owners. Every kit is judged by the
  * real hour-by-hour simulation and every assignment of its units to the carriers is tried under the walking rule; the
  * lightest feasible kit that splits within every limit must weigh exactly what planParty returns, and when none does,
  * planParty's kit must be the lightest feasible kit with the least overage, naming whose limit and by how much.
@@ -13,7 +13,7 @@ import { exhaustiveLightestKit } from '../optimisation/oracle.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
 import { bruteForceSplitCost, exhaustivePartyAnswer, keepsWalkingRule } from '../party/party-oracle.test-support.js';
 import type { PlanResult } from '../schemas/plans.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { partyProblemOf, planParty } from './plan-party.js';
 import type { PartyPlanning, PlanningInput } from './planning-input.js';

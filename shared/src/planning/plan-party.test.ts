@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { testBank, testLead, testUsbPanel } from '../testing/fixtures.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
 import type { PlanningGear } from './planning-input.js';
 import { planParty, walkingFeedsOf } from './plan-party.js';

@@ -4,13 +4,13 @@
  * 12 V packs (LiFePO₄, lithium polymer, lead-acid), PWM and MPPT controllers, 12 V panels, fused DC leads and
  * 12 V → USB adapters, every kit is judged by the hour-by-hour simulation in ascending grams; planTrip's kit must weigh
  * exactly the first feasible one's grams, or both must find nothing. On 30 cases the exhaustive search skips nothing.
- * The gear is invented (testing/random-planning.ts).
+ * The gear is invented (planning/invented-trips.ts).
  */
 import { describe, expect, it } from 'vitest';
 import { kitCounts } from '../optimisation/kit.js';
 import { exhaustiveLightestKit } from '../optimisation/oracle.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { planTrip } from './plan-trip.js';
 

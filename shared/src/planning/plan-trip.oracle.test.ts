@@ -4,13 +4,13 @@
  * or random skies, temperatures for the place and season), every kit is judged by the real hour-by-hour simulation in
  * ascending grams; the first feasible one is the lightest. planTrip's kit must weigh exactly that (grams are whole
  * numbers), or both must find nothing feasible. On 50 cases the exhaustive search skips nothing, so a monotonicity
- * bug in the simulation cannot hide behind the skip. The gear is invented (testing/random-planning.ts).
+ * bug in the simulation cannot hide behind the skip. The gear is invented (planning/invented-trips.ts).
  */
 import { describe, expect, it } from 'vitest';
 import { kitCounts } from '../optimisation/kit.js';
 import { exhaustiveLightestKit } from '../optimisation/oracle.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { randomPlanningInput } from '../testing/random-planning.js';
+import { randomPlanningInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { planTrip } from './plan-trip.js';
 

@@ -1,6 +1,6 @@
 /**
  * Properties of planning on real trips (fast-check): real sun, sky and temperatures, the real hour-by-hour simulation
- * as the judge, invented gear (testing/random-planning.ts). Each run draws a seed for a random planning input and, where
+ * as the judge, invented gear (planning/invented-trips.ts). Each run draws a seed for a random planning input and, where
  * the property needs them, a kit or a factor.
  */
 import fc from 'fast-check';
@@ -15,7 +15,7 @@ import { seededRandom } from '../optimisation/synthetic-problem.js';
 import type { KitCounts } from '../optimisation/types.js';
 import { checkResultSchema, planResultSchema, type KitSelection } from '../schemas/plans.js';
 import { share } from '../testing/arbitraries.js';
-import { randomPlanningInput, type RandomPlanningOptions } from '../testing/random-planning.js';
+import { randomPlanningInput, type RandomPlanningOptions } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { checkKit } from './check-kit.js';
 import { planTrip } from './plan-trip.js';

@@ -1,13 +1,13 @@
 /**
  * A plan whose search stops early says so, and the lower bound it names holds: the lightest kit found without the stop
- * is no lighter. Invented gear (testing/random-planning.ts) on a real trip; not outside check values.
+ * is no lighter. Invented gear (planning/invented-trips.ts) on a real trip; not outside check values.
  */
 import { describe, expect, it } from 'vitest';
 import { gramPrice } from '../optimisation/gram-price.js';
 import { kitCounts } from '../optimisation/kit.js';
 import { optimiseKit } from '../optimisation/optimise.js';
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { summerTripInput } from '../testing/random-planning.js';
+import { summerTripInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { gramsText } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';

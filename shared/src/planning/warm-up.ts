@@ -1,5 +1,5 @@
 import { seededRandom } from '../optimisation/synthetic-problem.js';
-import { summerTripInput } from '../testing/random-planning.js';
+import { summerTripInput } from './invented-trips.js';
 import { checkKit } from './check-kit.js';
 import { planTrip } from './plan-trip.js';
 

@@ -4,6 +4,7 @@ import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
 import { NodePgDatabase } from 'drizzle-orm/node-postgres';
 import { migrate as migrateNodePg } from 'drizzle-orm/node-postgres/migrator';
 import type { Database } from './database.types';
+import { errorMessage } from '../common/error-message.js';
 
 /**
  * The committed migrations (`server/drizzle`), found from this file: `server/src/database` and
@@ -25,7 +26,7 @@ export async function migrateDatabase(db: Database): Promise<void> {
       throw new Error('unknown database driver');
     }
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
+    const reason = errorMessage(error);
     throw new Error(`Database migration failed (${migrationsFolder}): ${reason}`, { cause: error });
   }
 }

@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import { serverVersion } from '../common/server-version';
 import { DRIZZLE, type Database } from '../database/database.types';
 import type { Health } from './health.dto';
+import { errorMessage } from '../common/error-message.js';
 
 /** How long the database may take to answer `select 1` before it counts as down, in milliseconds. */
 export const databaseProbeTimeoutMs = 2_000;
@@ -27,7 +28,7 @@ export class HealthService {
       await Promise.race([this.db.execute(sql`select 1`), timeout]);
       return true;
     } catch (error) {
-      this.logger.warn(`Database probe failed: ${error instanceof Error ? error.message : String(error)}`);
+      this.logger.warn(`Database probe failed: ${errorMessage(error)}`);
       return false;
     } finally {
       clearTimeout(timer);

@@ -21,6 +21,7 @@ import { cleanFileName } from './file-name';
 import { toLockerFile } from './file-view';
 import { listFilesByItem } from './files-by-item';
 import { makeThumbnail, maxPhotoPixels, thumbnailContentType } from './thumbnail';
+import { errorMessage } from '../common/error-message.js';
 
 /** An uploaded file as the HTTP layer hands it over: the bytes and the name the browser gave. */
 export interface IncomingFile {
@@ -189,7 +190,7 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
     try {
       await this.drainDeletedObjects();
     } catch (error) {
-      this.logger.warn(`Could not drain deleted objects: ${error instanceof Error ? error.message : String(error)}`);
+      this.logger.warn(`Could not drain deleted objects: ${errorMessage(error)}`);
     }
   }
 
@@ -213,9 +214,7 @@ export class LockerFilesService implements OnApplicationBootstrap, BeforeApplica
           removed += 1;
         } catch (error) {
           failed.push(objectKey);
-          this.logger.warn(
-            `Could not delete stored object ${objectKey}: ${error instanceof Error ? error.message : String(error)}`,
-          );
+          this.logger.warn(`Could not delete stored object ${objectKey}: ${errorMessage(error)}`);
         }
       }
       if (failed.length > 0) {

@@ -10,6 +10,7 @@ import { type MailConfig, mailConfigKey } from './mail.config';
 import type { RenderedMail } from './mail-layout';
 import { MAIL_TRANSPORT, type MailTransport } from './mail-transport';
 import { retryDelayMs } from './retry-backoff';
+import { errorMessage } from '../common/error-message.js';
 
 /** A message to send. */
 export interface MailRequest extends RenderedMail {
@@ -172,7 +173,7 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
         .returning();
       return sent ?? claimed;
     } catch (error) {
-      const message = (error instanceof Error ? error.message : String(error)).slice(0, maxErrorLength);
+      const message = errorMessage(error).slice(0, maxErrorLength);
       const delayMs = retryDelayMs(attempt, this.settings.retry);
       const now = this.clock.now();
       const [updated] = await this.db

@@ -13,6 +13,7 @@ import { type KitSelection, type PlanningInput, PlanningInputError } from '@gram
 import Piscina from 'piscina';
 import { type PlansConfig, plansConfigKey } from './plans.config';
 import type { PlanSolverAnswer, PlanSolverTask, PlanSolverValues } from './plan-solver-task';
+import { errorMessage } from '../common/error-message.js';
 
 /**
  * The worker file: a plain ES module beside the package (`server/workers/`), found from this file — `src/plans`
@@ -114,7 +115,7 @@ export class PlanSolver implements OnApplicationBootstrap, OnModuleDestroy {
         },
         (error: unknown) => {
           if (this.closing) return undefined;
-          this.logger.warn(`Solver warm-up failed: ${error instanceof Error ? error.message : String(error)}`);
+          this.logger.warn(`Solver warm-up failed: ${errorMessage(error)}`);
           return undefined;
         },
       )

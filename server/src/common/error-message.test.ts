@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { errorMessage } from './error-message.js';
+import { errorMessage } from './error-message';
 
 describe('errorMessage', () => {
   it('gives an Error its own message, without the stack', () => {

@@ -4,7 +4,7 @@ import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
 import { NodePgDatabase } from 'drizzle-orm/node-postgres';
 import { migrate as migrateNodePg } from 'drizzle-orm/node-postgres/migrator';
 import type { Database } from './database.types';
-import { errorMessage } from '../common/error-message.js';
+import { errorMessage } from '../common/error-message';
 
 /**
  * The committed migrations (`server/drizzle`), found from this file: `server/src/database` and

@@ -3,7 +3,7 @@ import { sql } from 'drizzle-orm';
 import { serverVersion } from '../common/server-version';
 import { DRIZZLE, type Database } from '../database/database.types';
 import type { Health } from './health.dto';
-import { errorMessage } from '../common/error-message.js';
+import { errorMessage } from '../common/error-message';
 
 /** How long the database may take to answer `select 1` before it counts as down, in milliseconds. */
 export const databaseProbeTimeoutMs = 2_000;

@@ -21,7 +21,7 @@ import { cleanFileName } from './file-name';
 import { toLockerFile } from './file-view';
 import { listFilesByItem } from './files-by-item';
 import { makeThumbnail, maxPhotoPixels, thumbnailContentType } from './thumbnail';
-import { errorMessage } from '../common/error-message.js';
+import { errorMessage } from '../common/error-message';
 
 /** An uploaded file as the HTTP layer hands it over: the bytes and the name the browser gave. */
 export interface IncomingFile {

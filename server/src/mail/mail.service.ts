@@ -10,7 +10,7 @@ import { type MailConfig, mailConfigKey } from './mail.config';
 import type { RenderedMail } from './mail-layout';
 import { MAIL_TRANSPORT, type MailTransport } from './mail-transport';
 import { retryDelayMs } from './retry-backoff';
-import { errorMessage } from '../common/error-message.js';
+import { errorMessage } from '../common/error-message';
 
 /** A message to send. */
 export interface MailRequest extends RenderedMail {

@@ -13,7 +13,7 @@ import { type KitSelection, type PlanningInput, PlanningInputError } from '@gram
 import Piscina from 'piscina';
 import { type PlansConfig, plansConfigKey } from './plans.config';
 import type { PlanSolverAnswer, PlanSolverTask, PlanSolverValues } from './plan-solver-task';
-import { errorMessage } from '../common/error-message.js';
+import { errorMessage } from '../common/error-message';
 
 /**
  * The worker file: a plain ES module beside the package (`server/workers/`), found from this file — `src/plans`

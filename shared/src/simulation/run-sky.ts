@@ -97,14 +97,15 @@ export interface SkyScratch {
  * filled first, so when the stores run short the devices share what is left and every battery serves as a buffer,
  * instead of the first devices staying full while a later one — often the radio — runs dry (common practice: charge
  * whatever is lowest first). The hours are these shares of the kit's hour unit (`topUpUnitH`: the fewest hours any
- * topped-up device's full battery holds at its mean use), a tenth at a time up to that unit, then by about half: so a
- * round's target in Wh (hours × the device's hourly use) stays the same when every device uses more by one factor, and
- * more demand moves no device into an earlier round. Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved
+ * topped-up device's full battery holds at its mean use), a tenth at a time up to that unit, then by about half up to
+ * 20 units (the fixed hours went to 72 h; a kit whose hungriest device holds a few hours still shares the others' later
+ * rounds evenly): so a round's target in Wh (hours × the device's hourly use) stays the same when every device uses
+ * more by one factor, and more demand moves no device into an earlier round. Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved
  * those targets with demand: a hungrier device crossed a round's line and was filled sooner, then drew less in later
  * steps, and the soak found stores higher with more demand (README, Dispatch, known gap (3)). Coarser rounds are
  * cheaper but share a camp less evenly (a geometric grid of 11 lost 19 g on a bench locker).
  */
-const topUpLevelShares = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.5, 2, 3, 4, 6, Infinity];
+const topUpLevelShares = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.5, 2, 3, 4, 6, 9, 14, 20, Infinity];
 
 interface HullFlows {
   drawW: number;

@@ -32,10 +32,10 @@ export const defaultPlanStopGraceMs = 10_000;
  */
 export const defaultPlanThreadIdleMs = 15 * 60_000;
 /**
- * Whether a solver thread is started and warmed (an invented trip planned once) when the server starts and when a trip's
- * plans are listed with no warm thread: a plan on a fresh thread loads and compiles the planner first. The demo trip's
- * first plan after start took 1.55 s without it and 0.79–0.86 s with it (measured 2026-12-04). Default on; the tests
- * turn it off but where they test it.
+ * Whether a solver thread is started and warmed (an invented trip planned once) when the server starts and when a
+ * trip's plans are listed with no warm thread: a plan on a fresh thread loads and compiles the planner first. The demo
+ * trip's first plan after start took 1.55 s without it and 0.79–0.86 s with it (measured 2026-12-04). Default on; the
+ * tests turn it off but where they test it.
  */
 export const defaultPlanWarmUp = true;
 /** Default `Retry-After` of a 503 when every thread and queue place is taken, seconds (about one typical solve). */

@@ -1,7 +1,8 @@
 /**
  * A kit view's quick check (`withCuts: false`) reads its base problem's day bounds with the view's factors folded into
  * the counts instead of building the view's own bound vectors; it must give the same answer, to float noise, as the
- * pass over the view's derived vectors, on real trips (the real sun and the invented gear of planning/invented-trips.ts).
+ * pass over the view's derived vectors, on real trips (the real sun and the invented gear of
+ * planning/invented-trips.ts).
  */
 import { describe, expect, it } from 'vitest';
 import { planningContext } from '../planning/build-problem.js';

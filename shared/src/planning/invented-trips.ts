@@ -1,5 +1,6 @@
 /**
- * Seeded random planning inputs for the planning-level tests, the benchmarks and a solver thread's warm-up: a trip somewhere between 60° S and 66° N
+ * Seeded random planning inputs for the planning-level tests, the benchmarks and a solver thread's warm-up: a trip
+ * somewhere between 60° S and 66° N
  * in any season, its sky, temperatures and devices, and a locker of invented USB panels, banks, boost converters and
  * leads (connectors that match, and some that do not). Everything comes from the generator passed in; the same seed
  * gives the same input. The items are invented and their figures are rough ranges of small hiking gear

@@ -1,7 +1,7 @@
 /**
  * Properties of planning on real trips (fast-check): real sun, sky and temperatures, the real hour-by-hour simulation
- * as the judge, invented gear (planning/invented-trips.ts). Each run draws a seed for a random planning input and, where
- * the property needs them, a kit or a factor.
+ * as the judge, invented gear (planning/invented-trips.ts). Each run draws a seed for a random planning input and,
+ * where the property needs them, a kit or a factor.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

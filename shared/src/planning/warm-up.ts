@@ -11,7 +11,9 @@ import { planTrip } from './plan-trip.js';
 const warmUpSeed = 1;
 const warmUpItems = 24;
 const warmUpNights = 5;
-/** The warm-up's own time limit, ms: it stops there whatever it has compiled (a slow machine must not hold the thread). */
+/**
+ * The warm-up's own time limit, ms: it stops there whatever it has compiled (a slow machine must not hold the thread).
+ */
 const warmUpBudgetMs = 3_000;
 
 /**

@@ -100,10 +100,11 @@ export interface SkyScratch {
  * topped-up device's full battery holds at its mean use), a tenth at a time up to that unit, then by about half up to
  * 20 units (the fixed hours went to 72 h; a kit whose hungriest device holds a few hours still shares the others' later
  * rounds evenly): so a round's target in Wh (hours × the device's hourly use) stays the same when every device uses
- * more by one factor, and more demand moves no device into an earlier round. Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved
- * those targets with demand: a hungrier device crossed a round's line and was filled sooner, then drew less in later
- * steps, and the soak found stores higher with more demand (README, Dispatch, known gap (3)). Coarser rounds are
- * cheaper but share a camp less evenly (a geometric grid of 11 lost 19 g on a bench locker).
+ * more by one factor, and no device moves into an earlier round. (A rise in one device's use alone still moves the
+ * unit when that device sets it.) Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved those targets with
+ * demand: a hungrier device crossed a round's line and was filled sooner, then drew less in later steps, and the soak
+ * found stores higher with more demand (README, Dispatch, known gap (3)). Coarser rounds are cheaper but share a camp
+ * less evenly (a geometric grid of 11 lost 19 g on a bench locker).
  */
 const topUpLevelShares = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.5, 2, 3, 4, 6, 9, 14, 20, Infinity];
 
@@ -418,8 +419,8 @@ export function runSky(
     //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
     //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
     //    step (not always in later steps: see the README's known gap (3)).
-    //    All of it in rounds (`topUpLevelShares`): each round raises every device, in the trip's order, only up to that many
-    //    hours of its use, within its target, so the device holding the fewest hours is filled first. A later round
+    //    All of it in rounds (`topUpLevelShares`): each round raises every device, in the trip's order, only up to that
+    //    many hours of its use, within its target, so the device holding the fewest hours is filled first. A later round
     //    goes on from the rates earlier rounds gave (each store's draw costed from there on the hull) and the charge
     //    power they left.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {

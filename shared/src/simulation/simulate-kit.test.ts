@@ -299,6 +299,39 @@ describe('top-ups go to the device holding the fewest hours of its use first', (
   });
 });
 
+describe('rounds past the hour unit run only in the last hours of a camp window', () => {
+  // Synthetic trip, 7 nights, no sun: walk 08–16, camp 16–08, one large bank (10,000 mAh × 3.7 V × 0.85 = 31.45 Wh) both
+  // phones reach through one lead, no reserve. "Light": 15 Wh, a quarter of it a day (0.15625 Wh/h, 96 h when full);
+  // "hungry": 15 Wh, 0.9 of it a day (0.5625 Wh/h, 26.7 h when full) — the hour unit, the fewest hours a full battery
+  // holds. At 16:00 on day 0, after 9 h of use, light holds 15 − 9 × 0.15625 = 13.59 Wh (87 h, past one unit) and wants
+  // more (its use left, about 25 Wh, is over 15); hungry holds 9.94 Wh (17.7 h). Hungry is topped up at once; light only
+  // in the last 2 h of the camp window (06:00 and 07:00), so the bank keeps its energy through the night for whoever
+  // runs low. Before, light was topped up to full at 16:00 too. Hand calculation.
+  const solar = syntheticTripSolar({ nights: 7, peakWm2: 0 });
+  const devices: TripDevice[] = [
+    { deviceId: 'light', spec: testPhone(0.25) },
+    { deviceId: 'hungry', spec: testPhone(0.9) },
+  ];
+  const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah: 10000 }) }, phoneLead];
+  const result = simulateKit({ solar, kit, devices, reserveShare: 0 });
+  const firstNight = result.schedule.filter((s) => s.kind === 'top-up' && s.dayIndex === 0);
+  const startsOf = (deviceId: string): string[] =>
+    firstNight.filter((s) => s.toId === deviceId).map((s) => s.startLocalTime);
+
+  it('tops the hungry phone up at 16:00 and the light one only from 06:00', () => {
+    expect(startsOf('hungry')[0]).toBe('16:00');
+    expect(startsOf('light')).toEqual(['06:00']);
+  });
+
+  it('the light phone leaves camp full', () => {
+    const sky = result.skies[0] as (typeof result.skies)[number];
+    const units = result.stores.length + result.devices.length;
+    const step = solar.steps.findIndex((st) => st.dayIndex === 0 && st.localTime === '07:00');
+    const lightIndex = result.stores.length + result.devices.findIndex((d) => d.deviceId === 'light');
+    expect(sky.unitWhByStep[step * units + lightIndex]).toBeCloseTo(15, 9);
+  });
+});
+
 describe('the charging schedule', () => {
   it('lists one session per store, device and run of camp hours, however many top-up rounds a step takes', () => {
     // Two phones on one bank: their top-ups go in rounds by hours held, often several in one step.

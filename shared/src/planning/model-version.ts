@@ -7,7 +7,7 @@
  * a kit judged as working when it works with a shadowed converter left home; 4 — a kit that runs dry as packed tried
  * without its most efficient spare converter and without every spare, not with every set of spares left home; 5 — the
  * camp top-up rounds at shares of the kit's own hour unit (the fewest hours a full device battery holds), not at fixed
- * hours, so a rise of every device's use moves no round's target; 6 — the rounds past that unit run in full only near
- * the end of a camp window, and before that draw only on what a store holds above 80 % of its capacity.
+ * hours, so a rise of every device's use moves no round's target; 6 — the rounds past that unit run only in the last
+ * 2 h of a camp window.
  */
 export const planModelVersion = 'gramwatt-plan-6';

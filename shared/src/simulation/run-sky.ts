@@ -460,14 +460,16 @@ export function runSky(
         anyWants = true;
         if (demandWhPerH > 0) fewestH = Math.min(fewestH, heldWh / demandWhPerH);
       }
+      // Early in a camp window the rounds stop at the hour unit; in its last hours they go on to the targets.
+      const lastShare = (k.stepCampLeftH[i] ?? 0) > fillBeforeLeavingH ? restrainedAboveShare : Infinity;
       if (anyWants)
         for (const share of topUpLevelShares) {
+          if (share > lastShare) break;
           const levelH = share === Infinity ? Infinity : share * scratch.topUpUnitH;
           // With no unit (no device uses anything) every round but the last would be the last one again.
           if (share !== Infinity && !(levelH < Infinity)) continue;
           if (levelH !== Infinity && levelH <= fewestH) continue;
           let storesWh = 0;
-          if (share > restrainedAboveShare && (k.stepCampLeftH[i] ?? 0) > fillBeforeLeavingH) break;
           for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
           if (storesWh <= tiny) break;
           for (let d = 0; d < D; d++) {

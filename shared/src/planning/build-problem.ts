@@ -16,7 +16,14 @@ import type {
 import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas/items.js';
 import type { KitEntry } from '../schemas/kit.js';
 import type { BatterySpec, ControllerSpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
-import { chargePaths, joinPorts, type ChargePath, type KitConverter, type KitLead } from '../simulation/connections.js';
+import {
+  chargePaths,
+  joinPorts,
+  leadSetMayAddTail,
+  type ChargePath,
+  type KitConverter,
+  type KitLead,
+} from '../simulation/connections.js';
 import {
   packChargePaths,
   panelReachesPack,
@@ -341,8 +348,10 @@ export function planningContext(
       banksByPorts.set(key, [...(banksByPorts.get(key) ?? []), bank]);
     }
     for (const [group, sameBanks] of [...banksByPorts.values()].entries()) {
+      const groupPorts = (sameBanks[0] as PlanningGear & { spec: BankSpec }).spec.outputPorts.map((p) => p.connector);
       for (const cs of converterSets) {
         for (const ls of leadSets) {
+          if (!leadSetMayAddTail(ls, groupPorts, cs[0], d.spec.chargePort.connector)) continue;
           for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls)
             .paths) {
             const tail = [

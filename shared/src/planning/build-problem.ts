@@ -17,6 +17,7 @@ import type { BankSpec, ConverterSpec, LeadSpec, UsbPanelSpec } from '../schemas
 import type { KitEntry } from '../schemas/kit.js';
 import type { BatterySpec, ControllerSpec, TwelveVoltPanelSpec } from '../schemas/station-items.js';
 import {
+  boostFitsBank,
   chargePaths,
   joinPorts,
   leadSetMayAddTail,
@@ -348,12 +349,14 @@ export function planningContext(
       banksByPorts.set(key, [...(banksByPorts.get(key) ?? []), bank]);
     }
     for (const [group, sameBanks] of [...banksByPorts.values()].entries()) {
-      const groupPorts = (sameBanks[0] as PlanningGear & { spec: BankSpec }).spec.outputPorts.map((p) => p.connector);
+      const groupBank = (sameBanks[0] as PlanningGear & { spec: BankSpec }).spec;
+      const groupPorts = groupBank.outputPorts.map((p) => p.connector);
       for (const cs of converterSets) {
+        // A converter that fits no port of these banks (input volts, output in the device's window) has no path.
+        if (cs[0] && !boostFitsBank(groupBank, d.spec, cs[0].spec)) continue;
         for (const ls of leadSets) {
           if (!leadSetMayAddTail(ls, groupPorts, cs[0], d.spec.chargePort.connector)) continue;
-          for (const path of chargePaths((sameBanks[0] as PlanningGear & { spec: BankSpec }).spec, d.spec, cs, ls)
-            .paths) {
+          for (const path of chargePaths(groupBank, d.spec, cs, ls).paths) {
             const tail = [
               ...new Set([...(path.converterItemId ? [path.converterItemId] : []), ...path.leadItemIds]),
             ].sort();

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { bankArb, converterArb, deviceArb, leadArb } from '../testing/arbitraries.js';
 import { testBank, testBoostConverter, testLead, testPhone, testRadio } from '../testing/fixtures.js';
-import { chargePaths, leadSetMayAddTail, type KitConverter, type KitLead } from './connections.js';
+import { boostFitsBank, chargePaths, leadSetMayAddTail, type KitConverter, type KitLead } from './connections.js';
 import type { BankSpec } from '../schemas/items.js';
 import type { DeviceSpec } from '../schemas/devices.js';
 
@@ -42,6 +42,30 @@ describe('lead sets a path search can skip (leadSetMayAddTail)', () => {
       }),
       { numRuns: 3000, seed: 20261204 },
     );
+  });
+
+  it('a converter that fits no port of the bank gives no path with any leads', () => {
+    fc.assert(
+      fc.property(
+        bankArb,
+        deviceArb,
+        converterArb,
+        fc.array(leadArb, { maxLength: 3 }),
+        (bank, device, spec, leads) => {
+          if (device.chargesVia !== '12v-dc' || boostFitsBank(bank, device, spec)) return;
+          const kitLeads = leads.map((l, i): KitLead => ({ itemId: `lead-${i}`, spec: l }));
+          expect(chargePaths(bank, device, [{ itemId: 'converter', spec }], kitLeads).paths).toEqual([]);
+        },
+      ),
+      { numRuns: 2000, seed: 20261204 },
+    );
+    // And one that fits is told apart: a 9 V boost fits a bank with a 9 V USB PD port, not one whose ports give 5 V only.
+    const nineVolt = testBoostConverter({ inputVolts: 9 });
+    expect(boostFitsBank(testBank(), testRadio(), nineVolt)).toBe(true);
+    const fiveVoltOnly = testBank({
+      outputPorts: [{ connector: 'usb-a', captiveCable: false, volts: 5, maxA: 2.4, usbPdVolts: [] }],
+    });
+    expect(boostFitsBank(fiveVoltOnly, testRadio(), nineVolt)).toBe(false);
   });
 
   it('keeps the sets that give a path of their own, and skips a lead no hop can use', () => {

@@ -282,7 +282,7 @@ export function runSky(
   const eps = energyEpsilonWh;
   // Loop guards far below the 1e-9 Wh the checks resolve, so they add no visible steps to the state.
   const tiny = 1e-13;
-  keepCompiled('sky run', topUp);
+  keepCompiled('sky run', topUp, topUpRound, passHarvestThrough);
 
   let capAboveFloor = 0;
   for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -520,6 +520,13 @@ export function runSky(
     let leftWh = 0;
     for (let p = 0; p < P; p++) leftWh += rem[p] ?? 0;
     if (leftWh <= tiny) return;
+    // Only a device still below its target, with charge power left in the step, can take any of it.
+    let wanting = false;
+    const fullWh = scratch.topUpFullWh;
+    const powerLeftWh = scratch.topUpPowerLeftWh;
+    for (let d = 0; d < D && !wanting; d++)
+      wanting = (fullWh[d] ?? 0) - (devE[d] ?? 0) > tiny && (powerLeftWh[d] ?? 0) > tiny;
+    if (!wanting) return;
     const limitLeft = scratch.storeLimitWh;
     const remAvail = scratch.passRemWh;
     const start = scratch.passStartWh;

@@ -282,7 +282,7 @@ export function runSky(
   const eps = energyEpsilonWh;
   // Loop guards far below the 1e-9 Wh the checks resolve, so they add no visible steps to the state.
   const tiny = 1e-13;
-  keepCompiled('sky run', topUp, topUpRound, passHarvestThrough);
+  keepCompiled('sky run', topUp, topUpRound, passHarvestThrough, harvestInto);
 
   let capAboveFloor = 0;
   for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -390,15 +390,7 @@ export function runSky(
             const etaO = k.storeOutputEff[s] ?? 1;
             const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
             if (!(take > 0)) continue;
-            rem[p] = (rem[p] ?? 0) - take;
-            limitLeft[s] = (limitLeft[s] ?? 0) - take;
-            E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
-            if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
-            if (ledger) {
-              ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
-              ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
-              ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
-            }
+            harvestInto(i, row, p, s, take);
           }
         }
       }
@@ -508,6 +500,25 @@ export function runSky(
   return finish();
 
   /**
+   * Panel p puts `take` Wh (at its port) into store s in step i: the store gains it after its charge and output
+   * losses, within its input limit left; the ledger books the harvest and each loss.
+   */
+  function harvestInto(i: number, row: number, p: number, s: number, take: number): void {
+    const limitLeft = scratch.storeLimitWh;
+    const etaC = k.storeChargeEff[s] ?? 1;
+    const etaO = k.storeOutputEff[s] ?? 1;
+    rem[p] = (rem[p] ?? 0) - take;
+    limitLeft[s] = (limitLeft[s] ?? 0) - take;
+    E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
+    if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
+    if (ledger) {
+      ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
+      ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
+      ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
+    }
+  }
+
+  /**
    * Harvest that no store could take this step passes through the full stores it reaches to the devices they charge:
    * each such store may be drawn, in one more round to the devices' targets (past the restrained rounds), down by what
    * that harvest can put back into it within its input limit, and is then refilled from it. A store ends the step where
@@ -563,17 +574,10 @@ export function runSky(
         if (k.panelReach[p * S + s] !== 1) continue;
         const take = Math.min(needWh, promised[p * S + s] ?? 0);
         if (!(take > 0)) continue;
-        rem[p] = (rem[p] ?? 0) - take;
-        limitLeft[s] = (limitLeft[s] ?? 0) - take;
         needWh -= take;
-        E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
-        if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
-        if (ledger) {
-          ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
-          ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
-          ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
-          ledger[row + C.spilledWh] = (ledger[row + C.spilledWh] ?? 0) - take;
-        }
+        harvestInto(i, row, p, s, take);
+        // Booked as spilled when the harvest step left it over.
+        if (ledger) ledger[row + C.spilledWh] = (ledger[row + C.spilledWh] ?? 0) - take;
       }
     }
   }

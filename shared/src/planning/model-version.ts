@@ -8,7 +8,6 @@
  * without its most efficient spare converter and without every spare, not with every set of spares left home; 5 — the
  * camp top-up rounds at shares of the kit's own hour unit (the fewest hours a full device battery holds), not at fixed
  * hours, so a rise of every device's use moves no round's target; 6 — the rounds past that unit run only in the last
- * 2 h of a camp window; 7 — harvest that no store can take passes through the full stores it reaches to their
- * devices in camp.
+ * 2 h of a camp window.
  */
-export const planModelVersion = 'gramwatt-plan-7';
+export const planModelVersion = 'gramwatt-plan-6';

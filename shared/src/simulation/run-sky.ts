@@ -85,14 +85,6 @@ export interface SkyScratch {
   topUpFullWh: Float64Array;
   /** Per device: its charge power left in this step, as battery gain (Wh). */
   topUpPowerLeftWh: Float64Array;
-  /** Per store: the level a top-up may draw it down to (its reserve, or higher while harvest passes through it). */
-  drawFloorWh: Float64Array;
-  /** Per panel: its harvest left over in the step, not yet promised to a store it passes through. */
-  passRemWh: Float64Array;
-  /** Per panel × store: the left-over harvest promised to refill that store. */
-  passPromisedWh: Float64Array;
-  /** Per store: its level before harvest passes through it to the devices. */
-  passStartWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
   /** The hours of use the top-up rounds' shares scale (`topUpUnitH`; fixed by the kit and the devices' use). */
@@ -151,10 +143,6 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     topUpGivenW: new Float64Array(k.storeCount * k.deviceCount),
     topUpFullWh: new Float64Array(k.deviceCount),
     topUpPowerLeftWh: new Float64Array(k.deviceCount),
-    drawFloorWh: new Float64Array(k.storeCount),
-    passRemWh: new Float64Array(k.panelCount),
-    passPromisedWh: new Float64Array(k.panelCount * k.storeCount),
-    passStartWh: new Float64Array(k.storeCount),
     leastLevelWh: leastLevelsWh(k),
     topUpUnitH: topUpUnitH(k),
   };
@@ -274,15 +262,13 @@ export function runSky(
   const rem = scratch.panelRemWh;
   E.set(k.storeCapWh);
   devE.set(k.deviceCapWh);
-  const floorWh = scratch.drawFloorWh;
-  floorWh.set(k.storeFloorWh);
   const series = k.panelSeries[skyIndex] ?? [];
   const ledger = record?.ledger;
   if (ledger) ledger.fill(0);
   const eps = energyEpsilonWh;
   // Loop guards far below the 1e-9 Wh the checks resolve, so they add no visible steps to the state.
   const tiny = 1e-13;
-  keepCompiled('sky run', topUp, topUpRound, passHarvestThrough, harvestInto);
+  keepCompiled('sky run', topUp);
 
   let capAboveFloor = 0;
   for (let s = 0; s < S; s++) capAboveFloor += (k.storeCapWh[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -390,7 +376,15 @@ export function runSky(
             const etaO = k.storeOutputEff[s] ?? 1;
             const take = Math.min(limitLeft[s] ?? 0, Math.max(0, room - level) / (etaC * etaO), rem[p] ?? 0);
             if (!(take > 0)) continue;
-            harvestInto(i, row, p, s, take);
+            rem[p] = (rem[p] ?? 0) - take;
+            limitLeft[s] = (limitLeft[s] ?? 0) - take;
+            E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
+            if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
+            if (ledger) {
+              ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
+              ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
+              ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
+            }
           }
         }
       }
@@ -440,9 +434,8 @@ export function runSky(
     //    goes on from the rates earlier rounds gave (each store's draw costed from there on the hull) and the charge
     //    power they left. Rounds past the hour unit run only in the last hours of the camp window
     //    (`restrainedAboveShare`): which rounds a step runs is fixed by its clock, never by the sun or the demand.
-    //    Then harvest that no store could take this step passes through the full stores it reaches to their devices, in
-    //    one more round to the targets (`passHarvestThrough`): a store is drawn only by what that harvest puts back.
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
+      const rateW = scratch.topUpRateW;
       const givenW = scratch.topUpGivenW;
       const powerLeftWh = scratch.topUpPowerLeftWh;
       const fullWh = scratch.topUpFullWh;
@@ -476,9 +469,47 @@ export function runSky(
           // With no unit (no device uses anything) every round but the last would be the last one again.
           if (share !== Infinity && !(levelH < Infinity)) continue;
           if (levelH !== Infinity && levelH <= fewestH) continue;
-          if (!topUpRound(i, levelH)) break;
+          let storesWh = 0;
+          for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
+          if (storesWh <= tiny) break;
+          for (let d = 0; d < D; d++) {
+            const heldWh = devE[d] ?? 0;
+            const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+            const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
+            let wantWh = targetWh - heldWh;
+            if (wantWh <= tiny) continue;
+            let powerWh = powerLeftWh[d] ?? 0;
+            if (powerWh <= tiny) continue;
+            rateW.fill(0);
+            for (let group = 0; group < 2; group++) {
+              for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
+                m = Math.max(1, k.storeGroupSize[s] ?? 1);
+                if ((k.storeShared[s] ?? 0) !== group) continue;
+                const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
+                wantWh -= x * dt;
+                powerWh -= x * dt;
+              }
+            }
+            let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
+            for (let group = 0; group < 2; group++) {
+              for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
+                m = Math.max(1, k.storeGroupSize[s] ?? 1);
+                if ((k.storeShared[s] ?? 0) !== group) continue;
+                const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
+                shortWh -= extraW * dt;
+                powerWh -= extraW * dt;
+              }
+            }
+            powerLeftWh[d] = powerWh;
+            for (let s = 0; s < S; s++) {
+              const x = rateW[s] ?? 0;
+              if (!(x > 0)) continue;
+              const from = givenW[s * D + d] ?? 0;
+              topUp(d, s, from, from + x);
+              givenW[s * D + d] = from + x;
+            }
+          }
         }
-      if (anyWants && !frozen) passHarvestThrough(i, row);
     }
 
     const t = totals();
@@ -498,142 +529,6 @@ export function runSky(
     }
   }
   return finish();
-
-  /**
-   * Panel p puts `take` Wh (at its port) into store s in step i: the store gains it after its charge and output
-   * losses, within its input limit left; the ledger books the harvest and each loss.
-   */
-  function harvestInto(i: number, row: number, p: number, s: number, take: number): void {
-    const limitLeft = scratch.storeLimitWh;
-    const etaC = k.storeChargeEff[s] ?? 1;
-    const etaO = k.storeOutputEff[s] ?? 1;
-    rem[p] = (rem[p] ?? 0) - take;
-    limitLeft[s] = (limitLeft[s] ?? 0) - take;
-    E[s] = Math.min(k.storeCapWh[s] ?? 0, (E[s] ?? 0) + take * etaC * etaO);
-    if (record?.onFlow) record.onFlow('harvest', i, p, s, take);
-    if (ledger) {
-      ledger[row + C.harvestWh] = (ledger[row + C.harvestWh] ?? 0) + take;
-      ledger[row + C.storeChargeLossWh] = (ledger[row + C.storeChargeLossWh] ?? 0) + take * (1 - etaC);
-      ledger[row + C.storeOutputLossWh] = (ledger[row + C.storeOutputLossWh] ?? 0) + take * etaC * (1 - etaO);
-    }
-  }
-
-  /**
-   * Harvest that no store could take this step passes through the full stores it reaches to the devices they charge:
-   * each such store may be drawn, in one more round to the devices' targets (past the restrained rounds), down by what
-   * that harvest can put back into it within its input limit, and is then refilled from it. A store ends the step where
-   * the rounds left it; only harvest that would have been spilled moves into the devices. Why: with the rounds past the
-   * hour unit held to the end of camp, full banks spilled a sunny camp evening while a radio waited for its top-up, and
-   * the daily model (which spills nothing a device could take) passed kits the simulation then rejected one by one.
-   * Measured on the ten 50-item bench lockers: see shared/README.md, Dispatch.
-   */
-  function passHarvestThrough(i: number, row: number): void {
-    let leftWh = 0;
-    for (let p = 0; p < P; p++) leftWh += rem[p] ?? 0;
-    if (leftWh <= tiny) return;
-    // Only a device still below its target, with charge power left in the step, can take any of it.
-    let wanting = false;
-    const fullWh = scratch.topUpFullWh;
-    const powerLeftWh = scratch.topUpPowerLeftWh;
-    for (let d = 0; d < D && !wanting; d++)
-      wanting = (fullWh[d] ?? 0) - (devE[d] ?? 0) > tiny && (powerLeftWh[d] ?? 0) > tiny;
-    if (!wanting) return;
-    const limitLeft = scratch.storeLimitWh;
-    const remAvail = scratch.passRemWh;
-    const start = scratch.passStartWh;
-    const promised = scratch.passPromisedWh;
-    remAvail.set(rem);
-    promised.fill(0);
-    start.set(E);
-    let any = false;
-    for (let s = 0; s < S; s++) {
-      floorWh[s] = E[s] ?? 0;
-      let inputWh = 0;
-      let roomWh = limitLeft[s] ?? 0;
-      for (let p = 0; p < P && roomWh > tiny; p++) {
-        if (k.panelReach[p * S + s] !== 1) continue;
-        const take = Math.min(roomWh, remAvail[p] ?? 0);
-        promised[p * S + s] = take;
-        remAvail[p] = (remAvail[p] ?? 0) - take;
-        roomWh -= take;
-        inputWh += take;
-      }
-      const passWh = inputWh * storeEta(k, s);
-      if (passWh <= tiny) continue;
-      floorWh[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - passWh);
-      any = true;
-    }
-    if (any) topUpRound(i, Infinity);
-    floorWh.set(k.storeFloorWh);
-    if (!any) return;
-    for (let s = 0; s < S; s++) {
-      const etaC = k.storeChargeEff[s] ?? 1;
-      const etaO = k.storeOutputEff[s] ?? 1;
-      let needWh = ((start[s] ?? 0) - (E[s] ?? 0)) / (etaC * etaO);
-      for (let p = 0; p < P && needWh > tiny; p++) {
-        if (k.panelReach[p * S + s] !== 1) continue;
-        const take = Math.min(needWh, promised[p * S + s] ?? 0);
-        if (!(take > 0)) continue;
-        needWh -= take;
-        harvestInto(i, row, p, s, take);
-        // Booked as spilled when the harvest step left it over.
-        if (ledger) ledger[row + C.spilledWh] = (ledger[row + C.spilledWh] ?? 0) - take;
-      }
-    }
-  }
-
-  /**
-   * One top-up round: every device, in the trip's order, raised to `levelH` hours of its use (its target when
-   * Infinity), within its charge power left in the step, from the stores above their draw floors. False when the
-   * stores hold nothing above those floors.
-   */
-  function topUpRound(i: number, levelH: number): boolean {
-    const rateW = scratch.topUpRateW;
-    const givenW = scratch.topUpGivenW;
-    const powerLeftWh = scratch.topUpPowerLeftWh;
-    const fullWh = scratch.topUpFullWh;
-    let storesWh = 0;
-    for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (floorWh[s] ?? 0));
-    if (storesWh <= tiny) return false;
-    for (let d = 0; d < D; d++) {
-      const heldWh = devE[d] ?? 0;
-      const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-      const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
-      let wantWh = targetWh - heldWh;
-      if (wantWh <= tiny) continue;
-      let powerWh = powerLeftWh[d] ?? 0;
-      if (powerWh <= tiny) continue;
-      rateW.fill(0);
-      for (let group = 0; group < 2; group++) {
-        for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
-          m = Math.max(1, k.storeGroupSize[s] ?? 1);
-          if ((k.storeShared[s] ?? 0) !== group) continue;
-          const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
-          wantWh -= x * dt;
-          powerWh -= x * dt;
-        }
-      }
-      let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
-      for (let group = 0; group < 2; group++) {
-        for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
-          m = Math.max(1, k.storeGroupSize[s] ?? 1);
-          if ((k.storeShared[s] ?? 0) !== group) continue;
-          const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
-          shortWh -= extraW * dt;
-          powerWh -= extraW * dt;
-        }
-      }
-      powerLeftWh[d] = powerWh;
-      for (let s = 0; s < S; s++) {
-        const x = rateW[s] ?? 0;
-        if (!(x > 0)) continue;
-        const from = givenW[s * D + d] ?? 0;
-        topUp(d, s, from, from + x);
-        givenW[s * D + d] = from + x;
-      }
-    }
-    return true;
-  }
 
   /**
    * Gives device d at most `limitW` more (W of battery gain) in this round from the units s … s + m − 1 of one item,
@@ -667,7 +562,7 @@ export function runSky(
   function efficientCapW(d: number, s: number, fromW: number): number {
     const idx = s * D + d;
     if ((k.hullCount[idx] ?? 0) === 0) return 0;
-    const avail = (E[s] ?? 0) - (floorWh[s] ?? 0);
+    const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
     if (avail <= tiny) return 0;
     const off = k.hullOffset[idx] ?? 0;
     const g0 = k.hullGainW[off] ?? 0;
@@ -685,7 +580,7 @@ export function runSky(
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
     if (n < 2) return fromW;
-    const avail = (E[s] ?? 0) - (floorWh[s] ?? 0);
+    const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
     if (avail <= tiny) return fromW;
     const off = k.hullOffset[idx] ?? 0;
     let x = k.hullGainW[off + n - 1] ?? 0;
@@ -710,7 +605,7 @@ export function runSky(
     hullFlowsAt(off, n, etaDev, toW, flowsTo);
     const gain = (toW - fromW) * dt;
     const draw = (flowsTo.drawW - flowsFrom.drawW) * dt;
-    E[s] = Math.max(floorWh[s] ?? 0, (E[s] ?? 0) - draw);
+    E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
     devE[d] = (devE[d] ?? 0) + gain;
     if (ledger) {
       const row = dayIndexNow * columnCount;

@@ -21,6 +21,11 @@ export type HopResult =
   | { joined: true; leadItemId: string | null }
   | { joined: false; needs: { fromConnector: Connector; toConnector: Connector } };
 
+/** Whether a lead has these two ends (either way round): the only test `joinPorts` makes of a lead. */
+const leadJoins = (lead: KitLead, a: string, b: string): boolean =>
+  (lead.spec.fromConnector === a && lead.spec.toConnector === b) ||
+  (lead.spec.fromConnector === b && lead.spec.toConnector === a);
+
 /**
  * Joins a source port to a sink port. A captive cable on exactly one side whose plug is the other side's connector
  * joins them directly; otherwise the hop needs a lead with those two ends (either way round). Our rule, stated in the
@@ -30,12 +35,8 @@ export type HopResult =
 export function joinPorts(from: Port, to: Port, leads: readonly KitLead[]): HopResult {
   if (from.captiveCable !== to.captiveCable && from.connector === to.connector)
     return { joined: true, leadItemId: null };
-  for (const lead of leads) {
-    const { fromConnector: a, toConnector: b } = lead.spec;
-    if ((a === from.connector && b === to.connector) || (a === to.connector && b === from.connector)) {
-      return { joined: true, leadItemId: lead.itemId };
-    }
-  }
+  for (const lead of leads)
+    if (leadJoins(lead, from.connector, to.connector)) return { joined: true, leadItemId: lead.itemId };
   return { joined: false, needs: { fromConnector: from.connector, toConnector: to.connector } };
 }
 
@@ -188,18 +189,14 @@ export function panelReachesBank(panelPort: Port, bank: BankSpec, leads: readonl
   return joinPorts(panelPort, bank.inputPort, leads);
 }
 
-/** Whether a lead has these two ends (either way round): the only test `joinPorts` makes of a lead. */
-const leadJoins = (lead: KitLead, a: string, b: string): boolean =>
-  (lead.spec.fromConnector === a && lead.spec.toConnector === b) ||
-  (lead.spec.fromConnector === b && lead.spec.toConnector === a);
-
 /**
  * Whether a lead set can give a device's path from a bank with these port connectors a tail that a smaller set does
  * not: every lead of it must join a hop of the path — a bank port to the device, or with a converter, a bank port to
  * its input or its output to the device — and a pair only gives something new with a lead on each hop. A path through
  * a set that leaves a lead unused is the path of the smaller set, which is searched too. Every port counts, whatever
  * volts it offers, so the test may keep a set that gives nothing new but never skips one that does. At 200 items the
- * lead sets made 94,000 path searches per trip; 23,000 with this test (10,700 with `boostFitsBank` too), and the same paths are found (`connections.test.ts`).
+ * lead sets made 94,000 path searches per trip; 23,000 with this test (10,700 with `boostFitsBank` too), and the same
+ * paths are found (`lead-sets.test.ts`).
  * @example leadSetMayAddTail([usbCToUsbC], ['usb-a'], undefined, 'usb-c') // false: no port of this bank is USB-C
  */
 export function leadSetMayAddTail(

@@ -8,6 +8,19 @@ import type { TripSolarSeries } from '../sun/trip-solar-types.js';
 const phoneDevice = (share = 0.5): TripDevice => ({ deviceId: 'phone', spec: testPhone(share) });
 const bankLine = (count = 1, itemId = 'bank'): KitEntry => ({ itemId, count, spec: testBank() });
 const phoneLead: KitEntry = { itemId: 'lead-a-c', count: 1, spec: testLead('usb-a', 'usb-c') };
+/**
+ * A sunless trip on which a "light" phone (first in the trip's order, `lightShare` of its 15 Wh a day) and a "hungry" one
+ * (0.9 a day) share one bank through one lead, with no reserve.
+ */
+function lightAndHungryOnOneBank(nights: number, lightShare: number, capacityMah: number) {
+  const solar = syntheticTripSolar({ nights, peakWm2: 0 });
+  const devices: TripDevice[] = [
+    { deviceId: 'light', spec: testPhone(lightShare) },
+    { deviceId: 'hungry', spec: testPhone(0.9) },
+  ];
+  const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah }) }, phoneLead];
+  return { solar, result: simulateKit({ solar, kit, devices, reserveShare: 0 }) };
+}
 
 function polarNight(nights: number): TripSolarSeries {
   return syntheticTripSolar({ nights, peakWm2: 0, lowC: -20, highC: -12 });
@@ -281,13 +294,7 @@ describe('top-ups go to the device holding the fewest hours of its use first', (
   // cannot give both: the hungry phone, holding fewer hours, is topped up first and takes the whole bank (3.145 ×
   // 0.85 = 2.67 Wh into its battery, within its 10 W charge power in the first hour); the light one gets nothing.
   // Filled in the trip's order instead, the light phone would have taken 2.8 Wh of it first.
-  const solar = syntheticTripSolar({ nights: 3, peakWm2: 0 });
-  const devices: TripDevice[] = [
-    { deviceId: 'light', spec: testPhone(0.5) },
-    { deviceId: 'hungry', spec: testPhone(0.9) },
-  ];
-  const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah: 1000 }) }, phoneLead];
-  const result = simulateKit({ solar, kit, devices, reserveShare: 0 });
+  const { result } = lightAndHungryOnOneBank(3, 0.5, 1000);
   const toppedUpWh = (deviceId: string): number =>
     result.schedule
       .filter((s) => s.kind === 'top-up' && s.toId === deviceId && s.dayIndex === 0)
@@ -307,13 +314,7 @@ describe('rounds past the hour unit run only in the last hours of a camp window'
   // more (its use left, about 25 Wh, is over 15); hungry holds 9.94 Wh (17.7 h). Hungry is topped up at once; light only
   // in the last 2 h of the camp window (06:00 and 07:00), so the bank keeps its energy through the night for whoever
   // runs low. Before, light was topped up to full at 16:00 too. Hand calculation.
-  const solar = syntheticTripSolar({ nights: 7, peakWm2: 0 });
-  const devices: TripDevice[] = [
-    { deviceId: 'light', spec: testPhone(0.25) },
-    { deviceId: 'hungry', spec: testPhone(0.9) },
-  ];
-  const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah: 10000 }) }, phoneLead];
-  const result = simulateKit({ solar, kit, devices, reserveShare: 0 });
+  const { solar, result } = lightAndHungryOnOneBank(7, 0.25, 10000);
   const firstNight = result.schedule.filter((s) => s.kind === 'top-up' && s.dayIndex === 0);
   const startsOf = (deviceId: string): string[] =>
     firstNight.filter((s) => s.toId === deviceId).map((s) => s.startLocalTime);

@@ -75,55 +75,42 @@ export interface SkyScratch {
   harvestTierCount: number;
   /** Per store: 1 when the current panel water-fills it in the current tier. */
   harvestFillSet: Uint8Array;
-  /** Per store: the charge rate (W of battery gain) it gives the device being topped up, in this round of the step. */
+  /** Per store: the charge rate (W of battery gain) it gives the device being topped up, in this step. */
   topUpRateW: Float64Array;
   /** Per store: what it can give the device being topped up in the current pass (W of battery gain). */
   topUpUnitCapW: Float64Array;
-  /** Per store × device: the rate (W of battery gain) already given in this step's earlier rounds. */
-  topUpGivenW: Float64Array;
   /** Per device: its target in this step (full, or its use left; 0 for a device that is not topped up), Wh. */
   topUpFullWh: Float64Array;
   /** Per device: its charge power left in this step, as battery gain (Wh). */
   topUpPowerLeftWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
-  /** The hours of use the top-up rounds' shares scale (`topUpUnitH`; fixed by the kit and the devices' use). */
+  /** The hour unit that early camp top-ups stop at a multiple of (`topUpUnitH`; fixed by the kit and the devices' use). */
   topUpUnitH: number;
 }
 
-/**
- * The rounds of a camp step's top-ups, as hours of its use a device's battery holds: each round tops every device (in
- * the trip's order) up to that many hours, the last to its full target. The device that holds the fewest hours is
- * filled first, so when the stores run short the devices share what is left and every battery serves as a buffer,
- * instead of the first devices staying full while a later one — often the radio — runs dry (common practice: charge
- * whatever is lowest first). The hours are these shares of the kit's hour unit (`topUpUnitH`: the fewest hours any
- * topped-up device's full battery holds at its mean use), a tenth at a time up to that unit, then by about half up to
- * 20 units (the fixed hours went to 72 h; a kit whose hungriest device holds a few hours still shares the others' later
- * rounds evenly): so a round's target in Wh (hours × the device's hourly use) stays the same when every device uses
- * more by one factor, and no device moves into an earlier round. (A rise in one device's use alone still moves the
- * unit when that device sets it.) Hours fixed in the clock (2, 4, 6 … 72 h, as first built) moved those targets with
- * demand: a hungrier device crossed a round's line and was filled sooner, then drew less in later steps, and the soak
- * found stores higher with more demand (README, Dispatch, known gap (3)). Coarser rounds are cheaper but share a camp
- * less evenly (a geometric grid of 11 lost 19 g on a bench locker).
+/*
+ * A camp step's top-ups run in one pass, the devices in the trip's order, each raised once to a level fixed by the
+ * clock: `earlyCampUnits` of the kit's hour unit of its use early in the camp window, its target in the window's last
+ * `fillBeforeLeavingH`. Rounds that raised first whichever device held the fewest hours (up to 2026-12-04) found kits
+ * 5–37 g lighter on six of the ten 50-item bench lockers (45 g heavier on one), but a device's place among the others
+ * then moved with its demand, and with it which store its charge power went to: a store could end higher with more
+ * demand (README, Dispatch, "One pass").
  */
-const topUpLevelShares = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1, 1.5, 2, 3, 4, 6, 9, 14, 20, Infinity];
-
-/**
- * Rounds above this share of the hour unit fill devices past the hours the hungriest one's battery holds; they run only
- * in the last `fillBeforeLeavingH` of a camp window. Run at every camp step, they topped the phone up to full at the
- * start of the evening with energy that a radio, held to its charge power, needed later that night, and the radio ran
- * dry with the phone still holding half a day's use — kits the daily model passed, so the solver cut them off one by
- * one. Measured on the ten 50-item bench lockers (seeds 50–59, 14 nights): see shared/README.md, Dispatch.
- */
-const restrainedAboveShare = 1;
-/** The last hours of a camp window, in which every round runs: devices leave camp topped up (common practice). */
+/** The last hours of a camp window, in which devices are raised to their targets: they leave camp topped up. */
 const fillBeforeLeavingH = 2;
+/**
+ * Before those hours a device is raised only as far as this many hour units of its use, so the banks keep energy
+ * through the night for whichever device runs low. Chosen on the ten 50-item bench lockers (seeds 50–59, 14 nights;
+ * README, Dispatch): 1 unit left one locker at the search's round cap (1,450 g), 2 units cost 72 g on another, 1.5
+ * the least in all.
+ */
+const earlyCampUnits = 1.5;
 interface HullFlows {
   drawW: number;
   converterLossW: number;
   deviceLossW: number;
 }
-const flowsFrom: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
 const flowsTo: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
 
 /** Allocates scratch buffers for a compiled kit. */
@@ -140,7 +127,6 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
     topUpUnitCapW: new Float64Array(k.storeCount),
-    topUpGivenW: new Float64Array(k.storeCount * k.deviceCount),
     topUpFullWh: new Float64Array(k.deviceCount),
     topUpPowerLeftWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
@@ -149,8 +135,8 @@ export function skyScratch(k: CompiledKit): SkyScratch {
 }
 
 /**
- * The hour unit of the top-up rounds: the fewest hours any topped-up device's full battery holds at its mean hourly use
- * (Infinity when none uses anything). It scales as 1 / demand when every device's use scales alike, so each round's
+ * The hour unit of the top-ups: the fewest hours any topped-up device's full battery holds at its mean hourly use
+ * (Infinity when none uses anything). It scales as 1 / demand when every device's use scales alike, so the early camp
  * target in Wh does not move.
  */
 function topUpUnitH(k: CompiledKit): number {
@@ -240,13 +226,13 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 }
 
 /**
- * Runs one design sky step by step: harvest into the stores with the most room (levelling room, within input limits,
- * none below 0 °C; tier by tier, a store only after the stores that outrank it), then each device uses its
- * demand for the step from its own battery, then — in the camp window — the devices that need charging are topped up,
- * in rounds by the hours of use their batteries hold (the device holding fewest first): from the stores only they reach
- * first, then from shared stores; to full, or — for a device that reaches a shared store — from every store only as far
- * as it will still use (merit order, down to each store's reserve, over the paths' hull, within the device's charge
- * power).
+ * Runs one design sky step by step: each device uses its demand for the step from its own battery; in the camp window
+ * the devices that need charging are topped up in one pass, in the trip's order, each to a level fixed by the clock
+ * (1.5 hour units of its use early in camp, its target in the last hours): from the stores only they reach first, then
+ * from shared stores; to full, or — for a device that reaches a shared store — from every store only as far as it will
+ * still use (merit order, down to each store's reserve, over the paths' hull, within the device's charge power); then
+ * the step's harvest goes into the stores with the most room (levelling room, within input limits, none below 0 °C;
+ * tier by tier, a store only after the stores that outrank it), so a bank a device drew in the step takes its sun.
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(
@@ -336,7 +322,103 @@ export function runSky(
     }
     const frozen = k.stepFrozen[i] === 1;
 
-    // 1. Harvest.
+    // 1. Devices use their step's share of the day's demand from their own batteries; a device that can run live from a
+    //    12 V pack takes what its battery lacks straight from its packs (merit order, down to each reserve).
+    for (let d = 0; d < D; d++) {
+      const need = (k.deviceDemandWhPerH[d] ?? 0) * dt;
+      const have = devE[d] ?? 0;
+      let used = Math.min(have, need);
+      devE[d] = have - used;
+      if (need - used > tiny) used += runLive(d, need - used);
+      if (ledger) {
+        ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + used;
+        if (need > used) ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + (need - used);
+      }
+      if (need - used > eps && !dry) {
+        dry = { stepIndex: i, dayIndex: day, deviceIndex: d, reason: dryReason(k, d, i), shortWh: need - used };
+        if (stopAtDry) return finish();
+      }
+    }
+
+    // 2. Camp top-ups of the devices that need charging, each store down to its reserve: first from the stores no other
+    //    device reaches (merit order), then from the shared stores (merit order). A device that reaches no shared store
+    //    is filled to full; one that does, only as far as it will still use for the rest of the trip, from every store —
+    //    so it never takes from another's bank what it does not need, and its target moves with its demand the same way
+    //    for all its stores (filled to full from its own bank but to its use left from a shared one, more demand let it
+    //    fill from the shared bank and then leave harvest in its own bank). The device's own charge power is shared between
+    //    stores (it may be moved from store to store within a step); within a store it may be switched between paths (the
+    //    hull). Two passes over the stores in that order: first each store gives at most its most efficient path's full
+    //    rate; then, only while the device holds less than the least level from which it reaches the trip's end charging
+    //    at those rates (`leastLevelsWh`), the stores speed up, in the same order, within the charge power left, each
+    //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
+    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
+    //    step (not always in later steps: see the README's known gap (3)).
+    //    One pass per step, the devices in the trip's order, each raised once: early in the camp window only up to
+    //    `earlyCampUnits` of the kit's hour unit of its use (`topUpUnitH`), in the window's last hours
+    //    (`fillBeforeLeavingH`) to its target. The order and the level are fixed by the kit and the clock, never by what
+    //    a device holds, so each step is a fixed sequence of greedy draws, monotone in every store's energy and in the
+    //    demand (README, Dispatch).
+    if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
+      const rateW = scratch.topUpRateW;
+      const powerLeftWh = scratch.topUpPowerLeftWh;
+      const fullWh = scratch.topUpFullWh;
+      // Each device's target for the step (full, or its use left).
+      let anyWants = false;
+      for (let d = 0; d < D; d++) {
+        powerLeftWh[d] = (k.deviceGainMaxW[d] ?? 0) * dt;
+        fullWh[d] = 0;
+        if (k.deviceTopsUp[d] !== 1) continue;
+        const cap = k.deviceCapWh[d] ?? 0;
+        const heldWh = devE[d] ?? 0;
+        if (cap - heldWh <= tiny) continue;
+        // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
+        // rest of the trip; any other device to full.
+        const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+        const targetWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
+        fullWh[d] = targetWh;
+        if (targetWh - heldWh > tiny) anyWants = true;
+      }
+      // Early in a camp window a device is raised only to `earlyCampUnits` hour units; in its last hours, to its target.
+      const levelH = (k.stepCampLeftH[i] ?? 0) > fillBeforeLeavingH ? earlyCampUnits * scratch.topUpUnitH : Infinity;
+      if (anyWants)
+        for (let d = 0; d < D; d++) {
+          const heldWh = devE[d] ?? 0;
+          const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
+          const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
+          let wantWh = targetWh - heldWh;
+          if (wantWh <= tiny) continue;
+          let powerWh = powerLeftWh[d] ?? 0;
+          if (powerWh <= tiny) continue;
+          rateW.fill(0);
+          for (let group = 0; group < 2; group++) {
+            for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
+              m = Math.max(1, k.storeGroupSize[s] ?? 1);
+              if ((k.storeShared[s] ?? 0) !== group) continue;
+              const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
+              wantWh -= x * dt;
+              powerWh -= x * dt;
+            }
+          }
+          let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
+          for (let group = 0; group < 2; group++) {
+            for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
+              m = Math.max(1, k.storeGroupSize[s] ?? 1);
+              if ((k.storeShared[s] ?? 0) !== group) continue;
+              const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
+              shortWh -= extraW * dt;
+              powerWh -= extraW * dt;
+            }
+          }
+          powerLeftWh[d] = powerWh;
+          for (let s = 0; s < S; s++) {
+            const x = rateW[s] ?? 0;
+            if (!(x > 0)) continue;
+            topUp(d, s, x);
+          }
+        }
+    }
+
+    // 3. Harvest, after the top-ups (see the README, Dispatch: a bank a device drew in this step takes the step's sun).
     let availWh = 0;
     for (let p = 0; p < P; p++) {
       const w = (series[p]?.[i] ?? 0) * dt;
@@ -398,120 +480,6 @@ export function runSky(
       if (frozen) ledger[row + C.frozenHours] = (ledger[row + C.frozenHours] ?? 0) + dt;
     }
 
-    // 2. Devices use their step's share of the day's demand from their own batteries; a device that can run live from a
-    //    12 V pack takes what its battery lacks straight from its packs (merit order, down to each reserve).
-    for (let d = 0; d < D; d++) {
-      const need = (k.deviceDemandWhPerH[d] ?? 0) * dt;
-      const have = devE[d] ?? 0;
-      let used = Math.min(have, need);
-      devE[d] = have - used;
-      if (need - used > tiny) used += runLive(d, need - used);
-      if (ledger) {
-        ledger[row + C.deliveredWh] = (ledger[row + C.deliveredWh] ?? 0) + used;
-        if (need > used) ledger[row + C.unmetWh] = (ledger[row + C.unmetWh] ?? 0) + (need - used);
-      }
-      if (need - used > eps && !dry) {
-        dry = { stepIndex: i, dayIndex: day, deviceIndex: d, reason: dryReason(k, d, i), shortWh: need - used };
-        if (stopAtDry) return finish();
-      }
-    }
-
-    // 3. Camp top-ups of the devices that need charging, each store down to its reserve: first from the stores no other
-    //    device reaches (merit order), then from the shared stores (merit order). A device that reaches no shared store
-    //    is filled to full; one that does, only as far as it will still use for the rest of the trip, from every store —
-    //    so it never takes from another's bank what it does not need, and its target moves with its demand the same way
-    //    for all its stores (filled to full from its own bank but to its use left from a shared one, more demand let it
-    //    fill from the shared bank and then leave harvest in its own bank). The device's own charge power is shared between
-    //    stores (it may be moved from store to store within a step); within a store it may be switched between paths (the
-    //    hull). Two passes over the stores in that order: first each store gives at most its most efficient path's full
-    //    rate; then, only while the device holds less than the least level from which it reaches the trip's end charging
-    //    at those rates (`leastLevelsWh`), the stores speed up, in the same order, within the charge power left, each
-    //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
-    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
-    //    step (not always in later steps: see the README's known gap (3)).
-    //    All of it in rounds (`topUpLevelShares`): each round raises every device, in the trip's order, only up to that
-    //    many hours of its use, within its target, so the device holding the fewest hours is filled first. A later round
-    //    goes on from the rates earlier rounds gave (each store's draw costed from there on the hull) and the charge
-    //    power they left. Rounds past the hour unit run only in the last hours of the camp window
-    //    (`restrainedAboveShare`): which rounds a step runs is fixed by its clock, never by the sun or the demand.
-    if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
-      const rateW = scratch.topUpRateW;
-      const givenW = scratch.topUpGivenW;
-      const powerLeftWh = scratch.topUpPowerLeftWh;
-      const fullWh = scratch.topUpFullWh;
-      givenW.fill(0);
-      // Each device's target for the step (full, or its use left), and the fewest hours held among the devices below
-      // theirs: rounds at or below those hours give nobody anything.
-      let fewestH = Infinity;
-      let anyWants = false;
-      for (let d = 0; d < D; d++) {
-        powerLeftWh[d] = (k.deviceGainMaxW[d] ?? 0) * dt;
-        fullWh[d] = 0;
-        if (k.deviceTopsUp[d] !== 1) continue;
-        const cap = k.deviceCapWh[d] ?? 0;
-        const heldWh = devE[d] ?? 0;
-        if (cap - heldWh <= tiny) continue;
-        // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
-        // rest of the trip; any other device to full.
-        const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-        const targetWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
-        fullWh[d] = targetWh;
-        if (targetWh - heldWh <= tiny) continue;
-        anyWants = true;
-        if (demandWhPerH > 0) fewestH = Math.min(fewestH, heldWh / demandWhPerH);
-      }
-      // Early in a camp window the rounds stop at the hour unit; in its last hours they go on to the targets.
-      const lastShare = (k.stepCampLeftH[i] ?? 0) > fillBeforeLeavingH ? restrainedAboveShare : Infinity;
-      if (anyWants)
-        for (const share of topUpLevelShares) {
-          if (share > lastShare) break;
-          const levelH = share === Infinity ? Infinity : share * scratch.topUpUnitH;
-          // With no unit (no device uses anything) every round but the last would be the last one again.
-          if (share !== Infinity && !(levelH < Infinity)) continue;
-          if (levelH !== Infinity && levelH <= fewestH) continue;
-          let storesWh = 0;
-          for (let s = 0; s < S; s++) storesWh += Math.max(0, (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0));
-          if (storesWh <= tiny) break;
-          for (let d = 0; d < D; d++) {
-            const heldWh = devE[d] ?? 0;
-            const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-            const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
-            let wantWh = targetWh - heldWh;
-            if (wantWh <= tiny) continue;
-            let powerWh = powerLeftWh[d] ?? 0;
-            if (powerWh <= tiny) continue;
-            rateW.fill(0);
-            for (let group = 0; group < 2; group++) {
-              for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
-                m = Math.max(1, k.storeGroupSize[s] ?? 1);
-                if ((k.storeShared[s] ?? 0) !== group) continue;
-                const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
-                wantWh -= x * dt;
-                powerWh -= x * dt;
-              }
-            }
-            let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
-            for (let group = 0; group < 2; group++) {
-              for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
-                m = Math.max(1, k.storeGroupSize[s] ?? 1);
-                if ((k.storeShared[s] ?? 0) !== group) continue;
-                const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
-                shortWh -= extraW * dt;
-                powerWh -= extraW * dt;
-              }
-            }
-            powerLeftWh[d] = powerWh;
-            for (let s = 0; s < S; s++) {
-              const x = rateW[s] ?? 0;
-              if (!(x > 0)) continue;
-              const from = givenW[s * D + d] ?? 0;
-              topUp(d, s, from, from + x);
-              givenW[s * D + d] = from + x;
-            }
-          }
-        }
-    }
-
     const t = totals();
     const margin = capAboveFloor > 0 ? t.above / capAboveFloor : 1;
     if (margin < worstMargin) worstMargin = margin;
@@ -531,20 +499,18 @@ export function runSky(
   return finish();
 
   /**
-   * Gives device d at most `limitW` more (W of battery gain) in this round from the units s … s + m − 1 of one item,
+   * Gives device d at most `limitW` more (W of battery gain) in this step from the units s … s + m − 1 of one item,
    * taken as one: what they can give together in the pass — along their most efficient paths (`efficient`), else sped
    * up along their hulls above the rates they give already — split in proportion to what each can give, and added to
    * `topUpRateW`. Returns the rate given.
    */
   function giveFromUnits(d: number, s: number, m: number, efficient: boolean, limitW: number): number {
     const rateW = scratch.topUpRateW;
-    const givenW = scratch.topUpGivenW;
     const unitCapW = scratch.topUpUnitCapW;
     let capW = 0;
     for (let u = s; u < s + m; u++) {
-      const given = givenW[u * D + d] ?? 0;
-      const fromW = given + (rateW[u] ?? 0);
-      const c = efficient ? efficientCapW(d, u, given) : Math.max(0, fastestRateW(d, u, given, fromW) - fromW);
+      const fromW = rateW[u] ?? 0;
+      const c = efficient ? efficientCapW(d, u) : Math.max(0, fastestRateW(d, u, fromW) - fromW);
       unitCapW[u] = c;
       capW += c;
     }
@@ -555,11 +521,10 @@ export function runSky(
   }
 
   /**
-   * First pass of a top-up: the further rate (W of battery gain) store s can give device d in this round along its most
-   * efficient path (the hull's first point, of which earlier rounds gave `fromW`), within what it holds above its
-   * reserve.
+   * First pass of a top-up: the rate (W of battery gain) store s can give device d along its most efficient path (the
+   * hull's first point), within what it holds above its reserve.
    */
-  function efficientCapW(d: number, s: number, fromW: number): number {
+  function efficientCapW(d: number, s: number): number {
     const idx = s * D + d;
     if ((k.hullCount[idx] ?? 0) === 0) return 0;
     const avail = (E[s] ?? 0) - (k.storeFloorWh[s] ?? 0);
@@ -567,16 +532,15 @@ export function runSky(
     const off = k.hullOffset[idx] ?? 0;
     const g0 = k.hullGainW[off] ?? 0;
     const c0 = k.hullDrawW[off] ?? 0;
-    const x = Math.min(g0 - fromW, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
+    const x = Math.min(g0, c0 > 0 ? ((avail / dt) * g0) / c0 : g0);
     return x > 0 ? x : 0;
   }
 
   /**
    * Second pass: the fastest rate store s can give device d once sped up from `fromW`, along its hull and within what
-   * it holds above its reserve (the step's draw at the new rate above what the rate `givenW` of earlier rounds already
-   * drew, never more).
+   * it holds above its reserve (the step's whole draw at the new rate, never more).
    */
-  function fastestRateW(d: number, s: number, givenW: number, fromW: number): number {
+  function fastestRateW(d: number, s: number, fromW: number): number {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
     if (n < 2) return fromW;
@@ -584,35 +548,29 @@ export function runSky(
     if (avail <= tiny) return fromW;
     const off = k.hullOffset[idx] ?? 0;
     let x = k.hullGainW[off + n - 1] ?? 0;
-    // What the rate already given in this step drew is gone from the store: the step's draw above it must fit.
-    const drawnW = hullDrawAt(k, off, n, givenW);
-    if ((hullDrawAt(k, off, n, x) - drawnW) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt + drawnW);
+    if (hullDrawAt(k, off, n, x) * dt > avail) x = hullGainAtDraw(k, off, n, avail / dt);
     return Math.max(fromW, x);
   }
 
   /**
-   * Tops device d up from store s in step i from rate `fromW` (what earlier rounds of the step gave) to `toW` (W at the
-   * battery, on the hull, already within the store's energy above its reserve and the device's charge power): the draw
-   * and losses are the hull's at `toW` less those at `fromW`; returns the Wh it gained.
+   * Tops device d up from store s in the current step at rate `toW` (W at the battery, on the hull, already within the
+   * store's energy above its reserve and the device's charge power): the draw and losses are the hull's at `toW`;
+   * returns the Wh it gained.
    */
-  function topUp(d: number, s: number, fromW: number, toW: number): number {
+  function topUp(d: number, s: number, toW: number): number {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
-    if (n === 0 || !(toW > fromW)) return 0;
+    if (n === 0 || !(toW > 0)) return 0;
     const off = k.hullOffset[idx] ?? 0;
-    const etaDev = k.deviceChargeEff[d] ?? 1;
-    hullFlowsAt(off, n, etaDev, fromW, flowsFrom);
-    hullFlowsAt(off, n, etaDev, toW, flowsTo);
-    const gain = (toW - fromW) * dt;
-    const draw = (flowsTo.drawW - flowsFrom.drawW) * dt;
+    hullFlowsAt(off, n, k.deviceChargeEff[d] ?? 1, toW, flowsTo);
+    const gain = toW * dt;
+    const draw = flowsTo.drawW * dt;
     E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
     devE[d] = (devE[d] ?? 0) + gain;
     if (ledger) {
       const row = dayIndexNow * columnCount;
-      ledger[row + C.converterLossWh] =
-        (ledger[row + C.converterLossWh] ?? 0) + (flowsTo.converterLossW - flowsFrom.converterLossW) * dt;
-      ledger[row + C.deviceChargeLossWh] =
-        (ledger[row + C.deviceChargeLossWh] ?? 0) + (flowsTo.deviceLossW - flowsFrom.deviceLossW) * dt;
+      ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + flowsTo.converterLossW * dt;
+      ledger[row + C.deviceChargeLossWh] = (ledger[row + C.deviceChargeLossWh] ?? 0) + flowsTo.deviceLossW * dt;
       ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
     }
     if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);

@@ -285,16 +285,17 @@ describe('two devices sharing a bank (hand calculation)', () => {
   });
 });
 
-describe('top-ups go to the device holding the fewest hours of its use first', () => {
-  // Synthetic trip, 3 nights, no sun: walk 08–16, camp 16–08. One small bank both phones reach through one lead:
-  // 1,000 mAh × 3.7 V × 0.85 = 3.145 Wh usable, no reserve. "Light" (first in the trip's order): 15 Wh, uses 7.5 Wh a
-  // day (0.3125 Wh/h); "hungry" (second): 15 Wh, 13.5 Wh a day (0.5625 Wh/h). At the first camp step (16:00), after
-  // 8 h of walking and that hour's use: light holds 15 − 9 × 0.3125 = 12.19 Wh (39 h of its use), hungry 15 − 9 ×
-  // 0.5625 = 9.94 Wh (17.7 h). Both want more (each will use more than 15 Wh before the trip ends), but the bank
-  // cannot give both: the hungry phone, holding fewer hours, is topped up first and takes the whole bank (3.145 ×
-  // 0.85 = 2.67 Wh into its battery, within its 10 W charge power in the first hour); the light one gets nothing.
-  // Filled in the trip's order instead, the light phone would have taken 2.8 Wh of it first.
-  const { result } = lightAndHungryOnOneBank(3, 0.5, 1000);
+describe('early in camp a device is raised only to 1.5 hour units of its use', () => {
+  // Synthetic trip, 4 nights, no sun: walk 08–16, camp 16–08. One small bank both phones reach through one lead:
+  // 1,000 mAh × 3.7 V × 0.85 = 3.145 Wh usable, no reserve. "Light" (first in the trip's order): 15 Wh, uses 4.5 Wh a
+  // day (0.1875 Wh/h); "hungry" (second): 15 Wh, 13.5 Wh a day (0.5625 Wh/h). At the first camp step (16:00), after
+  // 8 h of walking and that hour's use: light holds 15 − 9 × 0.1875 = 13.31 Wh (71 h of its use), hungry 15 − 9 ×
+  // 0.5625 = 9.94 Wh (17.7 h). Both want more (light will use 95 × 0.1875 = 17.8 Wh before the trip ends, hungry
+  // more), but the bank cannot give both. The hour unit is the fewest hours a full battery holds: hungry's, 15 / 0.5625
+  // = 26.7 h; early in camp a device is raised to 1.5 units, 40 h. Only the hungry phone is below it: it takes the
+  // whole bank (3.145 × 0.85 = 2.67 Wh into its battery, within its 10 W charge power in the first hour); the light
+  // one gets nothing. Filled to their targets in the trip's order instead, the light phone would have taken 2 Wh first.
+  const { result } = lightAndHungryOnOneBank(4, 0.3, 1000);
   const toppedUpWh = (deviceId: string): number =>
     result.schedule
       .filter((s) => s.kind === 'top-up' && s.toId === deviceId && s.dayIndex === 0)
@@ -306,7 +307,7 @@ describe('top-ups go to the device holding the fewest hours of its use first', (
   });
 });
 
-describe('rounds past the hour unit run only in the last hours of a camp window', () => {
+describe('devices are raised past the hour unit only in the last hours of a camp window', () => {
   // Synthetic trip, 7 nights, no sun: walk 08–16, camp 16–08, one large bank (10,000 mAh × 3.7 V × 0.85 = 31.45 Wh) both
   // phones reach through one lead, no reserve. "Light": 15 Wh, a quarter of it a day (0.15625 Wh/h, 96 h when full);
   // "hungry": 15 Wh, 0.9 of it a day (0.5625 Wh/h, 26.7 h when full) — the hour unit, the fewest hours a full battery
@@ -333,9 +334,31 @@ describe('rounds past the hour unit run only in the last hours of a camp window'
   });
 });
 
+describe('harvest comes after the top-ups in each step', () => {
+  // Synthetic trip, 2 nights, full sun 06–18 (peak 1,000 W/m²), walk 08–16, camp 16–08; a phone (15 Wh, 7.5 Wh a day) on
+  // a bank that a panel feeds. The bank is full all through the walk (nothing draws on it, the panel's harvest spills).
+  // At 16:00 the phone, 9 h of use below full, is topped up from the bank; the panel's 16:00 harvest then goes into the
+  // room that leaves. Harvest first, the full bank would have spilled that hour's sun and then been drawn.
+  const solar = syntheticTripSolar({ nights: 2 });
+  const kit: KitEntry[] = [
+    bankLine(),
+    phoneLead,
+    { itemId: 'panel', count: 1, spec: testUsbPanel({ outputPort: { connector: 'usb-c', captiveCable: true } }) },
+  ];
+  const result = simulateKit({ solar, kit, devices: [phoneDevice(0.5)], reserveShare: 0.1 });
+  const firstDay = result.schedule.filter((s) => s.dayIndex === 0);
+
+  it('the bank the phone drew at 16:00 takes the panel’s 16:00 harvest', () => {
+    expect(firstDay.find((s) => s.kind === 'top-up')?.startLocalTime).toBe('16:00');
+    const harvest = firstDay.filter((s) => s.kind === 'harvest' && s.toId === 'bank#1');
+    expect(harvest[0]?.startLocalTime).toBe('16:00');
+    expect(harvest[0]?.energyWh).toBeGreaterThan(0);
+  });
+});
+
 describe('the charging schedule', () => {
-  it('lists one session per store, device and run of camp hours, however many top-up rounds a step takes', () => {
-    // Two phones on one bank: their top-ups go in rounds by hours held, often several in one step.
+  it('lists one session per store, device and run of camp hours', () => {
+    // Two phones on one bank, topped up at different hours of the camp window.
     const solar = syntheticTripSolar({ nights: 3, peakWm2: 0 });
     const devices: TripDevice[] = [
       { deviceId: 'light', spec: testPhone(0.5) },

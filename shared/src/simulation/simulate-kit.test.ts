@@ -307,14 +307,14 @@ describe('early in camp a device is raised only to 1.5 hour units of its use', (
   });
 });
 
-describe('devices are raised past the hour unit only in the last hours of a camp window', () => {
+describe('devices are raised past 1.5 hour units only in the last hours of a camp window', () => {
   // Synthetic trip, 7 nights, no sun: walk 08–16, camp 16–08, one large bank (10,000 mAh × 3.7 V × 0.85 = 31.45 Wh) both
   // phones reach through one lead, no reserve. "Light": 15 Wh, a quarter of it a day (0.15625 Wh/h, 96 h when full);
   // "hungry": 15 Wh, 0.9 of it a day (0.5625 Wh/h, 26.7 h when full) — the hour unit, the fewest hours a full battery
-  // holds. At 16:00 on day 0, after 9 h of use, light holds 15 − 9 × 0.15625 = 13.59 Wh (87 h, past one unit) and wants
+  // holds. At 16:00 on day 0, after 9 h of use, light holds 15 − 9 × 0.15625 = 13.59 Wh (87 h, past 1.5 units, 40 h) and wants
   // more (its use left, about 25 Wh, is over 15); hungry holds 9.94 Wh (17.7 h). Hungry is topped up at once; light only
   // in the last 2 h of the camp window (06:00 and 07:00), so the bank keeps its energy through the night for whoever
-  // runs low. Before, light was topped up to full at 16:00 too. Hand calculation.
+  // runs low. Raised to its target at every camp step, light would have been filled at 16:00 too. Hand calculation.
   const { solar, result } = lightAndHungryOnOneBank(7, 0.25, 10000);
   const firstNight = result.schedule.filter((s) => s.kind === 'top-up' && s.dayIndex === 0);
   const startsOf = (deviceId: string): string[] =>

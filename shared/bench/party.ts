@@ -40,7 +40,7 @@ export function benchParty(): void {
     const c = partyCase(seed);
     if (!c) continue;
     found++;
-    const runs = { warmupRuns: 1, runs: 5, budgetMs: 30_000 };
+    const runs = { warmupRuns: 5, runs: 5, budgetMs: 30_000 };
     measure(
       `planTrip optimum (solo), seed ${seed}, 12 item types, 7 nights`,
       () => planTrip(c.input, { withExtras: false, now: clock }),

@@ -81,8 +81,6 @@ export interface SkyScratch {
   topUpUnitCapW: Float64Array;
   /** Per device: its target in this step (full, or its use left; 0 for a device that is not topped up), Wh. */
   topUpFullWh: Float64Array;
-  /** Per device: its charge power left in this step, as battery gain (Wh). */
-  topUpPowerLeftWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
   /** The hour unit that early camp top-ups stop at a multiple of (`topUpUnitH`; fixed by the kit and the devices' use). */
@@ -128,7 +126,6 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     topUpRateW: new Float64Array(k.storeCount),
     topUpUnitCapW: new Float64Array(k.storeCount),
     topUpFullWh: new Float64Array(k.deviceCount),
-    topUpPowerLeftWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
     topUpUnitH: topUpUnitH(k),
   };
@@ -360,12 +357,10 @@ export function runSky(
     //    demand (README, Dispatch).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
-      const powerLeftWh = scratch.topUpPowerLeftWh;
       const fullWh = scratch.topUpFullWh;
       // Each device's target for the step (full, or its use left).
       let anyWants = false;
       for (let d = 0; d < D; d++) {
-        powerLeftWh[d] = (k.deviceGainMaxW[d] ?? 0) * dt;
         fullWh[d] = 0;
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
@@ -385,31 +380,14 @@ export function runSky(
           const heldWh = devE[d] ?? 0;
           const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
           const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
-          let wantWh = targetWh - heldWh;
-          if (wantWh <= tiny) continue;
-          let powerWh = powerLeftWh[d] ?? 0;
-          if (powerWh <= tiny) continue;
+          const wantWh = targetWh - heldWh;
+          const powerWh = (k.deviceGainMaxW[d] ?? 0) * dt;
+          if (wantWh <= tiny || powerWh <= tiny) continue;
           rateW.fill(0);
-          for (let group = 0; group < 2; group++) {
-            for (let s = 0, m = 1; s < S && wantWh > tiny && powerWh > tiny; s += m) {
-              m = Math.max(1, k.storeGroupSize[s] ?? 1);
-              if ((k.storeShared[s] ?? 0) !== group) continue;
-              const x = giveFromUnits(d, s, m, true, Math.min(wantWh, powerWh) / dt);
-              wantWh -= x * dt;
-              powerWh -= x * dt;
-            }
-          }
-          let shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (targetWh - wantWh);
-          for (let group = 0; group < 2; group++) {
-            for (let s = 0, m = 1; s < S && shortWh > tiny && powerWh > tiny; s += m) {
-              m = Math.max(1, k.storeGroupSize[s] ?? 1);
-              if ((k.storeShared[s] ?? 0) !== group) continue;
-              const extraW = giveFromUnits(d, s, m, false, Math.min(shortWh, powerWh) / dt);
-              shortWh -= extraW * dt;
-              powerWh -= extraW * dt;
-            }
-          }
-          powerLeftWh[d] = powerWh;
+          // Efficient paths up to the level; then, below the least level, the sped-up ones within the power left.
+          const efficientWh = passOverStores(d, true, wantWh, powerWh);
+          const shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (heldWh + efficientWh);
+          if (shortWh > tiny) passOverStores(d, false, shortWh, powerWh - efficientWh);
           for (let s = 0; s < S; s++) {
             const x = rateW[s] ?? 0;
             if (!(x > 0)) continue;
@@ -497,6 +475,24 @@ export function runSky(
     }
   }
   return finish();
+
+  /**
+   * One pass of device d's top-up over its stores — first those only it reaches, then the shared ones, each group in
+   * merit order — along the most efficient paths (`efficient`) or sped up along the hulls: at most `limitWh` of battery
+   * gain within `powerWh`, added to `topUpRateW`. Returns the Wh given.
+   */
+  function passOverStores(d: number, efficient: boolean, limitWh: number, powerWh: number): number {
+    const allWh = Math.min(limitWh, powerWh);
+    let leftWh = allWh;
+    for (let group = 0; group < 2; group++) {
+      for (let s = 0, m = 1; s < S && leftWh > tiny; s += m) {
+        m = Math.max(1, k.storeGroupSize[s] ?? 1);
+        if ((k.storeShared[s] ?? 0) !== group) continue;
+        leftWh -= giveFromUnits(d, s, m, efficient, leftWh / dt) * dt;
+      }
+    }
+    return allWh - leftWh;
+  }
 
   /**
    * Gives device d at most `limitW` more (W of battery gain) in this step from the units s … s + m − 1 of one item,

@@ -8,7 +8,7 @@
  * without its most efficient spare converter and without every spare, not with every set of spares left home; 5 — the
  * camp top-up rounds at shares of the kit's own hour unit (the fewest hours a full device battery holds), not at fixed
  * hours, so a rise of every device's use moves no round's target; 6 — the rounds past that unit run only in the last
- * 2 h of a camp window; 7 — no rounds: one top-up pass per camp step in the trip's order (to the hour unit early in camp,
- * to the target in its last 2 h), and each step's harvest after its top-ups.
+ * 2 h of a camp window; 7 — no rounds: one top-up pass per camp step in the trip's order (to 1.5 hour units early in
+ * camp, 2 in the hour before the last, the target in the last hour), and each step's harvest after its top-ups.
  */
 export const planModelVersion = 'gramwatt-plan-7';

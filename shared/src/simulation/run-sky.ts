@@ -89,21 +89,22 @@ export interface SkyScratch {
 
 /*
  * A camp step's top-ups run in one pass, the devices in the trip's order, each raised once to a level fixed by the
- * clock: `earlyCampUnits` of the kit's hour unit of its use early in the camp window, its target in the window's last
- * `fillBeforeLeavingH`. Rounds that raised first whichever device held the fewest hours (up to 2026-12-04) found kits
- * 5–37 g lighter on six of the ten 50-item bench lockers (45 g heavier on one), but a device's place among the others
- * then moved with its demand, and with it which store its charge power went to: a store could end higher with more
- * demand (README, Dispatch, "One pass").
+ * clock: `earlyCampUnits` of the kit's hour unit of its use early in the camp window, `leavingUnits` in the hour before
+ * the last (`fillBeforeLeavingH`), its target in the last hour. Rounds that raised first whichever device held the
+ * fewest hours (up to 2026-12-04) found kits lighter on some bench lockers, but a device's place among the others then
+ * moved with its demand, and with it which store its charge power went to: a store could end higher with more demand
+ * (README, Dispatch, "One pass"). The levels were chosen on the ten 50-item bench lockers (seeds 50–59, 14 nights;
+ * README): 1 unit early left one locker at the search's round cap, 2 units cost 72 g on another; without the hour
+ * before the last, two lockers came out 17 and 22 g heavier; anything from 1.75 to 2.5 units there gives the same kits.
  */
-/** The last hours of a camp window, in which devices are raised to their targets: they leave camp topped up. */
+/** The last hours of a camp window, in which devices are raised past the early level: they leave camp topped up. */
 const fillBeforeLeavingH = 2;
-/**
- * Before those hours a device is raised only as far as this many hour units of its use, so the banks keep energy
- * through the night for whichever device runs low. Chosen on the ten 50-item bench lockers (seeds 50–59, 14 nights;
- * README, Dispatch): 1 unit left one locker at the search's round cap (1,450 g), 2 units cost 72 g on another, 1.5
- * the least in all.
- */
+/** The last hour of a camp window, in which devices are raised to their targets. */
+const lastHourH = 1;
+/** Hour units a device is raised to early in a camp window, so the banks keep energy for whichever device runs low. */
 const earlyCampUnits = 1.5;
+/** Hour units a device is raised to in the hour before the last, so the last hour's fill starts from even levels. */
+const leavingUnits = 2;
 interface HullFlows {
   drawW: number;
   converterLossW: number;
@@ -373,8 +374,11 @@ export function runSky(
         fullWh[d] = targetWh;
         if (targetWh - heldWh > tiny) anyWants = true;
       }
-      // Early in a camp window a device is raised only to `earlyCampUnits` hour units; in its last hours, to its target.
-      const levelH = (k.stepCampLeftH[i] ?? 0) > fillBeforeLeavingH ? earlyCampUnits * scratch.topUpUnitH : Infinity;
+      // Early in a camp window a device is raised only to `earlyCampUnits` hour units, in the hour before the last to
+      // `leavingUnits`, in the last hour to its target.
+      const leftH = k.stepCampLeftH[i] ?? 0;
+      const units = leftH > fillBeforeLeavingH ? earlyCampUnits : leftH > lastHourH ? leavingUnits : Infinity;
+      const levelH = units === Infinity ? Infinity : units * scratch.topUpUnitH;
       if (anyWants)
         for (let d = 0; d < D; d++) {
           const heldWh = devE[d] ?? 0;

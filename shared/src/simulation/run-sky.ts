@@ -79,8 +79,6 @@ export interface SkyScratch {
   topUpRateW: Float64Array;
   /** Per store: what it can give the device being topped up in the current pass (W of battery gain). */
   topUpUnitCapW: Float64Array;
-  /** Per device: its target in this step (full, or its use left; 0 for a device that is not topped up), Wh. */
-  topUpFullWh: Float64Array;
   /** Per device × step: `leastLevelsWh` (fixed by the kit and the devices' use, never by sun). */
   leastLevelWh: Float64Array;
   /** The hour unit that early camp top-ups stop at a multiple of (`topUpUnitH`; fixed by the kit and the devices' use). */
@@ -110,7 +108,7 @@ interface HullFlows {
   converterLossW: number;
   deviceLossW: number;
 }
-const flowsTo: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
+const flowsAt: HullFlows = { drawW: 0, converterLossW: 0, deviceLossW: 0 };
 
 /** Allocates scratch buffers for a compiled kit. */
 export function skyScratch(k: CompiledKit): SkyScratch {
@@ -126,7 +124,6 @@ export function skyScratch(k: CompiledKit): SkyScratch {
     harvestFillSet: new Uint8Array(k.storeCount),
     topUpRateW: new Float64Array(k.storeCount),
     topUpUnitCapW: new Float64Array(k.storeCount),
-    topUpFullWh: new Float64Array(k.deviceCount),
     leastLevelWh: leastLevelsWh(k),
     topUpUnitH: topUpUnitH(k),
   };
@@ -226,11 +223,12 @@ export function ledgerCell(record: SkyRecord, dayIndex: number, column: (typeof 
 /**
  * Runs one design sky step by step: each device uses its demand for the step from its own battery; in the camp window
  * the devices that need charging are topped up in one pass, in the trip's order, each to a level fixed by the clock
- * (1.5 hour units of its use early in camp, its target in the last hours): from the stores only they reach first, then
- * from shared stores; to full, or — for a device that reaches a shared store — from every store only as far as it will
- * still use (merit order, down to each store's reserve, over the paths' hull, within the device's charge power); then
- * the step's harvest goes into the stores with the most room (levelling room, within input limits, none below 0 °C;
- * tier by tier, a store only after the stores that outrank it), so a bank a device drew in the step takes its sun.
+ * (1.5 hour units of its use early in camp, 2 in the hour before the last, its target in the last hour): from the
+ * stores only they reach first, then from shared stores; to full, or — for a device that reaches a shared store — from
+ * every store only as far as it will still use (merit order, down to each store's reserve, over the paths' hull, within
+ * the device's charge power); then the step's harvest goes into the stores with the most room (levelling room, within
+ * input limits, none below 0 °C; tier by tier, a store only after the stores that outrank it), so a bank a device drew
+ * in the step takes its sun.
  * `stopAtDry` returns at the first dry step (the fast feasibility path).
  */
 export function runSky(
@@ -349,20 +347,20 @@ export function runSky(
     //    rate; then, only while the device holds less than the least level from which it reaches the trip's end charging
     //    at those rates (`leastLevelsWh`), the stores speed up, in the same order, within the charge power left, each
     //    store's extra draw taken from the hull above the rate it already gives. A faster, lossier path thus costs
-    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the
-    //    step (not always in later steps: see the README's known gap (3)).
+    //    energy only when the device would otherwise run dry, and more demand only raises every store's rate in the step.
     //    One pass per step, the devices in the trip's order, each raised once: early in the camp window only up to
-    //    `earlyCampUnits` of the kit's hour unit of its use (`topUpUnitH`), in the window's last hours
-    //    (`fillBeforeLeavingH`) to its target. The order and the level are fixed by the kit and the clock, never by what
-    //    a device holds, so each step is a fixed sequence of greedy draws, monotone in every store's energy and in the
-    //    demand (README, Dispatch).
+    //    `earlyCampUnits` of the kit's hour unit of its use (`topUpUnitH`), in the hour before the last to
+    //    `leavingUnits`, in the last hour to its target. The order and the level are fixed by the kit and the clock,
+    //    never by what a device holds, so each step is a fixed sequence of greedy draws, monotone in every store's energy
+    //    and in the demand (README, Dispatch).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
-      const fullWh = scratch.topUpFullWh;
-      // Each device's target for the step (full, or its use left).
-      let anyWants = false;
+      // Early in a camp window a device is raised only to `earlyCampUnits` hour units, in the hour before the last to
+      // `leavingUnits`, in the last hour to its target.
+      const leftH = k.stepCampLeftH[i] ?? 0;
+      const units = leftH > fillBeforeLeavingH ? earlyCampUnits : leftH > lastHourH ? leavingUnits : Infinity;
+      const levelH = units === Infinity ? Infinity : units * scratch.topUpUnitH;
       for (let d = 0; d < D; d++) {
-        fullWh[d] = 0;
         if (k.deviceTopsUp[d] !== 1) continue;
         const cap = k.deviceCapWh[d] ?? 0;
         const heldWh = devE[d] ?? 0;
@@ -370,34 +368,18 @@ export function runSky(
         // A device that reaches a shared store is filled, from every store, only up to what it will still use for the
         // rest of the trip; any other device to full.
         const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-        const targetWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
-        fullWh[d] = targetWh;
-        if (targetWh - heldWh > tiny) anyWants = true;
+        const fullWh = k.deviceSharesStores[d] === 1 ? Math.min(cap, demandWhPerH * (k.stepHoursAfter[i] ?? 0)) : cap;
+        const targetWh = levelH === Infinity ? fullWh : Math.min(fullWh, levelH * demandWhPerH);
+        const wantWh = targetWh - heldWh;
+        const powerWh = (k.deviceGainMaxW[d] ?? 0) * dt;
+        if (wantWh <= tiny || powerWh <= tiny) continue;
+        rateW.fill(0);
+        // Efficient paths up to the level; then, below the least level, the sped-up ones within the power left.
+        const efficientWh = passOverStores(d, true, wantWh, powerWh);
+        const shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (heldWh + efficientWh);
+        if (shortWh > tiny) passOverStores(d, false, shortWh, powerWh - efficientWh);
+        for (let s = 0; s < S; s++) topUp(d, s, rateW[s] ?? 0);
       }
-      // Early in a camp window a device is raised only to `earlyCampUnits` hour units, in the hour before the last to
-      // `leavingUnits`, in the last hour to its target.
-      const leftH = k.stepCampLeftH[i] ?? 0;
-      const units = leftH > fillBeforeLeavingH ? earlyCampUnits : leftH > lastHourH ? leavingUnits : Infinity;
-      const levelH = units === Infinity ? Infinity : units * scratch.topUpUnitH;
-      if (anyWants)
-        for (let d = 0; d < D; d++) {
-          const heldWh = devE[d] ?? 0;
-          const demandWhPerH = k.deviceDemandWhPerH[d] ?? 0;
-          const targetWh = levelH === Infinity ? (fullWh[d] ?? 0) : Math.min(fullWh[d] ?? 0, levelH * demandWhPerH);
-          const wantWh = targetWh - heldWh;
-          const powerWh = (k.deviceGainMaxW[d] ?? 0) * dt;
-          if (wantWh <= tiny || powerWh <= tiny) continue;
-          rateW.fill(0);
-          // Efficient paths up to the level; then, below the least level, the sped-up ones within the power left.
-          const efficientWh = passOverStores(d, true, wantWh, powerWh);
-          const shortWh = Math.min(targetWh, scratch.leastLevelWh[d * k.stepCount + i] ?? 0) - (heldWh + efficientWh);
-          if (shortWh > tiny) passOverStores(d, false, shortWh, powerWh - efficientWh);
-          for (let s = 0; s < S; s++) {
-            const x = rateW[s] ?? 0;
-            if (!(x > 0)) continue;
-            topUp(d, s, x);
-          }
-        }
     }
 
     // 3. Harvest, after the top-ups (see the README, Dispatch: a bank a device drew in this step takes the step's sun).
@@ -562,15 +544,15 @@ export function runSky(
     const n = k.hullCount[idx] ?? 0;
     if (n === 0 || !(toW > 0)) return 0;
     const off = k.hullOffset[idx] ?? 0;
-    hullFlowsAt(off, n, k.deviceChargeEff[d] ?? 1, toW, flowsTo);
+    hullFlowsAt(off, n, k.deviceChargeEff[d] ?? 1, toW, flowsAt);
     const gain = toW * dt;
-    const draw = flowsTo.drawW * dt;
+    const draw = flowsAt.drawW * dt;
     E[s] = Math.max(k.storeFloorWh[s] ?? 0, (E[s] ?? 0) - draw);
     devE[d] = (devE[d] ?? 0) + gain;
     if (ledger) {
       const row = dayIndexNow * columnCount;
-      ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + flowsTo.converterLossW * dt;
-      ledger[row + C.deviceChargeLossWh] = (ledger[row + C.deviceChargeLossWh] ?? 0) + flowsTo.deviceLossW * dt;
+      ledger[row + C.converterLossWh] = (ledger[row + C.converterLossWh] ?? 0) + flowsAt.converterLossW * dt;
+      ledger[row + C.deviceChargeLossWh] = (ledger[row + C.deviceChargeLossWh] ?? 0) + flowsAt.deviceLossW * dt;
       ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
     }
     if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);

@@ -19,7 +19,15 @@ function lightAndHungryOnOneBank(nights: number, lightShare: number, capacityMah
     { deviceId: 'hungry', spec: testPhone(0.9) },
   ];
   const kit: KitEntry[] = [{ itemId: 'bank', count: 1, spec: testBank({ capacityMah }) }, phoneLead];
-  return { solar, result: simulateKit({ solar, kit, devices, reserveShare: 0 }) };
+  const result = simulateKit({ solar, kit, devices, reserveShare: 0 });
+  /** What the light phone holds at the end of day 0's step at `localTime` in the first sky, Wh. */
+  const lightWhAt = (localTime: string): number => {
+    const units = result.stores.length + result.devices.length;
+    const step = solar.steps.findIndex((st) => st.dayIndex === 0 && st.localTime === localTime);
+    const lightIndex = result.stores.length + result.devices.findIndex((d) => d.deviceId === 'light');
+    return (result.skies[0] as (typeof result.skies)[number]).unitWhByStep[step * units + lightIndex] ?? Number.NaN;
+  };
+  return { result, lightWhAt };
 }
 
 function polarNight(nights: number): TripSolarSeries {
@@ -311,12 +319,12 @@ describe('devices are raised past 1.5 hour units only in the last hours of a cam
   // Synthetic trip, 7 nights, no sun: walk 08–16, camp 16–08, one large bank (10,000 mAh × 3.7 V × 0.85 = 31.45 Wh) both
   // phones reach through one lead, no reserve. "Light": 15 Wh, a quarter of it a day (0.15625 Wh/h, 96 h when full);
   // "hungry": 15 Wh, 0.9 of it a day (0.5625 Wh/h, 26.7 h when full) — the hour unit, the fewest hours a full battery
-  // holds. At 16:00 on day 0, after 9 h of use, light holds 15 − 9 × 0.15625 = 13.59 Wh (87 h, past 1.5 units, 40 h) and wants
-  // more (its use left, about 25 Wh, is over 15); hungry holds 9.94 Wh (17.7 h). Hungry is topped up at once. Light is
+  // holds. At 16:00 on day 0, after 9 h of use, light holds 15 − 9 × 0.15625 = 13.59 Wh (87 h, past 1.5 units, 40 h)
+  // and wants more (its use left, about 25 Wh, is over 15); hungry holds 9.94 Wh (17.7 h). Hungry is topped up at once. Light is
   // not raised at 06:00 either, the hour before the last, where the level is 2 units (53 h; it holds 11.40 Wh, 73 h),
   // only at 07:00, the last hour, to its target: the bank keeps its energy through the night for whoever runs low.
   // Raised to its target at every camp step, light would have been filled at 16:00 too. Hand calculation.
-  const { solar, result } = lightAndHungryOnOneBank(7, 0.25, 10000);
+  const { result, lightWhAt } = lightAndHungryOnOneBank(7, 0.25, 10000);
   const firstNight = result.schedule.filter((s) => s.kind === 'top-up' && s.dayIndex === 0);
   const startsOf = (deviceId: string): string[] =>
     firstNight.filter((s) => s.toId === deviceId).map((s) => s.startLocalTime);
@@ -327,11 +335,7 @@ describe('devices are raised past 1.5 hour units only in the last hours of a cam
   });
 
   it('the light phone leaves camp full', () => {
-    const sky = result.skies[0] as (typeof result.skies)[number];
-    const units = result.stores.length + result.devices.length;
-    const step = solar.steps.findIndex((st) => st.dayIndex === 0 && st.localTime === '07:00');
-    const lightIndex = result.stores.length + result.devices.findIndex((d) => d.deviceId === 'light');
-    expect(sky.unitWhByStep[step * units + lightIndex]).toBeCloseTo(15, 9);
+    expect(lightWhAt('07:00')).toBeCloseTo(15, 9);
   });
 });
 
@@ -340,18 +344,12 @@ describe('in the hour before the last a device is raised to 2 hour units', () =>
   // 15 − 9 × 0.220625 = 13.01 Wh (59 h, past 1.5 units: 40 h), so it waits; at 06:00 it holds 15 − 23 × 0.220625 =
   // 9.93 Wh after that hour's use (45 h), below 2 units (53.3 h), and is raised to 2 × 26.667 × 0.220625 = 11.7667 Wh
   // — not to its target, which waits for 07:00. Hand calculation.
-  const { solar, result } = lightAndHungryOnOneBank(7, 0.353, 10000);
-  const lightAt = (localTime: string): number => {
-    const units = result.stores.length + result.devices.length;
-    const step = solar.steps.findIndex((st) => st.dayIndex === 0 && st.localTime === localTime);
-    const lightIndex = result.stores.length + result.devices.findIndex((d) => d.deviceId === 'light');
-    return (result.skies[0] as (typeof result.skies)[number]).unitWhByStep[step * units + lightIndex] ?? Number.NaN;
-  };
+  const { lightWhAt } = lightAndHungryOnOneBank(7, 0.353, 10000);
 
   it('holds 11.7667 Wh after 06:00 and is full after 07:00', () => {
-    expect(lightAt('05:00')).toBeCloseTo(15 - 22 * 0.220625, 9);
-    expect(lightAt('06:00')).toBeCloseTo(2 * (15 / 0.5625) * 0.220625, 9);
-    expect(lightAt('07:00')).toBeCloseTo(15, 9);
+    expect(lightWhAt('05:00')).toBeCloseTo(15 - 22 * 0.220625, 9);
+    expect(lightWhAt('06:00')).toBeCloseTo(2 * (15 / 0.5625) * 0.220625, 9);
+    expect(lightWhAt('07:00')).toBeCloseTo(15, 9);
   });
 });
 

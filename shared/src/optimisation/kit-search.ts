@@ -27,8 +27,18 @@ export const defaultMaxRounds = 2_000;
 export const tieBreakCandidates = 3;
 /** The reason a master solve gives when the branch and bound ran out of its time (no MILP is tried then). */
 const outOfTime = 'master out of time';
-/** The reason when the master's search tree outgrows `maxOpenNodes` (the search stops; its best kit is shaved). */
+/**
+ * The reason when the master's search tree, past `maxOpenNodes`, let nodes go and has none left (the search stops; its
+ * best kit is shaved).
+ */
 const masterTooLarge = 'the model search grew too large for memory';
+/** The note of a kit found after the master let nodes go with lesser bounds (see `maxOpenNodes`). */
+const lettingGoNote =
+  'The model search let go of part of its tree to stay within memory: the kit works but may not be the lightest.';
+/** The note of a lighter kit the judge found working once a spare converter stays home. */
+const leftHomeNote = 'This kit works once a spare converter stays home; the search did not prove it the lightest.';
+/** The note of a kit found by a MILP solve that stopped on its timeout. */
+const timeoutNote = 'A model solve stopped on its timeout: the kit is feasible but may not be the lightest.';
 /** Rejected proposals a search keeps for the repair after a stop (each repair costs about twenty simulations). */
 export const keptProposals = 6;
 /** Default timeout of one MILP solve, ms. */
@@ -36,8 +46,20 @@ export const defaultSolverTimeoutMs = 10_000;
 
 /** One step of the search. */
 export type SearchStep =
-  /** The lightest kit not yet excluded that the judge accepts. `proven` is false if a solve stopped on its timeout. */
-  | { kind: 'found'; counts: Map<string, number>; massG: number; verdict: JudgeVerdict; proven: boolean }
+  /**
+   * The lightest kit not yet excluded that the judge accepts. `proven` is false if a solve stopped on its timeout or
+   * the master let nodes go; then `lowerBoundG` is the least any kit not excluded may weigh (else `massG`) and `note`
+   * says why.
+   */
+  | {
+      kind: 'found';
+      counts: Map<string, number>;
+      massG: number;
+      verdict: JudgeVerdict;
+      proven: boolean;
+      lowerBoundG: number;
+      note?: string;
+    }
   /** The model has no kit left: every kit not excluded was rejected. */
   | { kind: 'exhausted' }
   /** Round cap, time budget or a solver failure: `lowerBoundG` is the model's bound when it stopped. */
@@ -397,7 +419,8 @@ export function createKitSearch(
           status: 'optimal',
           objective: answer.massG / scale.massG,
           values: masterValues(presolved, answer.counts),
-          proven: true,
+          proven: answer.lowerBoundG >= answer.massG,
+          lowerBound: answer.lowerBoundG / scale.massG,
         };
       // Out of time: the MILP would have less than nothing; the caller stops on its budget.
       if (now() - startMs >= timeoutMs) return { status: 'failed', reason: outOfTime };
@@ -506,7 +529,10 @@ export function createKitSearch(
       const counts = kitFromValues(presolved, first.values);
       const massG = kitMassG(counts, problem.candidates);
       const proven = first.proven;
-      if (proven) lowerBoundG = massG;
+      // The master's bound holds for every kit its cuts allow, so for every kit the judge may still accept.
+      const boundG = proven ? massG : Math.ceil((first.lowerBound ?? 0) * scale.massG - 1e-6);
+      lowerBoundG = Math.max(lowerBoundG, Math.min(boundG, massG));
+      const note = proven ? undefined : first.lowerBound !== undefined ? lettingGoNote : timeoutNote;
       // A kit no larger than one already rejected (or known rejected: those are cuts from the start) is cut off by the
       // model; meeting one means the solver erred.
       if (insideRejected(counts))
@@ -533,10 +559,21 @@ export function createKitSearch(
           massG: kitMassG(works, problem.candidates),
           verdict: asPacked,
           proven: false,
+          // The cuts held off a kit that works once its spare converter stays home: they bound nothing here.
+          lowerBoundG: 0,
+          note: leftHomeNote,
         };
       }
       const chosen = tieBreak ? tieBreakAmong(counts, massG, verdict, deadlineMs) : { counts, verdict };
-      return { kind: 'found', counts: chosen.counts, massG, verdict: chosen.verdict, proven };
+      return {
+        kind: 'found',
+        counts: chosen.counts,
+        massG,
+        verdict: chosen.verdict,
+        proven,
+        lowerBoundG: proven ? massG : lowerBoundG,
+        ...(note ? { note } : {}),
+      };
     }
   };
 

@@ -34,6 +34,8 @@ export type LinearSolution =
       values: ReadonlyMap<string, number>;
       /** False when the solver stopped on its timeout: the point is feasible but may not be optimal. */
       proven: boolean;
+      /** When not proven: a lower bound on the objective of every point, if the solver knows one. */
+      lowerBound?: number;
     }
   | { status: 'infeasible' }
   | {

@@ -226,18 +226,40 @@ describe('a stopped search', () => {
     expect(unboundedCalls).toBeGreaterThan(calls + 5);
   });
 
-  it('stops when the model search outgrows its memory limit and still answers with a judged feasible kit', () => {
+  it('lets model nodes go at its memory limit: answers a judged kit, and its lower bound never passes the true optimum', () => {
+    let lettingGo = 0;
     let stopped = 0;
+    let proven = 0;
     for (let seed = 1; seed <= 20; seed++) {
       const world = smallSyntheticWorld(71_000 + seed);
       const problem = syntheticProblem(world);
       const judge = syntheticJudge(world);
-      const answer = optimiseKit(problem, judge, { masterOpenLimit: 1, tieBreakByMargin: false });
-      if (answer.status !== 'best-so-far') continue;
-      stopped++;
-      expect(answer.notes.join(' ')).toContain('too large');
-      expect(judge(kitCounts(answer.kit.lines)).feasible).toBe(true);
+      const truth = exhaustiveLightestKit(problem.candidates, judge).best;
+      for (const masterOpenLimit of [1, 2, 4, 16]) {
+        const answer = optimiseKit(problem, judge, { masterOpenLimit, tieBreakByMargin: false });
+        if (answer.status === 'nothing-feasible') {
+          expect(truth).toBeNull();
+          continue;
+        }
+        if (!truth) throw new Error(`seed ${seed}: a kit was answered where none works`);
+        expect(judge(kitCounts(answer.kit.lines)).feasible).toBe(true);
+        expect(answer.kit.massG).toBeGreaterThanOrEqual(truth.massG);
+        if (answer.status !== 'best-so-far') {
+          // Proven: nodes let go held nothing lighter.
+          expect(answer.kit.massG).toBe(truth.massG);
+          proven++;
+          continue;
+        }
+        expect(answer.lowerBoundG).toBeLessThanOrEqual(truth.massG);
+        const notes = answer.notes.join(' ');
+        if (notes.includes('let go of part of its tree')) lettingGo++;
+        else if (notes.includes('too large')) stopped++;
+        else throw new Error(`seed ${seed}: a best-so-far answer says neither why: ${notes}`);
+      }
     }
+    // Each outcome occurs: a search that goes on past its limit, one that has nothing left, one proven.
+    expect(lettingGo).toBeGreaterThan(3);
     expect(stopped).toBeGreaterThan(5);
+    expect(proven).toBeGreaterThan(5);
   });
 });

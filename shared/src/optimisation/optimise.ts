@@ -234,14 +234,12 @@ export const shaveGraceMs = 5_000;
 function foundAnswer(step: Extract<SearchStep, { kind: 'found' }>, search: KitSearch): OptimiseAnswer {
   const problem = search.problem;
   const kit = choice(step.counts, search, step.verdict);
-  const notes = step.proven
-    ? []
-    : ['A model solve stopped on its timeout: the kit is feasible but may not be the lightest.'];
+  const notes = step.proven || !step.note ? [] : [step.note];
   if (!step.proven)
     return {
       status: 'best-so-far',
       kit,
-      lowerBoundG: 0,
+      lowerBoundG: Math.min(step.lowerBoundG, kit.massG),
       ...limitFields(problem, kit.massG),
       stats: statsOf(search),
       notes,

@@ -5,7 +5,7 @@ import type { BatterySpec } from '../schemas/station-items.js';
 import { needsChargingPath } from '../demand/device-demand.js';
 import { planningContext, type PlanningContext } from './build-problem.js';
 import { gramsText } from './plain-words.js';
-import type { PlanningGear } from './planning-input.js';
+import type { PlanningGear, PlanningInput } from './planning-input.js';
 
 /**
  * Why the kit gives the 12 V devices the path it does, in plain words: when the gear holds both a 12 V pack and a
@@ -42,6 +42,22 @@ function pathWords(context: PlanningContext, counts: KitCounts, path: 'pack' | '
   return `${banks === 1 ? 'one bank' : `${countWords[banks] ?? banks} banks`} and a boost converter`;
 }
 
+/** The 12 V devices the trip needs to charge. */
+function chargedRadios(context: PlanningContext): PlanningInput['devices'] {
+  const tripDays = context.solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
+  return context.input.devices.filter((d) => d.spec.chargesVia === '12v-dc' && needsChargingPath(d.spec, tripDays));
+}
+
+/**
+ * Whether a path choice may apply to some kit: a 12 V device needs charging and the gear holds both a 12 V pack and a
+ * boost converter (a plan leaves it time, see `planTimeShares`).
+ * @example pathChoicePossible(context) // false for a trip with no 12 V radio
+ */
+export function pathChoicePossible(context: PlanningContext): boolean {
+  const owned = context.input.gear.filter((g) => g.countOwned > 0);
+  return chargedRadios(context).length > 0 && owned.some((g) => g.spec.kind === 'battery') && owned.some(isBoost);
+}
+
 /**
  * The path choice for a kit, or null when it does not apply (no 12 V device needing charging, or the gear lacks one
  * of the paths). `timeBudgetMs` bounds the extra solve; when it runs out the answer says the comparison is open.
@@ -53,10 +69,8 @@ export function pathChoice(
   options: { now?: () => number; timeBudgetMs?: number; knownRejected?: readonly KitCounts[] } = {},
 ): PlanPathChoice | null {
   const { input } = context;
-  const tripDays = context.solar.steps.reduce((h, s) => h + s.durationH, 0) / 24;
-  const radios = input.devices.filter((d) => d.spec.chargesVia === '12v-dc' && needsChargingPath(d.spec, tripDays));
-  const owned = input.gear.filter((g) => g.countOwned > 0);
-  if (radios.length === 0 || !owned.some((g) => g.spec.kind === 'battery') || !owned.some(isBoost)) return null;
+  if (!pathChoicePossible(context)) return null;
+  const radios = chargedRadios(context);
 
   const inKit = (test: (g: PlanningGear) => boolean) =>
     [...counts].some(([id, n]) => n > 0 && context.gearById.has(id) && test(context.gearById.get(id) as PlanningGear));

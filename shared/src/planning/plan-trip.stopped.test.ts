@@ -11,7 +11,8 @@ import { summerTripInput } from './invented-trips.js';
 import { planningContext } from './build-problem.js';
 import { gramsText } from './plain-words.js';
 import type { PlanningInput } from './planning-input.js';
-import { namedBoundShare, planTrip } from './plan-trip.js';
+import { namedBoundShare, planTimeShares, planTrip, type PlanOptions } from './plan-trip.js';
+import { pathChoicePossible } from './path-choice.js';
 
 /** Eight nights at 46.5° N in July with a phone, a headlamp and a 12 V radio, and 30 item types of invented gear. */
 const input = (seed: number): PlanningInput => summerTripInput(seededRandom(seed), 30, 8);
@@ -97,5 +98,22 @@ describe('a plan whose search stops early', () => {
       );
     }
     expect(seen).toBeGreaterThan(0);
+  });
+
+  it('gives the optimum half its time when swaps and prices follow, and all of it when nothing follows', () => {
+    const trip = input(1);
+    // No 12 V pack in this gear, so no path choice follows the optimum either.
+    expect(pathChoicePossible(planningContext(trip))).toBe(false);
+    const budgetsMs: (number | undefined)[] = [];
+    const chooseKit: PlanOptions['chooseKit'] = (context, search, options) => {
+      budgetsMs.push(options.timeBudgetMs);
+      return optimiseKit(context.problem, context.judge, options, search);
+    };
+    // A clock that never moves: each part's share is of the whole budget.
+    const stillClock = () => 0;
+    planTrip(trip, { now: stillClock, timeBudgetMs: 10_000, chooseKit });
+    planTrip(trip, { now: stillClock, timeBudgetMs: 10_000, withExtras: false, chooseKit });
+    expect(budgetsMs).toEqual([10_000 * planTimeShares.optimum, 10_000]);
+    expect(planTimeShares.optimum).toBeLessThan(1);
   });
 });

@@ -34,7 +34,7 @@ const outOfTime = 'master out of time';
 const masterTooLarge = 'the model search grew too large for memory';
 /** The note of a kit found after the master let nodes go with lesser bounds (see `maxOpenNodes`). */
 const lettingGoNote =
-  'The model search let go of part of its tree to stay within memory: the kit works but may not be the lightest.';
+  'The search reached its memory limit and set aside the kits it judged least likely to be lighter: this kit works, but a lighter one may exist.';
 /** The note of a lighter kit the judge found working once a spare converter stays home. */
 const leftHomeNote = 'This kit works once a spare converter stays home; the search did not prove it the lightest.';
 /** The note of a kit found by a MILP solve that stopped on its timeout. */

@@ -252,7 +252,7 @@ describe('a stopped search', () => {
         }
         expect(answer.lowerBoundG).toBeLessThanOrEqual(truth.massG);
         const notes = answer.notes.join(' ');
-        if (notes.includes('let go of part of its tree')) lettingGo++;
+        if (notes.includes('reached its memory limit and set aside')) lettingGo++;
         else if (notes.includes('too large')) stopped++;
         else throw new Error(`seed ${seed}: a best-so-far answer says neither why: ${notes}`);
       }

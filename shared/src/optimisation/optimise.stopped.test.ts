@@ -262,4 +262,30 @@ describe('a stopped search', () => {
     expect(stopped).toBeGreaterThan(5);
     expect(proven).toBeGreaterThan(5);
   });
+
+  it('never answers a kit heavier than one its search accepted, a core search’s kit included, when nodes are let go', () => {
+    let checked = 0;
+    for (let seed = 1; seed <= 20; seed++) {
+      // 8–23 item types, 4–8 days (seed 15 at 8 open nodes answered 638 g after accepting a 521 g kit).
+      const world = randomSyntheticWorld(seededRandom(73_000 + seed), {
+        itemTypes: 8 + (seed % 16),
+        maxOwned: 2,
+        dayCount: 4 + (seed % 5),
+        skyCount: 2,
+      });
+      const problem = syntheticProblem(world);
+      const judge = syntheticJudge(world);
+      for (const masterOpenLimit of [2, 4, 8]) {
+        // A core of the locker is searched first (from 1 active item), and its kit judged by the whole search.
+        const options = { masterOpenLimit, coreMinItems: 1, tieBreakByMargin: false };
+        const search = createKitSearch(problem, judge, options);
+        const answer = optimiseKit(problem, judge, options, search);
+        const accepted = search.lightestAccepted;
+        if (answer.status === 'nothing-feasible' || !accepted) continue;
+        checked++;
+        expect(answer.kit.massG).toBeLessThanOrEqual(kitMassG(accepted, problem.candidates));
+      }
+    }
+    expect(checked).toBeGreaterThan(20);
+  });
 });

@@ -74,6 +74,9 @@ export const maxOpenNodes = 200_000;
  */
 export const keptShareWhenFull = 0.5;
 
+/** Nodes let go whose bounds a full search brings up to date at most, each a node check (see `reboundLeast`). */
+export const reboundLimitWhenFull = 20_000;
+
 /**
  * Node bytes above which a search's closures are not kept compiled between plans (ours: the 50-item bench search holds
  * under 1 MB of nodes, a stopped 200-item one tens of MB).
@@ -571,6 +574,32 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       }
     };
 
+    /** The least stored bound of nodes `gone` (in the heap's order: the first). */
+    const staleLeast = (gone: readonly number[]): number =>
+      gone.length > 0 ? (store.boundG[gone[0] as number] as number) : Infinity;
+
+    /**
+     * The least bound of nodes `gone` (in the heap's order) under the rows of now: each node's stored bound is from its
+     * last check, often many rounds old, so the least of them is brought up to date first, until the next stored bound
+     * is no lower than the least found (the rest are no lower either), or after `reboundLimitWhenFull` nodes. A node
+     * that holds no kit the rows allow counts for nothing.
+     */
+    const reboundLeast = (gone: readonly number[]): number => {
+      let least = Infinity;
+      for (let k = 0; k < gone.length; k++) {
+        const id = gone[k] as number;
+        const stored = store.boundG[id] as number;
+        if (stored >= least) break;
+        if (k >= reboundLimitWhenFull) return stored;
+        store.read(id, lb, ub);
+        if (!check(id)) continue;
+        let boundG = store.boundG[id] as number;
+        if (store.surrogateDue[id] === 1) boundG = Math.max(boundG, (store.floorG[id] as number) + surrogateOf(id));
+        least = Math.min(least, boundG);
+      }
+      return least;
+    };
+
     /** Puts node `id` back in line. */
     const putBack = (id: number): void => open.push(id, store.boundG[id] as number, store.units[id] as number);
     keepCompiled('master solve', check, surrogateOf, openChild, split, putBack);
@@ -595,9 +624,10 @@ export function createMasterSearch(pre: PresolvedProblem): MasterSearch {
       }
       if (open.size >= (limits.openLimit ?? maxOpenNodes)) {
         putBack(id);
+        const gone = open.shed(Math.floor(open.size * keptShareWhenFull));
+        open.shedBoundG = Math.min(open.shedBoundG, copyNodes ? staleLeast(gone) : reboundLeast(gone));
         // A copy's nodes opened before it are the kept heap's: only its own go.
-        for (const gone of open.shed(Math.floor(open.size * keptShareWhenFull)))
-          if (!copyNodes || store.openedIn[gone] === serial) store.close(gone);
+        for (const g of gone) if (!copyNodes || store.openedIn[g] === serial) store.close(g);
         continue;
       }
       store.read(id, lb, ub);
@@ -736,8 +766,8 @@ class NodeHeap {
     return other;
   }
   /**
-   * Keeps the first `keep` nodes in the heap's order and returns the others' ids (for the caller to close). A sorted
-   * array is a heap, so the kept ones stay in line.
+   * Keeps the first `keep` nodes in the heap's order and returns the others' ids in that order (for the caller to bound,
+   * see `shedBoundG`, and close). A sorted array is a heap, so the kept ones stay in line.
    */
   shed(keep: number): number[] {
     const { nodes, bounds, units } = this;
@@ -748,7 +778,6 @@ class NodeHeap {
     const at = (from: readonly number[], k: number): number => from[order[k] as number] as number;
     const gone: number[] = [];
     for (let k = keep; k < order.length; k++) gone.push(at(nodes, k));
-    if (order.length > keep) this.shedBoundG = Math.min(this.shedBoundG, at(bounds, keep));
     const kept = Array.from(order.subarray(0, keep));
     this.bounds = kept.map((k) => bounds[k] as number);
     this.units = kept.map((k) => units[k] as number);

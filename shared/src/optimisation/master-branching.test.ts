@@ -351,7 +351,7 @@ describe('the limits of a master solve', () => {
     expect(gramsOrStatus(exact)).toBe(gramsOrStatus(answer));
   });
 
-  it('let the worse half of the open nodes go at their limit, and bound what they held', () => {
+  it('let the open nodes with the highest bounds go at their limit, and bound what they held', () => {
     const { pre, cuts, answer } = worldNeeding(256);
     if (answer.status !== 'optimal') throw new Error('worldNeeding answers an optimum');
     const outcomes = new Set<string>();

@@ -44,8 +44,8 @@ const stillClock = (): number => 0;
  * large ones feel this: their model search goes on past its memory cap and takes whatever time it is given. Measured on
  * the 200-item bench plan: with all the time left at each part, the optimum took all 40 s of its budget and every gram
  * price was left out; with these shares, at 20 s, the optimum took 10.2 s (the same 1,479 g), then five swaps and all
- * four prices, 15.4 s in all. At 3 s the parts overrun their shares (a repair judges kits of 0.6–0.9 s each) and two
- * prices are left out.
+ * four prices, 15.4 s in all. At 3 s the parts overrun their shares (a repair judges kits of 0.6–0.9 s each), and a
+ * price or two may be left out (in one of four runs read in full).
  */
 export const planTimeShares = { optimum: 0.5, pathChoice: 0.3, swaps: 0.4 } as const;
 

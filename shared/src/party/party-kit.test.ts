@@ -5,6 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { KitCandidate, KitJudge, OptimisationProblem } from '../optimisation/types.js';
+import { createKitSearch, type KitSearch } from '../optimisation/kit-search.js';
 import { optimisePartyKit } from './party-kit.js';
 import type { PartyCarrier, PartyProblem, WalkingFeed } from './types.js';
 
@@ -120,6 +121,34 @@ describe('optimisePartyKit: worked cases', () => {
       ['ash', 400, 100],
       ['birch', 0, 0],
     ]);
+  });
+
+  it('says every kit is too heavy only when the search proved it, not after it set kits aside', () => {
+    const { problem, judge } = pool({ 'bank-big': 400, 'bank-a': 250, 'bank-b': 260 }, [
+      ['bank-big'],
+      ['bank-a', 'bank-b'],
+    ]);
+    const limits = [
+      { memberId: 'ash', gramLimitG: 300 },
+      { memberId: 'birch', gramLimitG: 200 },
+    ];
+    const proven = optimisePartyKit(party(problem, limits), judge);
+    expect(proven.notes.join(' ')).toContain('Every kit that keeps every device charged weighs more');
+    // The same search, but each kit after the first comes back as a search that set kits aside would give it: not
+    // proven, with nothing known below it.
+    const search = createKitSearch(problem, judge);
+    let steps = 0;
+    const settingAside: KitSearch = {
+      ...search,
+      next: (deadlineMs, stuck) => {
+        const step = search.next(deadlineMs, stuck);
+        return step.kind === 'found' && steps++ > 0 ? { ...step, proven: false, lowerBoundG: 0 } : step;
+      },
+    };
+    const unproven = optimisePartyKit(party(problem, limits), judge, {}, settingAside);
+    expect(unproven.status).toBe('over-limits');
+    expect(unproven.notes.join(' ')).not.toContain('Every kit');
+    expect(unproven.notes.join(' ')).toContain('one that fits may exist');
   });
 
   it('someone with no limit carries what the others cannot; a pool that cannot work says so', () => {

@@ -163,6 +163,12 @@ export function optimisePartyKit(
       return overLimits(['No kit that keeps every device charged can be shared within everyone’s limits.']);
     if (step.kind === 'stopped')
       return overLimits([`The search for a kit that fits everyone’s limits stopped (${step.reason}).`]);
+    // "Every kit" only when the search's bound says so: after the model search set kits aside (`maxOpenNodes`) a kit
+    // under the limit may be among them.
+    if (step.massG > capG && step.lowerBoundG <= capG)
+      return overLimits([
+        'The search for a kit that fits everyone’s limits reached its memory limit and set kits aside: those it kept weigh more than the limits allow, but one that fits may exist.',
+      ]);
     if (step.massG > capG)
       return overLimits([
         capG < limitG

@@ -16,8 +16,9 @@ import { keepCompiled, releaseCompiled } from '../jit/keep-compiled.js';
  * (propagated on floors and ceilings), a "no superset of" cut and the gram cap prune, a "not exactly" cut branches
  * like a "no larger than" cut when the floor kit is that kit.
  * Memory: when the open nodes reach their limit, the search lets go of those with the highest bounds and goes on with
- * the rest (`maxOpenNodes`, `keptShareWhenFull`). The least bound it let go of is then a lower bound on every kit it can no longer see, so an
- * answer at or under it is still proven the lightest; one above it is the lightest of the nodes kept, with that bound.
+ * the rest (`maxOpenNodes`, `keptShareWhenFull`). The least bound it let go of is then a lower bound on every kit it
+ * can no longer see, so an answer at or under it is still proven the lightest; one above it is the lightest of the
+ * nodes kept, with that bound.
  * Source: branch and bound (A. H. Land and A. G. Doig, An automatic method of solving discrete programming problems,
  * Econometrica 28(3), 1960); branching on a violated covering row is the usual set-covering scheme (E. Balas and
  * A. Ho, Set covering algorithms using cutting planes, heuristics, and subgradient optimization, Mathematical
@@ -62,9 +63,8 @@ export const defaultMasterNodeLimit = 2_000_000;
  * fields each, in `NodeStore`; a 200-item locker held 2.3 GB after 30 s with four-byte counts and no cap). Past it the
  * search keeps `keptShareWhenFull` of them, those with the least bounds, and goes on. It used to stop there instead,
  * with the repairs of its last proposals as the answer: a 75-item locker over 30 nights (bench seed 301) stopped after
- * 4 rounds and answered 1,702 g, where letting go finds its 944 g optimum in 4 s (with 3,000,000 open nodes the proof
- * took 114 rounds, 4.1 s), and of three 100-item lockers that all stopped, two are now proven (940 g in 18 s, 966 g in
- * 4 s).
+ * 4 rounds and answered 1,702 g, where letting go proves its 944 g optimum in 3.6 s, and four 100-item lockers that all
+ * stopped unproven are now proven in 3–17 s (shared/README.md, Optimisation, **Letting nodes go**).
  */
 export const maxOpenNodes = 200_000;
 

@@ -165,15 +165,13 @@ export function optimisePartyKit(
       return overLimits([`The search for a kit that fits everyone’s limits stopped (${step.reason}).`]);
     // "Every kit" only when the search's bound says so: after the model search set kits aside (`maxOpenNodes`) a kit
     // under the limit may be among them.
-    if (step.massG > capG && step.lowerBoundG <= capG)
-      return overLimits([
-        'The search for a kit that fits everyone’s limits reached its memory limit and set kits aside: those it kept weigh more than the limits allow, but one that fits may exist.',
-      ]);
     if (step.massG > capG)
       return overLimits([
-        capG < limitG
-          ? 'Every kit that keeps every device charged weighs more than the trip’s limit.'
-          : 'Every kit that keeps every device charged weighs more than the party’s limits together.',
+        step.lowerBoundG <= capG
+          ? 'The search for a kit that fits everyone’s limits reached its memory limit and set kits aside: those it kept weigh more than the limits allow, but one that fits may exist.'
+          : capG < limitG
+            ? 'Every kit that keeps every device charged weighs more than the trip’s limit.'
+            : 'Every kit that keeps every device charged weighs more than the party’s limits together.',
       ]);
     const split = bestSplit(party, step.counts, options);
     if (fits(split, step.massG)) {

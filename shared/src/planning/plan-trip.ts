@@ -282,10 +282,11 @@ export function planTrip(input: PlanningInput, options: PlanOptions = {}): PlanR
   const withExtras = options.withExtras !== false;
   const context = planningContext(input);
   const optimumShare = withExtras || pathChoicePossible(context) ? planTimeShares.optimum : 1;
-  const search = createKitSearch(context.problem, context.judge, { now, ...left(optimumShare) });
+  const optimumOptions = { now, ...left(optimumShare) };
+  const search = createKitSearch(context.problem, context.judge, optimumOptions);
   const answer = options.chooseKit
-    ? options.chooseKit(context, search, { now, ...left(optimumShare) })
-    : optimiseKit(context.problem, context.judge, { now, ...left(optimumShare) }, search);
+    ? options.chooseKit(context, search, optimumOptions)
+    : optimiseKit(context.problem, context.judge, optimumOptions, search);
   const optimumMs = now() - startMs;
   const notes = [...answer.notes];
   const stats = { ...answer.stats, optimumMs, totalMs: optimumMs };

@@ -355,8 +355,6 @@ export function runSky(
     //    and in the demand (README, Dispatch).
     if (k.stepCamp[i] === 1 && !(frozen && k.freezeBlocksDeviceTopUps)) {
       const rateW = scratch.topUpRateW;
-      // Early in a camp window a device is raised only to `earlyCampUnits` hour units, in the hour before the last to
-      // `leavingUnits`, in the last hour to its target.
       const leftH = k.stepCampLeftH[i] ?? 0;
       const units = leftH > fillBeforeLeavingH ? earlyCampUnits : leftH > lastHourH ? leavingUnits : Infinity;
       const levelH = units === Infinity ? Infinity : units * scratch.topUpUnitH;
@@ -536,13 +534,12 @@ export function runSky(
 
   /**
    * Tops device d up from store s in the current step at rate `toW` (W at the battery, on the hull, already within the
-   * store's energy above its reserve and the device's charge power): the draw and losses are the hull's at `toW`;
-   * returns the Wh it gained.
+   * store's energy above its reserve and the device's charge power): the draw and losses are the hull's at `toW`.
    */
-  function topUp(d: number, s: number, toW: number): number {
+  function topUp(d: number, s: number, toW: number): void {
     const idx = s * D + d;
     const n = k.hullCount[idx] ?? 0;
-    if (n === 0 || !(toW > 0)) return 0;
+    if (n === 0 || !(toW > 0)) return;
     const off = k.hullOffset[idx] ?? 0;
     hullFlowsAt(off, n, k.deviceChargeEff[d] ?? 1, toW, flowsAt);
     const gain = toW * dt;
@@ -556,7 +553,6 @@ export function runSky(
       ledger[row + C.toppedUpWh] = (ledger[row + C.toppedUpWh] ?? 0) + gain;
     }
     if (record?.onFlow) record.onFlow('top-up', stepIndex, s, d, gain);
-    return gain;
   }
 
   /**
